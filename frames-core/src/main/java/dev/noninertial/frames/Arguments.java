@@ -1,0 +1,122 @@
+package dev.noninertial.frames;
+
+import java.util.Locale;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+/**
+ * Refuses bad input early, with a message that names the argument, the value and the allowed range.
+ *
+ * <p>Every public entry point of the library validates its arguments through this class so that
+ * messages read the same everywhere. Nothing is ever clamped or silently repaired.
+ *
+ * <p>Thread-safe: stateless.
+ */
+public final class Arguments {
+
+    private Arguments() {
+    }
+
+    /**
+     * Refuses a null reference.
+     *
+     * @param name argument name used in the message
+     * @param value the value to check
+     * @param <T> type of the value
+     * @return {@code value}, for chaining
+     * @throws NullPointerException if {@code value} is null
+     */
+    public static <T> T nonNull(String name, T value) {
+        if (value == null) {
+            throw new NullPointerException(name + " must not be null");
+        }
+        return value;
+    }
+
+    /**
+     * Refuses NaN and infinite values.
+     *
+     * @param name argument name used in the message
+     * @param value the value to check
+     * @return {@code value}
+     * @throws IllegalArgumentException if {@code value} is not finite
+     */
+    public static double finite(String name, double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException(name + " must be finite, got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * Refuses null vectors and vectors with a NaN or infinite component.
+     *
+     * @param name argument name used in the message
+     * @param value the vector to check
+     * @return {@code value}
+     * @throws NullPointerException if {@code value} is null
+     * @throws IllegalArgumentException if a component is not finite
+     */
+    public static Vector3D finite(String name, Vector3D value) {
+        nonNull(name, value);
+        if (!Double.isFinite(value.getX()) || !Double.isFinite(value.getY()) || !Double.isFinite(value.getZ())) {
+            throw new IllegalArgumentException(name + " must have finite components, got " + vector(value));
+        }
+        return value;
+    }
+
+    /**
+     * Refuses a value outside a closed interval (NaN is refused too).
+     *
+     * @param name argument name used in the message
+     * @param value the value to check
+     * @param min smallest allowed value
+     * @param max largest allowed value
+     * @return {@code value}
+     * @throws IllegalArgumentException if {@code value} is outside [min, max] or NaN
+     */
+    public static double inRange(String name, double value, double min, double max) {
+        if (!(value >= min && value <= max)) {
+            throw new IllegalArgumentException(
+                    name + " must be in [" + min + ", " + max + "], got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * Refuses values that are not strictly positive and finite.
+     *
+     * @param name argument name used in the message
+     * @param value the value to check
+     * @return {@code value}
+     * @throws IllegalArgumentException if {@code value} is not in (0, +inf)
+     */
+    public static double positive(String name, double value) {
+        if (!(value > 0.0) || Double.isInfinite(value)) {
+            throw new IllegalArgumentException(name + " must be positive and finite, got " + value);
+        }
+        return value;
+    }
+
+    /**
+     * Returns the unit vector along a non-zero, finite axis.
+     *
+     * @param name argument name used in the message
+     * @param axis the axis to check
+     * @return the normalized axis
+     * @throws IllegalArgumentException if the axis has zero length or non-finite components
+     */
+    public static Vector3D unitAxis(String name, Vector3D axis) {
+        finite(name, axis);
+        double norm = axis.getNorm();
+        if (!(norm > 0.0) || !Double.isFinite(norm)) {
+            throw new IllegalArgumentException(
+                    name + " must be a non-zero axis (length > 0), got " + vector(axis));
+        }
+        return axis.scalarMultiply(1.0 / norm);
+    }
+
+    private static String vector(Vector3D v) {
+        return String.format(Locale.ROOT, "(%s, %s, %s)", v.getX(), v.getY(), v.getZ());
+    }
+}

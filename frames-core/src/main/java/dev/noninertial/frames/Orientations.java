@@ -1,0 +1,252 @@
+package dev.noninertial.frames;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.RotationConvention;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+/**
+ * Builds and reads orientations so that nobody has to guess a rotation convention.
+ *
+ * <p><b>Convention, everywhere in this library:</b> the orientation of a frame F in a base B is a
+ * Hipparchus {@link Rotation} whose {@code applyTo(v_B)} returns the components of the same
+ * vector in F axes ({@code v_F = R v_B}). "F is turned by angle {@code a} about axis {@code n}"
+ * means F's axes are B's axes turned by {@code +a} (right-hand rule) about {@code n}; a vector
+ * fixed in B then appears turned by {@code -a} in F.
+ *
+ * <p>Yaw, pitch and roll are the aerospace z-y-x sequence: start from B, turn by yaw about z,
+ * then by pitch about the new y, then by roll about the new x. For a local-level NED base they
+ * are heading, elevation and bank of a body frame with x forward, y right, z down.
+ *
+ * <p>Thread-safe: stateless.
+ */
+public final class Orientations {
+
+    /** Largest allowed |q| - 1 for a quaternion said to be unit. */
+    public static final double QUATERNION_TOLERANCE = 1e-6;
+
+    /** Largest allowed element of M M^T - I for a matrix said to be orthonormal. */
+    public static final double MATRIX_TOLERANCE = 1e-9;
+
+    private Orientations() {
+    }
+
+    /** @return the orientation of a frame aligned with its base */
+    public static Rotation identity() {
+        return Rotation.IDENTITY;
+    }
+
+    /**
+     * Orientation of a frame turned by {@code angle} (right-hand rule) about {@code axis}.
+     *
+     * @param axis rotation axis in base components, any non-zero length
+     * @param angle turn angle (rad)
+     * @return orientation mapping base components to frame components
+     * @throws IllegalArgumentException for a zero or non-finite axis or a non-finite angle
+     */
+    public static Rotation aboutAxis(Vector3D axis, double angle) {
+        Vector3D n = Arguments.unitAxis("axis", axis);
+        Arguments.finite("angle", angle);
+        return new Rotation(n, angle, RotationConvention.FRAME_TRANSFORM);
+    }
+
+    /**
+     * Orientation from a unit quaternion, scalar part first, in the convention above (the
+     * quaternion of a frame turned by {@code a} about unit {@code n} is
+     * {@code (cos(a/2), sin(a/2) n)}).
+     *
+     * @param q0 scalar part
+     * @param q1 vector part x
+     * @param q2 vector part y
+     * @param q3 vector part z
+     * @return orientation mapping base components to frame components
+     * @throws IllegalArgumentException if a part is not finite or the norm differs from 1 by more
+     *         than {@link #QUATERNION_TOLERANCE}
+     */
+    public static Rotation fromQuaternion(double q0, double q1, double q2, double q3) {
+        Arguments.finite("q0", q0);
+        Arguments.finite("q1", q1);
+        Arguments.finite("q2", q2);
+        Arguments.finite("q3", q3);
+        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
+        if (!(Math.abs(norm - 1.0) <= QUATERNION_TOLERANCE)) {
+            throw new IllegalArgumentException("quaternion must be unit (|norm - 1| <= " + QUATERNION_TOLERANCE
+                    + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3 + ") with norm " + norm);
+        }
+        return new Rotation(q0, q1, q2, q3, true);
+    }
+
+    /**
+     * Reads back the unit quaternion, scalar part first, with a non-negative scalar part.
+     *
+     * @param orientation orientation mapping base components to frame components
+     * @return {q0, q1, q2, q3}
+     */
+    public static double[] toQuaternion(Rotation orientation) {
+        Arguments.nonNull("orientation", orientation);
+        double s = orientation.getQ0() < 0 ? -1.0 : 1.0;
+        return new double[] {s * orientation.getQ0(), s * orientation.getQ1(), s * orientation.getQ2(),
+            s * orientation.getQ3()};
+    }
+
+    /**
+     * Orientation from a direction-cosine matrix {@code M} with {@code v_F = M v_B}: row i holds
+     * the frame's axis i in base components.
+     *
+     * @param matrix 3x3 matrix, orthonormal with determinant +1
+     * @return orientation mapping base components to frame components
+     * @throws IllegalArgumentException if the matrix is not 3x3, has non-finite elements, is not
+     *         orthonormal within {@link #MATRIX_TOLERANCE}, or is a reflection
+     */
+    public static Rotation fromMatrix(double[][] matrix) {
+        Arguments.nonNull("matrix", matrix);
+        if (matrix.length != 3) {
+            throw new IllegalArgumentException("matrix must have 3 rows, got " + matrix.length);
+        }
+        for (int i = 0; i < 3; i++) {
+            Arguments.nonNull("matrix[" + i + "]", matrix[i]);
+            if (matrix[i].length != 3) {
+                throw new IllegalArgumentException("matrix row " + i + " must have 3 columns, got "
+                        + matrix[i].length);
+            }
+            for (int j = 0; j < 3; j++) {
+                Arguments.finite("matrix[" + i + "][" + j + "]", matrix[i][j]);
+            }
+        }
+        double worst = 0;
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                double dot = matrix[i][0] * matrix[j][0] + matrix[i][1] * matrix[j][1] + matrix[i][2] * matrix[j][2];
+                worst = Math.max(worst, Math.abs(dot - (i == j ? 1.0 : 0.0)));
+            }
+        }
+        if (!(worst <= MATRIX_TOLERANCE)) {
+            throw new IllegalArgumentException("matrix must be orthonormal (|M M^T - I| <= " + MATRIX_TOLERANCE
+                    + " elementwise), worst deviation " + worst);
+        }
+        double det = matrix[0][0] * (matrix[1][1] * matrix[2][2] - matrix[1][2] * matrix[2][1])
+                - matrix[0][1] * (matrix[1][0] * matrix[2][2] - matrix[1][2] * matrix[2][0])
+                + matrix[0][2] * (matrix[1][0] * matrix[2][1] - matrix[1][1] * matrix[2][0]);
+        if (!(det > 0)) {
+            throw new IllegalArgumentException("matrix must be a rotation (determinant +1), got determinant " + det);
+        }
+        return fromOrthonormalRows(matrix[0][0], matrix[0][1], matrix[0][2],
+                matrix[1][0], matrix[1][1], matrix[1][2],
+                matrix[2][0], matrix[2][1], matrix[2][2]);
+    }
+
+    /**
+     * Reads back the direction-cosine matrix {@code M} with {@code v_F = M v_B}.
+     *
+     * @param orientation orientation mapping base components to frame components
+     * @return a new 3x3 array
+     */
+    public static double[][] toMatrix(Rotation orientation) {
+        Arguments.nonNull("orientation", orientation);
+        return orientation.getMatrix();
+    }
+
+    /**
+     * Orientation from yaw, pitch and roll (aerospace z-y-x sequence, see the class comment).
+     *
+     * @param yaw turn about the base z axis (rad)
+     * @param pitch then about the new y axis (rad)
+     * @param roll then about the new x axis (rad)
+     * @return orientation mapping base components to frame components
+     * @throws IllegalArgumentException if an angle is not finite
+     */
+    public static Rotation fromYawPitchRoll(double yaw, double pitch, double roll) {
+        Arguments.finite("yaw", yaw);
+        Arguments.finite("pitch", pitch);
+        Arguments.finite("roll", roll);
+        double cy = Math.cos(0.5 * yaw);
+        double sy = Math.sin(0.5 * yaw);
+        double cp = Math.cos(0.5 * pitch);
+        double sp = Math.sin(0.5 * pitch);
+        double cr = Math.cos(0.5 * roll);
+        double sr = Math.sin(0.5 * roll);
+        // q = q_yaw * q_pitch * q_roll (Hamilton product, frame turns applied in sequence)
+        return new Rotation(
+                cr * cp * cy + sr * sp * sy,
+                sr * cp * cy - cr * sp * sy,
+                cr * sp * cy + sr * cp * sy,
+                cr * cp * sy - sr * sp * cy,
+                false);
+    }
+
+    /**
+     * Reads back yaw, pitch and roll (aerospace z-y-x sequence). Pitch is in [-pi/2, pi/2], yaw
+     * and roll in (-pi, pi]. At pitch = +-pi/2 yaw and roll are not separable; the whole turn about
+     * the vertical is then reported as yaw and roll is 0.
+     *
+     * @param orientation orientation mapping base components to frame components
+     * @return {yaw, pitch, roll} (rad)
+     */
+    public static double[] toYawPitchRoll(Rotation orientation) {
+        Arguments.nonNull("orientation", orientation);
+        double[][] m = orientation.getMatrix();
+        double horizontal = Math.hypot(m[0][0], m[0][1]);
+        double pitch = Math.atan2(-m[0][2], horizontal);
+        if (horizontal < 1e-12) {
+            // gimbal lock: m[1][0] = -sin(yaw - +-roll) ... report the turn as yaw with roll = 0
+            double yaw = Math.atan2(-m[1][0], m[1][1]);
+            return new double[] {yaw, pitch, 0.0};
+        }
+        return new double[] {Math.atan2(m[0][1], m[0][0]), pitch, Math.atan2(m[1][2], m[2][2])};
+    }
+
+    /**
+     * Reads back the rotation vector: axis times angle, angle in [0, pi].
+     *
+     * @param orientation orientation mapping base components to frame components
+     * @return axis * angle (rad) such that {@code aboutAxis(axis, angle)} rebuilds the orientation
+     */
+    public static Vector3D toRotationVector(Rotation orientation) {
+        Arguments.nonNull("orientation", orientation);
+        double[] q = toQuaternion(orientation);
+        double s = Math.sqrt(q[1] * q[1] + q[2] * q[2] + q[3] * q[3]);
+        if (s == 0.0) {
+            return Vector3D.ZERO;
+        }
+        double angle = 2.0 * Math.atan2(s, q[0]);
+        return new Vector3D(angle / s, new Vector3D(q[1], q[2], q[3]));
+    }
+
+    /**
+     * Converts orthonormal matrix rows to a rotation (Shepperd's method, stable for all angles).
+     */
+    static Rotation fromOrthonormalRows(double m00, double m01, double m02, double m10, double m11, double m12,
+                                        double m20, double m21, double m22) {
+        // Hipparchus matrix of quaternion q: m01 = 2(q1q2 + q0q3), m10 = 2(q1q2 - q0q3), ...
+        double trace = m00 + m11 + m22;
+        double q0;
+        double q1;
+        double q2;
+        double q3;
+        if (trace > -0.19) {
+            q0 = 0.5 * Math.sqrt(trace + 1.0);
+            double inv = 0.25 / q0;
+            q1 = inv * (m12 - m21);
+            q2 = inv * (m20 - m02);
+            q3 = inv * (m01 - m10);
+        } else if (m00 > -0.19) {
+            q1 = 0.5 * Math.sqrt(m00 - m11 - m22 + 1.0);
+            double inv = 0.25 / q1;
+            q0 = inv * (m12 - m21);
+            q2 = inv * (m01 + m10);
+            q3 = inv * (m02 + m20);
+        } else if (m11 > -0.19) {
+            q2 = 0.5 * Math.sqrt(m11 - m00 - m22 + 1.0);
+            double inv = 0.25 / q2;
+            q0 = inv * (m20 - m02);
+            q1 = inv * (m01 + m10);
+            q3 = inv * (m12 + m21);
+        } else {
+            q3 = 0.5 * Math.sqrt(m22 - m00 - m11 + 1.0);
+            double inv = 0.25 / q3;
+            q0 = inv * (m01 - m10);
+            q1 = inv * (m02 + m20);
+            q2 = inv * (m12 + m21);
+        }
+        return new Rotation(q0, q1, q2, q3, true);
+    }
+}

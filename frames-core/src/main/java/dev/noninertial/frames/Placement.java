@@ -1,0 +1,711 @@
+package dev.noninertial.frames;
+
+import java.io.Serializable;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+/**
+ * Where a frame F sits in a base frame B at one instant, with all rates.
+ *
+ * <h2>Conventions</h2>
+ * SI units, right-handed axes.
+ * <ul>
+ *   <li>{@code o, o', o''}: position, velocity and acceleration of F's origin seen from B,
+ *       resolved in B axes (m, m/s, m/s^2).</li>
+ *   <li>{@code R}: orientation, maps B components to F components: {@code v_F = R v_B}.
+ *       {@link #orientation()} returns it as a Hipparchus {@link Rotation} whose
+ *       {@code applyTo} performs exactly this map; {@link #vectorFromBase(Vector3D)} and
+ *       {@link #vectorToBase(Vector3D)} apply it without any convention to remember.</li>
+ *   <li>{@code w}: angular velocity of F relative to B, resolved in F axes (rad/s).</li>
+ *   <li>{@code al = dw/dt}: angular acceleration of F relative to B (the same vector whether the
+ *       derivative is taken in B or in F), resolved in F axes (rad/s^2).</li>
+ * </ul>
+ * A point state (r, v, a) seen in F converts to B by
+ * <pre>
+ *   r_B = o + R^T r
+ *   v_B = o' + R^T (v + w x r)
+ *   a_B = o'' + R^T (a + al x r + 2 w x v + w x (w x r))
+ * </pre>
+ * and back by
+ * <pre>
+ *   a_F = R (a_B - o'') - al x r - 2 w x v - w x (w x r)
+ * </pre>
+ * whose last four terms are the frame, Euler, Coriolis and centrifugal accelerations
+ * ({@link #fictitious(PointState)}).
+ *
+ * <p>All computations run on primitive doubles and allocate only their result. The bulk methods
+ * {@link #toBase(double[], int, double[], int, int)} and
+ * {@link #fromBase(double[], int, double[], int, int)} allocate nothing at all.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class Placement implements Serializable {
+
+    private static final long serialVersionUID = 1L;
+
+    private static final Placement IDENTITY = new Placement(
+            0, 0, 0, 0, 0, 0, 0, 0, 0,
+            1, 0, 0, 0, 1, 0, 0, 0, 1,
+            0, 0, 0, 0, 0, 0);
+
+    /** Tolerance on |q| - 1 for quaternions given to the factories. */
+    static final double UNIT_TOLERANCE = 1e-9;
+
+    // origin of F in B, resolved in B
+    final double ox;
+    final double oy;
+    final double oz;
+    final double ovx;
+    final double ovy;
+    final double ovz;
+    final double oax;
+    final double oay;
+    final double oaz;
+    // R, row-major, maps B components to F components
+    final double r00;
+    final double r01;
+    final double r02;
+    final double r10;
+    final double r11;
+    final double r12;
+    final double r20;
+    final double r21;
+    final double r22;
+    // angular velocity and acceleration of F relative to B, resolved in F
+    final double wx;
+    final double wy;
+    final double wz;
+    final double alx;
+    final double aly;
+    final double alz;
+
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    Placement(double ox, double oy, double oz, double ovx, double ovy, double ovz,
+              double oax, double oay, double oaz,
+              double r00, double r01, double r02, double r10, double r11, double r12,
+              double r20, double r21, double r22,
+              double wx, double wy, double wz, double alx, double aly, double alz) {
+        this.ox = ox;
+        this.oy = oy;
+        this.oz = oz;
+        this.ovx = ovx;
+        this.ovy = ovy;
+        this.ovz = ovz;
+        this.oax = oax;
+        this.oay = oay;
+        this.oaz = oaz;
+        this.r00 = r00;
+        this.r01 = r01;
+        this.r02 = r02;
+        this.r10 = r10;
+        this.r11 = r11;
+        this.r12 = r12;
+        this.r20 = r20;
+        this.r21 = r21;
+        this.r22 = r22;
+        this.wx = wx;
+        this.wy = wy;
+        this.wz = wz;
+        this.alx = alx;
+        this.aly = aly;
+        this.alz = alz;
+    }
+
+    /** @return the placement of a frame in itself: zero offset, identity orientation, no rates */
+    public static Placement identity() {
+        return IDENTITY;
+    }
+
+    /**
+     * A placement from vectors and a Hipparchus rotation.
+     *
+     * @param origin position o of F's origin seen from B, in B axes (m)
+     * @param originVelocity o' in B axes (m/s)
+     * @param originAcceleration o'' in B axes (m/s^2)
+     * @param orientation R, whose {@code applyTo} maps B components to F components
+     * @param angularVelocity w of F relative to B, in F axes (rad/s)
+     * @param angularAcceleration al = dw/dt, in F axes (rad/s^2)
+     * @return the placement
+     * @throws IllegalArgumentException if a component is NaN or infinite
+     */
+    public static Placement of(Vector3D origin, Vector3D originVelocity, Vector3D originAcceleration,
+                               Rotation orientation, Vector3D angularVelocity, Vector3D angularAcceleration) {
+        Arguments.finite("origin", origin);
+        Arguments.finite("originVelocity", originVelocity);
+        Arguments.finite("originAcceleration", originAcceleration);
+        Arguments.nonNull("orientation", orientation);
+        Arguments.finite("angularVelocity", angularVelocity);
+        Arguments.finite("angularAcceleration", angularAcceleration);
+        return ofQuaternion(origin.getX(), origin.getY(), origin.getZ(),
+                originVelocity.getX(), originVelocity.getY(), originVelocity.getZ(),
+                originAcceleration.getX(), originAcceleration.getY(), originAcceleration.getZ(),
+                orientation.getQ0(), orientation.getQ1(), orientation.getQ2(), orientation.getQ3(),
+                angularVelocity.getX(), angularVelocity.getY(), angularVelocity.getZ(),
+                angularAcceleration.getX(), angularAcceleration.getY(), angularAcceleration.getZ());
+    }
+
+    /**
+     * A placement with a fixed offset and orientation and no rates.
+     *
+     * @param origin position of F's origin in B axes (m)
+     * @param orientation R, whose {@code applyTo} maps B components to F components
+     * @return the placement
+     */
+    public static Placement fixed(Vector3D origin, Rotation orientation) {
+        return of(origin, Vector3D.ZERO, Vector3D.ZERO, orientation, Vector3D.ZERO, Vector3D.ZERO);
+    }
+
+    /**
+     * Low-level factory on primitives for motion implementations: the orientation is a unit
+     * quaternion (scalar first) in the same convention as Hipparchus {@link Rotation}, so that it
+     * maps B components to F components.
+     *
+     * @param ox origin x in B (m)
+     * @param oy origin y in B (m)
+     * @param oz origin z in B (m)
+     * @param ovx origin velocity x in B (m/s)
+     * @param ovy origin velocity y in B (m/s)
+     * @param ovz origin velocity z in B (m/s)
+     * @param oax origin acceleration x in B (m/s^2)
+     * @param oay origin acceleration y in B (m/s^2)
+     * @param oaz origin acceleration z in B (m/s^2)
+     * @param q0 quaternion scalar part
+     * @param q1 quaternion vector part x
+     * @param q2 quaternion vector part y
+     * @param q3 quaternion vector part z
+     * @param wx angular velocity x in F (rad/s)
+     * @param wy angular velocity y in F (rad/s)
+     * @param wz angular velocity z in F (rad/s)
+     * @param alx angular acceleration x in F (rad/s^2)
+     * @param aly angular acceleration y in F (rad/s^2)
+     * @param alz angular acceleration z in F (rad/s^2)
+     * @return the placement
+     * @throws IllegalArgumentException if a value is not finite or the quaternion is not unit
+     *         within 1e-9
+     */
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    public static Placement ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
+                                         double oax, double oay, double oaz,
+                                         double q0, double q1, double q2, double q3,
+                                         double wx, double wy, double wz, double alx, double aly, double alz) {
+        double sum = ox + oy + oz + ovx + ovy + ovz + oax + oay + oaz + wx + wy + wz + alx + aly + alz;
+        double n2 = q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3;
+        if (!Double.isFinite(sum) || !(Math.abs(n2 - 1.0) <= 2 * UNIT_TOLERANCE)) {
+            refuseComponents(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3,
+                    wx, wy, wz, alx, aly, alz);
+        }
+        double q0q0 = q0 * q0;
+        double q0q1 = q0 * q1;
+        double q0q2 = q0 * q2;
+        double q0q3 = q0 * q3;
+        double q1q1 = q1 * q1;
+        double q1q2 = q1 * q2;
+        double q1q3 = q1 * q3;
+        double q2q2 = q2 * q2;
+        double q2q3 = q2 * q3;
+        double q3q3 = q3 * q3;
+        // same matrix as Hipparchus Rotation.getMatrix(): applyTo(u) = M u
+        return new Placement(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz,
+                2.0 * (q0q0 + q1q1) - 1.0, 2.0 * (q1q2 + q0q3), 2.0 * (q1q3 - q0q2),
+                2.0 * (q1q2 - q0q3), 2.0 * (q0q0 + q2q2) - 1.0, 2.0 * (q2q3 + q0q1),
+                2.0 * (q1q3 + q0q2), 2.0 * (q2q3 - q0q1), 2.0 * (q0q0 + q3q3) - 1.0,
+                wx, wy, wz, alx, aly, alz);
+    }
+
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static void refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
+                                         double oax, double oay, double oaz,
+                                         double q0, double q1, double q2, double q3,
+                                         double wx, double wy, double wz, double alx, double aly, double alz) {
+        Arguments.finite("origin", new Vector3D(ox, oy, oz));
+        Arguments.finite("originVelocity", new Vector3D(ovx, ovy, ovz));
+        Arguments.finite("originAcceleration", new Vector3D(oax, oay, oaz));
+        Arguments.finite("angularVelocity", new Vector3D(wx, wy, wz));
+        Arguments.finite("angularAcceleration", new Vector3D(alx, aly, alz));
+        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
+        if (Math.abs(norm * norm - 1.0) <= 2 * UNIT_TOLERANCE) {
+            return; // all finite: only the quick sum overflowed
+        }
+        throw new IllegalArgumentException("quaternion must be finite with norm 1 (within " + UNIT_TOLERANCE
+                + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3 + ") with norm " + norm);
+    }
+
+    // ------------------------------------------------------------------ accessors
+
+    /** @return position o of F's origin seen from B, resolved in B (m) */
+    public Vector3D origin() {
+        return new Vector3D(ox, oy, oz);
+    }
+
+    /** @return velocity o' of F's origin seen from B, resolved in B (m/s) */
+    public Vector3D originVelocity() {
+        return new Vector3D(ovx, ovy, ovz);
+    }
+
+    /** @return acceleration o'' of F's origin seen from B, resolved in B (m/s^2) */
+    public Vector3D originAcceleration() {
+        return new Vector3D(oax, oay, oaz);
+    }
+
+    /**
+     * The orientation R of F in B.
+     *
+     * @return a Hipparchus rotation whose {@code applyTo} maps B components to F components
+     */
+    public Rotation orientation() {
+        return Orientations.fromOrthonormalRows(r00, r01, r02, r10, r11, r12, r20, r21, r22);
+    }
+
+    /**
+     * The orientation as a direction-cosine matrix.
+     *
+     * @return a new 3x3 array M with {@code v_F = M v_B}; row i holds F's axis i in B components
+     */
+    public double[][] orientationMatrix() {
+        return new double[][] {{r00, r01, r02}, {r10, r11, r12}, {r20, r21, r22}};
+    }
+
+    /** @return angular velocity w of F relative to B, resolved in F (rad/s) */
+    public Vector3D angularVelocity() {
+        return new Vector3D(wx, wy, wz);
+    }
+
+    /** @return angular acceleration al of F relative to B, resolved in F (rad/s^2) */
+    public Vector3D angularAcceleration() {
+        return new Vector3D(alx, aly, alz);
+    }
+
+    // ------------------------------------------------------------------ copies
+
+    /**
+     * A copy with another origin motion.
+     *
+     * @param origin o in B (m)
+     * @param originVelocity o' in B (m/s)
+     * @param originAcceleration o'' in B (m/s^2)
+     * @return the copy
+     */
+    public Placement withOrigin(Vector3D origin, Vector3D originVelocity, Vector3D originAcceleration) {
+        Arguments.finite("origin", origin);
+        Arguments.finite("originVelocity", originVelocity);
+        Arguments.finite("originAcceleration", originAcceleration);
+        return new Placement(origin.getX(), origin.getY(), origin.getZ(),
+                originVelocity.getX(), originVelocity.getY(), originVelocity.getZ(),
+                originAcceleration.getX(), originAcceleration.getY(), originAcceleration.getZ(),
+                r00, r01, r02, r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz);
+    }
+
+    /**
+     * A copy with another rotational motion.
+     *
+     * @param orientation R, whose {@code applyTo} maps B components to F components
+     * @param angularVelocity w in F (rad/s)
+     * @param angularAcceleration al in F (rad/s^2)
+     * @return the copy
+     */
+    public Placement withRotation(Rotation orientation, Vector3D angularVelocity, Vector3D angularAcceleration) {
+        return of(origin(), originVelocity(), originAcceleration(), orientation, angularVelocity,
+                angularAcceleration);
+    }
+
+    // ------------------------------------------------------------------ algebra
+
+    /**
+     * Composes placements: this is F in B, {@code inner} is G in F; the result is G in B.
+     *
+     * <pre>
+     *   R_GB = R_GF R_FB,  w_GB = w_GF + R_GF w_FB,
+     *   al_GB = al_GF + R_GF al_FB - w_GF x (R_GF w_FB)
+     * </pre>
+     * and G's origin is converted to B as a point state of F.
+     *
+     * @param inner placement of G in F
+     * @return placement of G in B
+     */
+    public Placement then(Placement inner) {
+        Arguments.nonNull("inner", inner);
+        Placement q = inner;
+        // origin of G: point (q.o, q.o', q.o'') of F, converted to B
+        double px = q.ox;
+        double py = q.oy;
+        double pz = q.oz;
+        double pvx = q.ovx;
+        double pvy = q.ovy;
+        double pvz = q.ovz;
+        // w x p
+        double cx = wy * pz - wz * py;
+        double cy = wz * px - wx * pz;
+        double cz = wx * py - wy * px;
+        double vfx = pvx + cx;
+        double vfy = pvy + cy;
+        double vfz = pvz + cz;
+        // al x p + 2 w x pv + w x (w x p)
+        double afx = q.oax + (aly * pz - alz * py) + 2 * (wy * pvz - wz * pvy) + (wy * cz - wz * cy);
+        double afy = q.oay + (alz * px - alx * pz) + 2 * (wz * pvx - wx * pvz) + (wz * cx - wx * cz);
+        double afz = q.oaz + (alx * py - aly * px) + 2 * (wx * pvy - wy * pvx) + (wx * cy - wy * cx);
+
+        // R_GB = Rq * Rp
+        double m00 = q.r00 * r00 + q.r01 * r10 + q.r02 * r20;
+        double m01 = q.r00 * r01 + q.r01 * r11 + q.r02 * r21;
+        double m02 = q.r00 * r02 + q.r01 * r12 + q.r02 * r22;
+        double m10 = q.r10 * r00 + q.r11 * r10 + q.r12 * r20;
+        double m11 = q.r10 * r01 + q.r11 * r11 + q.r12 * r21;
+        double m12 = q.r10 * r02 + q.r11 * r12 + q.r12 * r22;
+        double m20 = q.r20 * r00 + q.r21 * r10 + q.r22 * r20;
+        double m21 = q.r20 * r01 + q.r21 * r11 + q.r22 * r21;
+        double m22 = q.r20 * r02 + q.r21 * r12 + q.r22 * r22;
+
+        // Rq w and Rq al
+        double twx = q.r00 * wx + q.r01 * wy + q.r02 * wz;
+        double twy = q.r10 * wx + q.r11 * wy + q.r12 * wz;
+        double twz = q.r20 * wx + q.r21 * wy + q.r22 * wz;
+        double tax = q.r00 * alx + q.r01 * aly + q.r02 * alz;
+        double tay = q.r10 * alx + q.r11 * aly + q.r12 * alz;
+        double taz = q.r20 * alx + q.r21 * aly + q.r22 * alz;
+
+        return new Placement(
+                ox + r00 * px + r10 * py + r20 * pz,
+                oy + r01 * px + r11 * py + r21 * pz,
+                oz + r02 * px + r12 * py + r22 * pz,
+                ovx + r00 * vfx + r10 * vfy + r20 * vfz,
+                ovy + r01 * vfx + r11 * vfy + r21 * vfz,
+                ovz + r02 * vfx + r12 * vfy + r22 * vfz,
+                oax + r00 * afx + r10 * afy + r20 * afz,
+                oay + r01 * afx + r11 * afy + r21 * afz,
+                oaz + r02 * afx + r12 * afy + r22 * afz,
+                m00, m01, m02, m10, m11, m12, m20, m21, m22,
+                q.wx + twx, q.wy + twy, q.wz + twz,
+                q.alx + tax - (q.wy * twz - q.wz * twy),
+                q.aly + tay - (q.wz * twx - q.wx * twz),
+                q.alz + taz - (q.wx * twy - q.wy * twx));
+    }
+
+    /**
+     * The inverse placement: this is F in B, the result is B in F.
+     *
+     * @return placement of B in F
+     */
+    public Placement inverse() {
+        // B's origin seen from F: r = -R o
+        double rx = -(r00 * ox + r01 * oy + r02 * oz);
+        double ry = -(r10 * ox + r11 * oy + r12 * oz);
+        double rz = -(r20 * ox + r21 * oy + r22 * oz);
+        // v = -R o' - w x r
+        double vx = -(r00 * ovx + r01 * ovy + r02 * ovz) - (wy * rz - wz * ry);
+        double vy = -(r10 * ovx + r11 * ovy + r12 * ovz) - (wz * rx - wx * rz);
+        double vz = -(r20 * ovx + r21 * ovy + r22 * ovz) - (wx * ry - wy * rx);
+        // a = -R o'' - al x r - 2 w x v - w x (w x r)
+        double cx = wy * rz - wz * ry;
+        double cy = wz * rx - wx * rz;
+        double cz = wx * ry - wy * rx;
+        double ax = -(r00 * oax + r01 * oay + r02 * oaz) - (aly * rz - alz * ry)
+                - 2 * (wy * vz - wz * vy) - (wy * cz - wz * cy);
+        double ay = -(r10 * oax + r11 * oay + r12 * oaz) - (alz * rx - alx * rz)
+                - 2 * (wz * vx - wx * vz) - (wz * cx - wx * cz);
+        double az = -(r20 * oax + r21 * oay + r22 * oaz) - (alx * ry - aly * rx)
+                - 2 * (wx * vy - wy * vx) - (wx * cy - wy * cx);
+        // R' = R^T ; w' = -R^T w ; al' = -R^T al (resolved in B)
+        return new Placement(rx, ry, rz, vx, vy, vz, ax, ay, az,
+                r00, r10, r20, r01, r11, r21, r02, r12, r22,
+                -(r00 * wx + r10 * wy + r20 * wz),
+                -(r01 * wx + r11 * wy + r21 * wz),
+                -(r02 * wx + r12 * wy + r22 * wz),
+                -(r00 * alx + r10 * aly + r20 * alz),
+                -(r01 * alx + r11 * aly + r21 * alz),
+                -(r02 * alx + r12 * aly + r22 * alz));
+    }
+
+    // ------------------------------------------------------------------ conversions
+
+    /**
+     * Converts a point state seen in F to the same point seen in B (all terms included).
+     *
+     * @param stateInFrame state seen in and resolved in F
+     * @return state seen in and resolved in B
+     */
+    public PointState toBase(PointState stateInFrame) {
+        Arguments.nonNull("stateInFrame", stateInFrame);
+        PointState s = stateInFrame;
+        double cx = wy * s.z - wz * s.y;
+        double cy = wz * s.x - wx * s.z;
+        double cz = wx * s.y - wy * s.x;
+        double vfx = s.vx + cx;
+        double vfy = s.vy + cy;
+        double vfz = s.vz + cz;
+        double afx = s.ax + (aly * s.z - alz * s.y) + 2 * (wy * s.vz - wz * s.vy) + (wy * cz - wz * cy);
+        double afy = s.ay + (alz * s.x - alx * s.z) + 2 * (wz * s.vx - wx * s.vz) + (wz * cx - wx * cz);
+        double afz = s.az + (alx * s.y - aly * s.x) + 2 * (wx * s.vy - wy * s.vx) + (wx * cy - wy * cx);
+        return new PointState(
+                ox + r00 * s.x + r10 * s.y + r20 * s.z,
+                oy + r01 * s.x + r11 * s.y + r21 * s.z,
+                oz + r02 * s.x + r12 * s.y + r22 * s.z,
+                ovx + r00 * vfx + r10 * vfy + r20 * vfz,
+                ovy + r01 * vfx + r11 * vfy + r21 * vfz,
+                ovz + r02 * vfx + r12 * vfy + r22 * vfz,
+                oax + r00 * afx + r10 * afy + r20 * afz,
+                oay + r01 * afx + r11 * afy + r21 * afz,
+                oaz + r02 * afx + r12 * afy + r22 * afz);
+    }
+
+    /**
+     * Converts a point state seen in B to the same point seen in F (all terms included).
+     *
+     * @param stateInBase state seen in and resolved in B
+     * @return state seen in and resolved in F
+     */
+    public PointState fromBase(PointState stateInBase) {
+        Arguments.nonNull("stateInBase", stateInBase);
+        PointState s = stateInBase;
+        double dx = s.x - ox;
+        double dy = s.y - oy;
+        double dz = s.z - oz;
+        double rx = r00 * dx + r01 * dy + r02 * dz;
+        double ry = r10 * dx + r11 * dy + r12 * dz;
+        double rz = r20 * dx + r21 * dy + r22 * dz;
+        double cx = wy * rz - wz * ry;
+        double cy = wz * rx - wx * rz;
+        double cz = wx * ry - wy * rx;
+        double ux = s.vx - ovx;
+        double uy = s.vy - ovy;
+        double uz = s.vz - ovz;
+        double vx = r00 * ux + r01 * uy + r02 * uz - cx;
+        double vy = r10 * ux + r11 * uy + r12 * uz - cy;
+        double vz = r20 * ux + r21 * uy + r22 * uz - cz;
+        double bx = s.ax - oax;
+        double by = s.ay - oay;
+        double bz = s.az - oaz;
+        return new PointState(rx, ry, rz, vx, vy, vz,
+                r00 * bx + r01 * by + r02 * bz - (aly * rz - alz * ry) - 2 * (wy * vz - wz * vy) - (wy * cz - wz * cy),
+                r10 * bx + r11 * by + r12 * bz - (alz * rx - alx * rz) - 2 * (wz * vx - wx * vz) - (wz * cx - wx * cz),
+                r20 * bx + r21 * by + r22 * bz - (alx * ry - aly * rx) - 2 * (wx * vy - wy * vx) - (wx * cy - wy * cx));
+    }
+
+    /**
+     * Bulk conversion F to B on primitive arrays, allocating nothing. Each state occupies
+     * {@link PointState#COMPONENTS} consecutive doubles: x, y, z, vx, vy, vz, ax, ay, az. Source
+     * and target may be the same array (in-place conversion) when the offsets are equal.
+     *
+     * @param source states seen in F
+     * @param sourceOffset index of the first state's x in {@code source}
+     * @param target receives states seen in B
+     * @param targetOffset index of the first state's x in {@code target}
+     * @param count number of states
+     * @throws IllegalArgumentException if the ranges do not fit the arrays
+     */
+    public void toBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
+        checkBulk(source, sourceOffset, target, targetOffset, count);
+        for (int k = 0; k < count; k++) {
+            int i = sourceOffset + k * PointState.COMPONENTS;
+            int j = targetOffset + k * PointState.COMPONENTS;
+            double x = source[i];
+            double y = source[i + 1];
+            double z = source[i + 2];
+            double vx = source[i + 3];
+            double vy = source[i + 4];
+            double vz = source[i + 5];
+            double ax = source[i + 6];
+            double ay = source[i + 7];
+            double az = source[i + 8];
+            double cx = wy * z - wz * y;
+            double cy = wz * x - wx * z;
+            double cz = wx * y - wy * x;
+            double vfx = vx + cx;
+            double vfy = vy + cy;
+            double vfz = vz + cz;
+            double afx = ax + (aly * z - alz * y) + 2 * (wy * vz - wz * vy) + (wy * cz - wz * cy);
+            double afy = ay + (alz * x - alx * z) + 2 * (wz * vx - wx * vz) + (wz * cx - wx * cz);
+            double afz = az + (alx * y - aly * x) + 2 * (wx * vy - wy * vx) + (wx * cy - wy * cx);
+            target[j] = ox + r00 * x + r10 * y + r20 * z;
+            target[j + 1] = oy + r01 * x + r11 * y + r21 * z;
+            target[j + 2] = oz + r02 * x + r12 * y + r22 * z;
+            target[j + 3] = ovx + r00 * vfx + r10 * vfy + r20 * vfz;
+            target[j + 4] = ovy + r01 * vfx + r11 * vfy + r21 * vfz;
+            target[j + 5] = ovz + r02 * vfx + r12 * vfy + r22 * vfz;
+            target[j + 6] = oax + r00 * afx + r10 * afy + r20 * afz;
+            target[j + 7] = oay + r01 * afx + r11 * afy + r21 * afz;
+            target[j + 8] = oaz + r02 * afx + r12 * afy + r22 * afz;
+        }
+    }
+
+    /**
+     * Bulk conversion B to F on primitive arrays, allocating nothing; layout as in
+     * {@link #toBase(double[], int, double[], int, int)}.
+     *
+     * @param source states seen in B
+     * @param sourceOffset index of the first state's x in {@code source}
+     * @param target receives states seen in F
+     * @param targetOffset index of the first state's x in {@code target}
+     * @param count number of states
+     * @throws IllegalArgumentException if the ranges do not fit the arrays
+     */
+    public void fromBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
+        checkBulk(source, sourceOffset, target, targetOffset, count);
+        for (int k = 0; k < count; k++) {
+            int i = sourceOffset + k * PointState.COMPONENTS;
+            int j = targetOffset + k * PointState.COMPONENTS;
+            double dx = source[i] - ox;
+            double dy = source[i + 1] - oy;
+            double dz = source[i + 2] - oz;
+            double ux = source[i + 3] - ovx;
+            double uy = source[i + 4] - ovy;
+            double uz = source[i + 5] - ovz;
+            double bx = source[i + 6] - oax;
+            double by = source[i + 7] - oay;
+            double bz = source[i + 8] - oaz;
+            double rx = r00 * dx + r01 * dy + r02 * dz;
+            double ry = r10 * dx + r11 * dy + r12 * dz;
+            double rz = r20 * dx + r21 * dy + r22 * dz;
+            double cx = wy * rz - wz * ry;
+            double cy = wz * rx - wx * rz;
+            double cz = wx * ry - wy * rx;
+            double vx = r00 * ux + r01 * uy + r02 * uz - cx;
+            double vy = r10 * ux + r11 * uy + r12 * uz - cy;
+            double vz = r20 * ux + r21 * uy + r22 * uz - cz;
+            target[j] = rx;
+            target[j + 1] = ry;
+            target[j + 2] = rz;
+            target[j + 3] = vx;
+            target[j + 4] = vy;
+            target[j + 5] = vz;
+            target[j + 6] = r00 * bx + r01 * by + r02 * bz - (aly * rz - alz * ry) - 2 * (wy * vz - wz * vy)
+                    - (wy * cz - wz * cy);
+            target[j + 7] = r10 * bx + r11 * by + r12 * bz - (alz * rx - alx * rz) - 2 * (wz * vx - wx * vz)
+                    - (wz * cx - wx * cz);
+            target[j + 8] = r20 * bx + r21 * by + r22 * bz - (alx * ry - aly * rx) - 2 * (wx * vy - wy * vx)
+                    - (wx * cy - wy * cx);
+        }
+    }
+
+    private static void checkBulk(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
+        Arguments.nonNull("source", source);
+        Arguments.nonNull("target", target);
+        if (count < 0) {
+            throw new IllegalArgumentException("count must be >= 0, got " + count);
+        }
+        long span = (long) count * PointState.COMPONENTS;
+        if (sourceOffset < 0 || sourceOffset + span > source.length) {
+            throw new IllegalArgumentException("sourceOffset must be in [0, " + (source.length - span)
+                    + "] for " + count + " states, got " + sourceOffset);
+        }
+        if (targetOffset < 0 || targetOffset + span > target.length) {
+            throw new IllegalArgumentException("targetOffset must be in [0, " + (target.length - span)
+                    + "] for " + count + " states, got " + targetOffset);
+        }
+        if (source == target && sourceOffset != targetOffset
+                && Math.abs((long) sourceOffset - targetOffset) < span) {
+            throw new IllegalArgumentException("source and target ranges overlap with different offsets ("
+                    + sourceOffset + " and " + targetOffset + ")");
+        }
+    }
+
+    /**
+     * The fictitious accelerations felt in F by a point with the given state seen in F.
+     * Only the position and velocity of the state are used.
+     *
+     * @param stateInFrame state seen in and resolved in F
+     * @return the four terms, resolved in F (m/s^2)
+     * @see FictitiousAccelerations
+     */
+    public FictitiousAccelerations fictitious(PointState stateInFrame) {
+        Arguments.nonNull("stateInFrame", stateInFrame);
+        PointState s = stateInFrame;
+        double cx = wy * s.z - wz * s.y;
+        double cy = wz * s.x - wx * s.z;
+        double cz = wx * s.y - wy * s.x;
+        return new FictitiousAccelerations(
+                new Vector3D(-(r00 * oax + r01 * oay + r02 * oaz),
+                        -(r10 * oax + r11 * oay + r12 * oaz),
+                        -(r20 * oax + r21 * oay + r22 * oaz)),
+                new Vector3D(-(aly * s.z - alz * s.y), -(alz * s.x - alx * s.z), -(alx * s.y - aly * s.x)),
+                new Vector3D(-2 * (wy * s.vz - wz * s.vy), -2 * (wz * s.vx - wx * s.vz), -2 * (wx * s.vy - wy * s.vx)),
+                new Vector3D(-(wy * cz - wz * cy), -(wz * cx - wx * cz), -(wx * cy - wy * cx)));
+    }
+
+    /**
+     * Converts a position from F to B: {@code o + R^T r}.
+     *
+     * @param positionInFrame position in F (m)
+     * @return position in B (m)
+     */
+    public Vector3D positionToBase(Vector3D positionInFrame) {
+        Vector3D p = vectorToBase(positionInFrame);
+        return new Vector3D(ox + p.getX(), oy + p.getY(), oz + p.getZ());
+    }
+
+    /**
+     * Converts a position from B to F: {@code R (r_B - o)}.
+     *
+     * @param positionInBase position in B (m)
+     * @return position in F (m)
+     */
+    public Vector3D positionFromBase(Vector3D positionInBase) {
+        Arguments.nonNull("positionInBase", positionInBase);
+        return vectorFromBase(new Vector3D(positionInBase.getX() - ox, positionInBase.getY() - oy,
+                positionInBase.getZ() - oz));
+    }
+
+    /**
+     * Re-resolves a free vector (force, direction, angular velocity) from F axes to B axes:
+     * {@code R^T u}. No origin or rate terms are involved.
+     *
+     * @param vectorInFrame components in F
+     * @return components in B
+     */
+    public Vector3D vectorToBase(Vector3D vectorInFrame) {
+        Arguments.nonNull("vectorInFrame", vectorInFrame);
+        double x = vectorInFrame.getX();
+        double y = vectorInFrame.getY();
+        double z = vectorInFrame.getZ();
+        return new Vector3D(r00 * x + r10 * y + r20 * z, r01 * x + r11 * y + r21 * z, r02 * x + r12 * y + r22 * z);
+    }
+
+    /**
+     * Re-resolves a free vector from B axes to F axes: {@code R u}.
+     *
+     * @param vectorInBase components in B
+     * @return components in F
+     */
+    public Vector3D vectorFromBase(Vector3D vectorInBase) {
+        Arguments.nonNull("vectorInBase", vectorInBase);
+        double x = vectorInBase.getX();
+        double y = vectorInBase.getY();
+        double z = vectorInBase.getZ();
+        return new Vector3D(r00 * x + r01 * y + r02 * z, r10 * x + r11 * y + r12 * z, r20 * x + r21 * y + r22 * z);
+    }
+
+    // ------------------------------------------------------------------ object methods
+
+    private double[] components() {
+        return new double[] {ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz,
+            r00, r01, r02, r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz};
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        if (this == other) {
+            return true;
+        }
+        if (!(other instanceof Placement)) {
+            return false;
+        }
+        return java.util.Arrays.equals(components(), ((Placement) other).components());
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Arrays.hashCode(components());
+    }
+
+    @Override
+    public String toString() {
+        double[] ypr = Orientations.toYawPitchRoll(orientation());
+        return "Placement{origin=" + Formats.vector(ox, oy, oz, "m")
+                + ", velocity=" + Formats.vector(ovx, ovy, ovz, "m/s")
+                + ", acceleration=" + Formats.vector(oax, oay, oaz, "m/s^2")
+                + ", yawPitchRoll=" + Formats.vector(Math.toDegrees(ypr[0]), Math.toDegrees(ypr[1]),
+                        Math.toDegrees(ypr[2]), "deg")
+                + ", angularVelocity=" + Formats.vector(wx, wy, wz, "rad/s")
+                + ", angularAcceleration=" + Formats.vector(alx, aly, alz, "rad/s^2") + "}";
+    }
+}

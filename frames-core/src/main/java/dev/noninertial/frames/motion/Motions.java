@@ -1,0 +1,335 @@
+package dev.noninertial.frames.motion;
+
+import java.io.Serializable;
+import java.util.Arrays;
+import java.util.List;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.Formats;
+import dev.noninertial.frames.Motion;
+import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.Placement;
+
+/**
+ * Ready-made motions of a frame F in its parent B. Every motion returns exact analytic rates
+ * (origin velocity and acceleration, angular velocity and acceleration), never numerical
+ * estimates.
+ *
+ * <p>Angles follow the library convention (see {@link Orientations}): "F turned by {@code a}
+ * about {@code n}" means F's axes are B's axes turned by {@code +a} (right-hand rule) about
+ * {@code n}, and the angular velocity of F relative to B is then {@code a' n}, resolved in F
+ * (equal to its B components, since {@code n} is the rotation axis).
+ *
+ * <p>Time {@code t} is in seconds from the user's epoch. All motions returned here are immutable,
+ * thread-safe and serializable (when the motions given to {@link #compose(Motion...)} are).
+ */
+public final class Motions {
+
+    private Motions() {
+    }
+
+    /**
+     * A frame at a fixed offset, aligned with its parent.
+     *
+     * @param offset position of F's origin in B (m)
+     * @return the motion
+     */
+    public static Motion fixed(Vector3D offset) {
+        return fixed(offset, Rotation.IDENTITY);
+    }
+
+    /**
+     * A frame at a fixed offset and orientation.
+     *
+     * @param offset position of F's origin in B (m)
+     * @param orientation orientation of F, mapping B components to F components
+     * @return the motion
+     */
+    public static Motion fixed(Vector3D offset, Rotation orientation) {
+        return new Fixed(Placement.fixed(offset, orientation));
+    }
+
+    /**
+     * Constant spin about a fixed axis through B's origin: angle {@code angleAtZero + rate t}.
+     *
+     * @param axis spin axis in B (any non-zero length)
+     * @param angleAtZero angle at t = 0 (rad)
+     * @param rate spin rate (rad/s), positive by the right-hand rule about {@code axis}
+     * @return the motion
+     */
+    public static Motion spin(Vector3D axis, double angleAtZero, double rate) {
+        return spinUp(axis, angleAtZero, rate, 0.0);
+    }
+
+    /**
+     * Spin with constant angular acceleration about a fixed axis through B's origin:
+     * angle {@code angleAtZero + rateAtZero t + angularAcceleration t^2 / 2}.
+     *
+     * @param axis spin axis in B (any non-zero length)
+     * @param angleAtZero angle at t = 0 (rad)
+     * @param rateAtZero spin rate at t = 0 (rad/s)
+     * @param angularAcceleration constant angular acceleration (rad/s^2)
+     * @return the motion
+     */
+    public static Motion spinUp(Vector3D axis, double angleAtZero, double rateAtZero, double angularAcceleration) {
+        return new Spin(Arguments.unitAxis("axis", axis),
+                Arguments.finite("angleAtZero", angleAtZero),
+                Arguments.finite("rateAtZero", rateAtZero),
+                Arguments.finite("angularAcceleration", angularAcceleration));
+    }
+
+    /**
+     * Translation of the origin along a polynomial in time, axes aligned with the parent:
+     * {@code o(t) = c0 + c1 t + c2 t^2 + ...}.
+     *
+     * @param coefficients c0 (m), c1 (m/s), c2 (m/s^2), ... at least one
+     * @return the motion
+     */
+    public static Motion translation(Vector3D... coefficients) {
+        Arguments.nonNull("coefficients", coefficients);
+        if (coefficients.length == 0) {
+            throw new IllegalArgumentException("coefficients must hold at least one vector (c0), got none");
+        }
+        double[] c = new double[3 * coefficients.length];
+        for (int k = 0; k < coefficients.length; k++) {
+            Arguments.finite("coefficients[" + k + "]", coefficients[k]);
+            c[3 * k] = coefficients[k].getX();
+            c[3 * k + 1] = coefficients[k].getY();
+            c[3 * k + 2] = coefficients[k].getZ();
+        }
+        return new Polynomial(c);
+    }
+
+    /**
+     * Harmonic oscillation of an angle about a fixed axis (roll, pitch, yaw of a ship, a
+     * pendulum's swing): angle {@code amplitude sin(angularFrequency t + phase)}.
+     *
+     * @param axis axis in B (any non-zero length)
+     * @param amplitude angle amplitude (rad)
+     * @param angularFrequency 2 pi / period (rad/s)
+     * @param phase phase at t = 0 (rad)
+     * @return the motion
+     */
+    public static Motion oscillation(Vector3D axis, double amplitude, double angularFrequency, double phase) {
+        return new AngleOscillation(Arguments.unitAxis("axis", axis),
+                Arguments.finite("amplitude", amplitude),
+                Arguments.finite("angularFrequency", angularFrequency),
+                Arguments.finite("phase", phase));
+    }
+
+    /**
+     * Harmonic translation of the origin along a fixed direction (heave, surge, sway), axes aligned
+     * with the parent: offset {@code amplitude sin(angularFrequency t + phase)} along the unit
+     * direction.
+     *
+     * @param direction direction in B (any non-zero length)
+     * @param amplitude displacement amplitude (m)
+     * @param angularFrequency 2 pi / period (rad/s)
+     * @param phase phase at t = 0 (rad)
+     * @return the motion
+     */
+    public static Motion heave(Vector3D direction, double amplitude, double angularFrequency, double phase) {
+        return new Heave(Arguments.unitAxis("direction", direction),
+                Arguments.finite("amplitude", amplitude),
+                Arguments.finite("angularFrequency", angularFrequency),
+                Arguments.finite("phase", phase));
+    }
+
+    /**
+     * Stacks motions: the first places an intermediate frame in the parent, each next one places
+     * the next frame in the previous, the last places F. Equivalent to attaching a chain of
+     * frames, without naming the intermediate ones.
+     *
+     * @param chain motions from the outermost to the innermost, at least one
+     * @return the combined motion
+     */
+    public static Motion compose(Motion... chain) {
+        Arguments.nonNull("chain", chain);
+        if (chain.length == 0) {
+            throw new IllegalArgumentException("chain must hold at least one motion, got none");
+        }
+        for (int i = 0; i < chain.length; i++) {
+            Arguments.nonNull("chain[" + i + "]", chain[i]);
+        }
+        return new Stack(chain.clone());
+    }
+
+    /** Placement for a turn by angle th about unit axis n, with rate th1 and acceleration th2. */
+    static Placement turn(Vector3D n, double th, double th1, double th2) {
+        double half = 0.5 * th;
+        double s = Math.sin(half);
+        return Placement.ofQuaternion(0, 0, 0, 0, 0, 0, 0, 0, 0,
+                Math.cos(half), s * n.getX(), s * n.getY(), s * n.getZ(),
+                th1 * n.getX(), th1 * n.getY(), th1 * n.getZ(),
+                th2 * n.getX(), th2 * n.getY(), th2 * n.getZ());
+    }
+
+    private static void checkTime(double t) {
+        if (!Double.isFinite(t)) {
+            throw new IllegalArgumentException("t must be finite, got " + t);
+        }
+    }
+
+    private record Fixed(Placement placement) implements Motion, Serializable {
+        @Override
+        public Placement at(double t) {
+            checkTime(t);
+            return placement;
+        }
+
+        @Override
+        public String toString() {
+            return "fixed " + placement;
+        }
+    }
+
+    private record Spin(Vector3D axis, double angleAtZero, double rateAtZero, double angularAcceleration)
+            implements Motion, Serializable {
+        @Override
+        public Placement at(double t) {
+            checkTime(t);
+            double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
+            return turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration);
+        }
+
+        @Override
+        public String toString() {
+            return "spin about " + Formats.vector(axis, "") + "angle(0)=" + Formats.number(angleAtZero)
+                    + " rad, rate(0)=" + Formats.number(rateAtZero) + " rad/s, acceleration="
+                    + Formats.number(angularAcceleration) + " rad/s^2";
+        }
+    }
+
+    private record AngleOscillation(Vector3D axis, double amplitude, double angularFrequency, double phase)
+            implements Motion, Serializable {
+        @Override
+        public Placement at(double t) {
+            checkTime(t);
+            double arg = angularFrequency * t + phase;
+            double s = Math.sin(arg);
+            double c = Math.cos(arg);
+            return turn(axis, amplitude * s, amplitude * angularFrequency * c,
+                    -amplitude * angularFrequency * angularFrequency * s);
+        }
+
+        @Override
+        public String toString() {
+            return "oscillation about " + Formats.vector(axis, "") + "amplitude=" + Formats.number(amplitude)
+                    + " rad, angularFrequency=" + Formats.number(angularFrequency) + " rad/s, phase="
+                    + Formats.number(phase) + " rad";
+        }
+    }
+
+    private record Heave(Vector3D direction, double amplitude, double angularFrequency, double phase)
+            implements Motion, Serializable {
+        @Override
+        public Placement at(double t) {
+            checkTime(t);
+            double arg = angularFrequency * t + phase;
+            double p = amplitude * Math.sin(arg);
+            double v = amplitude * angularFrequency * Math.cos(arg);
+            double a = -angularFrequency * angularFrequency * p;
+            double dx = direction.getX();
+            double dy = direction.getY();
+            double dz = direction.getZ();
+            return Placement.ofQuaternion(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz,
+                    1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+        }
+
+        @Override
+        public String toString() {
+            return "heave along " + Formats.vector(direction, "") + "amplitude=" + Formats.number(amplitude)
+                    + " m, angularFrequency=" + Formats.number(angularFrequency) + " rad/s, phase="
+                    + Formats.number(phase) + " rad";
+        }
+    }
+
+    /** o(t) = sum c_k t^k, coefficients packed x,y,z per degree. */
+    private static final class Polynomial implements Motion, Serializable {
+        private static final long serialVersionUID = 1L;
+        private final double[] c;
+
+        Polynomial(double[] c) {
+            this.c = c;
+        }
+
+        @Override
+        public Placement at(double t) {
+            checkTime(t);
+            double[] p = new double[9];
+            int degree = c.length / 3 - 1;
+            // Horner for value, first and second derivatives
+            for (int axis = 0; axis < 3; axis++) {
+                double value = c[3 * degree + axis];
+                double d1 = 0;
+                double d2 = 0;
+                for (int k = degree - 1; k >= 0; k--) {
+                    d2 = d2 * t + 2 * d1;
+                    d1 = d1 * t + value;
+                    value = value * t + c[3 * k + axis];
+                }
+                p[axis] = value;
+                p[3 + axis] = d1;
+                p[6 + axis] = d2;
+            }
+            return Placement.ofQuaternion(p[0], p[1], p[2], p[3], p[4], p[5], p[6], p[7], p[8],
+                    1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+        }
+
+        @Override
+        public boolean equals(Object other) {
+            return other instanceof Polynomial && Arrays.equals(c, ((Polynomial) other).c);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(c);
+        }
+
+        @Override
+        public String toString() {
+            StringBuilder b = new StringBuilder("translation o(t) =");
+            for (int k = 0; k < c.length / 3; k++) {
+                b.append(k == 0 ? " " : " + ").append(Formats.vector(c[3 * k], c[3 * k + 1], c[3 * k + 2],
+                        k == 0 ? "m" : "m/s^" + k)).append(k == 0 ? "" : " t^" + k);
+            }
+            return b.toString();
+        }
+    }
+
+    private static final class Stack implements Motion, Serializable {
+        private static final long serialVersionUID = 1L;
+        private final Motion[] chain;
+
+        Stack(Motion[] chain) {
+            this.chain = chain;
+        }
+
+        @Override
+        public Placement at(double t) {
+            Placement p = chain[0].at(t);
+            for (int i = 1; i < chain.length; i++) {
+                p = p.then(chain[i].at(t));
+            }
+            return p;
+        }
+
+        @Override
+        public boolean equals(Object other) {
+            return other instanceof Stack && Arrays.equals(chain, ((Stack) other).chain);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(chain);
+        }
+
+        @Override
+        public String toString() {
+            return "compose" + List.of(chain);
+        }
+    }
+}
