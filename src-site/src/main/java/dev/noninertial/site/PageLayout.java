@@ -104,7 +104,7 @@ public final class PageLayout {
             nav.pages a:hover { border-left-color: var(--rule); }
             nav.pages a[aria-current="page"] { border-left-color: var(--link); font-weight: 700; }
             nav.pages li.api { margin-top: 1rem; padding-top: 0.8rem; border-top: 1px solid var(--rule); }
-            main { flex: 1 1 auto; min-width: 0; max-width: 50rem; padding: 0.5rem 1.8rem 3rem 1.8rem; }
+            main { flex: 1 1 auto; min-width: 0; max-width: 56rem; padding: 0.5rem 1.8rem 3rem 1.8rem; }
             h1, h2, h3, h4 { font-family: system-ui, "Segoe UI", "DejaVu Sans", sans-serif; line-height: 1.25; }
             h1 { font-size: 1.9rem; margin: 1.2rem 0 1rem 0; }
             h2 { font-size: 1.35rem; margin: 2.2rem 0 0.6rem 0; padding-bottom: 0.2rem; border-bottom: 1px solid var(--rule); }
@@ -115,6 +115,8 @@ public final class PageLayout {
             pre { background: var(--tint); border-left: 3px solid var(--rule); padding: 0.7rem 0.9rem;
                   overflow-x: auto; line-height: 1.4; }
             pre code { background: none; padding: 0; }
+            pre.output { background: #ffffff; border: 1px dashed var(--rule); border-left: 3px solid var(--rule);
+                         white-space: pre-wrap; overflow-wrap: anywhere; }
             pre.equation { background: #ffffff; border-left: 3px solid var(--link); font-size: 0.88rem; }
             table { border-collapse: collapse; margin: 1rem 0; font-size: 0.9rem; }
             th, td { border: 1px solid var(--rule); padding: 0.3rem 0.6rem; text-align: left; vertical-align: top; }

@@ -49,6 +49,17 @@ final class AxisScale {
         return new AxisScale(low, high, step);
     }
 
+    /**
+     * The scale spanning exactly [min, max] (for a horizontal axis such as time, whose data
+     * range is meaningful), with round ticks inside it.
+     */
+    static AxisScale spanning(double min, double max) {
+        if (!(min < max)) {
+            return covering(min, max);
+        }
+        return new AxisScale(min, max, niceStep((max - min) / TARGET_INTERVALS));
+    }
+
     private static double niceStep(double raw) {
         double power = Math.pow(10, Math.floor(Math.log10(raw)));
         double mantissa = raw / power;
@@ -68,9 +79,10 @@ final class AxisScale {
     /** Tick values from low to high inclusive. */
     List<Double> ticks() {
         List<Double> ticks = new ArrayList<>();
-        long count = Math.round((high - low) / step);
-        for (long k = 0; k <= count; k++) {
-            double v = low + k * step;
+        long first = (long) Math.ceil(low / step - 1e-9);
+        long last = (long) Math.floor(high / step + 1e-9);
+        for (long k = first; k <= last; k++) {
+            double v = k * step;
             // print 0 as 0, not as a rounding residue such as -1.1e-17
             ticks.add(Math.abs(v) < step * 1e-9 ? 0.0 : v);
         }

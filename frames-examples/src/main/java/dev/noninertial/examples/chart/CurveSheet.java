@@ -161,7 +161,7 @@ public final class CurveSheet {
                 yMax = Math.max(yMax, c.yAt(i));
             }
         }
-        AxisScale xs = AxisScale.covering(xMin, xMax);
+        AxisScale xs = AxisScale.spanning(xMin, xMax);
         AxisScale ys = AxisScale.covering(yMin, yMax);
 
         int legendRows = (curves.size() + 1) / 2;

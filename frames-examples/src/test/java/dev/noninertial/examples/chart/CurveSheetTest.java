@@ -63,6 +63,10 @@ class CurveSheetTest {
         AxisScale small = AxisScale.covering(0.0, 0.0137);
         assertEquals(0.005, small.step, 1e-15);
         assertEquals("0.010", small.label(0.01));
+        AxisScale time = AxisScale.spanning(0.0, 9.0);
+        assertEquals(0.0, time.low, 0.0);
+        assertEquals(9.0, time.high, 0.0);
+        assertEquals(List.of(0.0, 2.0, 4.0, 6.0, 8.0), time.ticks());
         AxisScale flat = AxisScale.covering(0.0, 0.0);
         assertTrue(flat.low < 0 && flat.high > 0, "constant zero curve still gets a span");
     }
