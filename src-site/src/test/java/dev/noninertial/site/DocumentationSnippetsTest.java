@@ -199,7 +199,10 @@ class DocumentationSnippetsTest {
                                    .collect(Collectors.joining(", "));
                 }
                 if (e.exception() != null) {
-                    return "throws " + e.exception() + " at: " + source.strip();
+                    Throwable x = e.exception();
+                    String type = x instanceof jdk.jshell.EvalException
+                            ? ((jdk.jshell.EvalException) x).getExceptionClassName() : x.getClass().getName();
+                    return "throws " + type + ": " + x.getMessage() + "\n  at: " + source.strip();
                 }
             }
         }
