@@ -19,7 +19,7 @@ import java.util.stream.Stream;
  *   <li>a placeholder {@code benchmarks.html} while the benchmark report is missing;</li>
  *   <li>the plots, computed by calling the library ({@link SitePlots});</li>
  *   <li>the API reference, by the JDK's Javadoc tool with doclint ({@link ApiReference});</li>
- *   <li>files under {@code static/}, copied as they are;</li>
+ *   <li>files under {@code static/}, and non-page files beside the pages, copied as they are;</li>
  *   <li>a check of every local link and anchor ({@link LinkAudit}): the build fails with the list
  *       of broken links.</li>
  * </ol>
@@ -96,6 +96,7 @@ public final class SiteBuilder {
         }
         Files.writeString(output.resolve("style.css"), PageLayout.styleSheet(), StandardCharsets.UTF_8);
         copyStatic(source.resolve("static"), output);
+        copyPageAssets(pagesDir, output);
 
         List<String> plots = SitePlots.writeAll(output.resolve("plots"));
         System.out.println("plots: " + String.join(", ", plots));
@@ -105,7 +106,9 @@ public final class SiteBuilder {
         Path warningsFile = output.getParent().resolve("javadoc-warnings.txt");
         Files.write(warningsFile, api.warnings(), StandardCharsets.UTF_8);
         if (!api.warnings().isEmpty()) {
-            System.out.println("Javadoc doclint: " + api.warnings().size() + " warning(s), listed in " + warningsFile);
+            System.out.println("Javadoc doclint: " + api.warnings().size() + " warning(s), all listed in " + warningsFile
+                    + "; the first ones:");
+            api.warnings().stream().limit(5).forEach(w -> System.out.println("  " + w));
         }
 
         LinkAudit.Result links = LinkAudit.audit(output);
@@ -183,6 +186,24 @@ public final class SiteBuilder {
                 } else {
                     Files.copy(f, target);
                 }
+            }
+        }
+    }
+
+    /** Pictures and other non-page files placed beside the pages are published beside them. */
+    private static void copyPageAssets(Path pagesDir, Path output) throws IOException {
+        try (Stream<Path> s = Files.walk(pagesDir)) {
+            for (Path f : (Iterable<Path>) s.filter(Files::isRegularFile)::iterator) {
+                Path rel = pagesDir.relativize(f);
+                if (rel.getNameCount() == 1 && rel.toString().endsWith(".html")) {
+                    continue;
+                }
+                Path target = output.resolve(rel.toString());
+                if (Files.exists(target)) {
+                    throw new IllegalStateException("pages/" + rel + " would overwrite a generated file");
+                }
+                Files.createDirectories(target.getParent());
+                Files.copy(f, target);
             }
         }
     }
