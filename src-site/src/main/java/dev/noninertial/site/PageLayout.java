@@ -3,6 +3,8 @@ package dev.noninertial.site;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * The frame every page is shown in: a header with the project name, a navigation column listing
@@ -20,6 +22,9 @@ public final class PageLayout {
     static final String PROJECT = "noninertial frames";
     /** Version shown in the header. */
     static final String VERSION = "0.1.0-SNAPSHOT";
+
+    private static final Pattern SECTION = Pattern.compile("<h2\\b[^>]*\\bid=\"([^\"]*)\"[^>]*>(.*?)</h2>",
+            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
 
     private final List<Page> pages;
 
@@ -67,7 +72,11 @@ public final class PageLayout {
             if (p.fileName().equals(page.fileName())) {
                 b.append(" aria-current=\"page\"");
             }
-            b.append('>').append(Markup.escape(p.title())).append("</a></li>\n");
+            b.append('>').append(Markup.escape(p.title())).append("</a>");
+            if (p.fileName().equals(page.fileName())) {
+                appendSections(b, p);
+            }
+            b.append("</li>\n");
         }
         b.append("<li class=\"api\"><a href=\"api/index.html\">API reference (Javadoc)</a></li>\n")
          .append("</ul>\n</nav>\n<main>\n").append(page.body().strip()).append("\n</main>\n</div>\n")
@@ -76,6 +85,18 @@ public final class PageLayout {
          .append(" licensed practice take precedence. Plots on these pages are computed by the library when the")
          .append(" site is built.</footer>\n</body>\n</html>\n");
         return b.toString();
+    }
+
+    /** The current page's sections, as a nested list under its entry, when there are several. */
+    private static void appendSections(StringBuilder b, Page page) {
+        Matcher m = SECTION.matcher(page.body());
+        List<String> items = new ArrayList<>();
+        while (m.find()) {
+            items.add("<li><a href=\"#" + m.group(1) + "\">" + Markup.escape(Markup.text(m.group(2))) + "</a></li>");
+        }
+        if (items.size() >= 2) {
+            b.append("\n<ul class=\"sections\">\n").append(String.join("\n", items)).append("\n</ul>\n");
+        }
     }
 
     /** @return the style sheet of the site */
@@ -96,6 +117,7 @@ public final class PageLayout {
             .masthead .version { color: var(--muted); font-size: 0.85rem; margin-left: 0.4rem; }
             .frame { display: flex; align-items: flex-start; max-width: 80rem; }
             nav.pages { flex: 0 0 15rem; padding: 1.2rem 1rem 2rem 1.4rem; position: sticky; top: 0;
+                        max-height: 100vh; overflow-y: auto;
                         font-family: system-ui, "Segoe UI", "DejaVu Sans", sans-serif; font-size: 0.9rem; }
             nav.pages ul { list-style: none; margin: 0; padding: 0; }
             nav.pages li { margin: 0 0 0.45rem 0; }
@@ -103,6 +125,10 @@ public final class PageLayout {
                           border-left: 3px solid transparent; }
             nav.pages a:hover { border-left-color: var(--rule); }
             nav.pages a[aria-current="page"] { border-left-color: var(--link); font-weight: 700; }
+            nav.pages ul.sections { margin: 0.3rem 0 0.6rem 0.9rem; font-size: 0.82rem; }
+            nav.pages ul.sections li { margin: 0 0 0.2rem 0; }
+            nav.pages ul.sections a { color: var(--muted); border-left: none; padding: 0 0.3rem; }
+            nav.pages ul.sections a:hover { color: var(--ink); }
             nav.pages li.api { margin-top: 1rem; padding-top: 0.8rem; border-top: 1px solid var(--rule); }
             main { flex: 1 1 auto; min-width: 0; max-width: 56rem; padding: 0.5rem 1.8rem 3rem 1.8rem; }
             h1, h2, h3, h4 { font-family: system-ui, "Segoe UI", "DejaVu Sans", sans-serif; line-height: 1.25; }
@@ -135,6 +161,7 @@ public final class PageLayout {
               .frame { display: block; }
               nav.pages { position: static; padding: 0.6rem 1rem; border-bottom: 1px solid var(--rule); }
               nav.pages li { display: inline-block; margin-right: 0.6rem; }
+              nav.pages ul.sections { display: none; }
               main { padding: 0.5rem 1rem 2rem 1rem; }
             }
             """;
