@@ -13,13 +13,18 @@ import java.util.regex.Pattern;
  * @param index 1-based number of the block within that file
  * @param line 1-based line of the file where the code starts
  * @param code the Java source, character references read back
+ * @param expectedOutput what the block must print, from a {@code <pre class="output">} block that
+ *        follows it directly (only white space between); null when there is none
  */
-public record Snippet(String origin, int index, int line, String code) {
+public record Snippet(String origin, int index, int line, String code, String expectedOutput) {
 
     private static final Pattern HTML_BLOCK = Pattern.compile(
             "<pre\\b[^>]*>\\s*<code\\b[^>]*\\bclass=\"[^\"]*\\blanguage-java\\b[^\"]*\"[^>]*>(.*?)</code>\\s*</pre>",
             Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
     private static final Pattern TAG = Pattern.compile("<[^>]*>");
+    private static final Pattern OUTPUT_BLOCK = Pattern.compile(
+            "\\s*<pre\\b[^>]*\\bclass=\"[^\"]*\\boutput\\b[^\"]*\"[^>]*>\\s*<code\\b[^>]*>(.*?)</code>\\s*</pre>",
+            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
     private static final Pattern MARKDOWN_BLOCK = Pattern.compile("(?m)^```java[ \\t]*\\n(.*?)^```[ \\t]*$",
             Pattern.DOTALL);
 
@@ -35,7 +40,12 @@ public record Snippet(String origin, int index, int line, String code) {
         Matcher m = HTML_BLOCK.matcher(html);
         while (m.find()) {
             String code = Markup.unescape(TAG.matcher(m.group(1)).replaceAll(""));
-            found.add(new Snippet(origin, found.size() + 1, lineOf(html, m.start(1)), code));
+            Matcher out = OUTPUT_BLOCK.matcher(html).region(m.end(), html.length());
+            String expected = null;
+            if (out.lookingAt()) {
+                expected = Markup.unescape(TAG.matcher(out.group(1)).replaceAll(""));
+            }
+            found.add(new Snippet(origin, found.size() + 1, lineOf(html, m.start(1)), code, expected));
         }
         return found;
     }
@@ -51,7 +61,7 @@ public record Snippet(String origin, int index, int line, String code) {
         List<Snippet> found = new ArrayList<>();
         Matcher m = MARKDOWN_BLOCK.matcher(markdown);
         while (m.find()) {
-            found.add(new Snippet(origin, found.size() + 1, lineOf(markdown, m.start(1)), m.group(1)));
+            found.add(new Snippet(origin, found.size() + 1, lineOf(markdown, m.start(1)), m.group(1), null));
         }
         return found;
     }

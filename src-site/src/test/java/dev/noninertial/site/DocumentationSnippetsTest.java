@@ -36,10 +36,13 @@ import org.junit.jupiter.api.TestFactory;
  * root README ({@code ```java}) through JShell with the project's class path, so that the
  * documentation cannot drift from the API. The blocks of one file run in order in one JShell
  * session, as a reader following the page would type them; each file starts a fresh session.
+ * When a block is followed directly by a {@code <pre class="output">} block, what the block prints
+ * must equal that text (line by line, trailing blanks ignored), so quoted results cannot drift.
  *
  * <p>Imports given to every session: all packages of the project found on the class path
  * ({@code dev.noninertial.*}, except this generator), Hipparchus 3-D geometry, and
- * {@code java.time}; JShell itself adds its usual {@code java.util}, {@code java.io} ... imports.
+ * {@code java.time}, plus the default imports of the jshell tool ({@code java.util}, {@code java.io} ...),
+ * which the JShell API does not add by itself.
  */
 class DocumentationSnippetsTest {
 
@@ -76,8 +79,16 @@ class DocumentationSnippetsTest {
                 .collect(Collectors.toList());
     }
 
+    /** The imports the jshell tool gives every session by default (its DEFAULT start-up). */
+    static final List<String> JSHELL_DEFAULT_IMPORTS = List.of("java.io", "java.math", "java.net", "java.nio.file",
+            "java.util", "java.util.concurrent", "java.util.function", "java.util.prefs", "java.util.regex",
+            "java.util.stream");
+
     static List<String> imports() throws IOException {
         List<String> imports = new ArrayList<>();
+        for (String pkg : JSHELL_DEFAULT_IMPORTS) {
+            imports.add("import " + pkg + ".*;");
+        }
         for (String pkg : projectPackages()) {
             imports.add("import " + pkg + ".*;");
         }
@@ -118,6 +129,12 @@ class DocumentationSnippetsTest {
         assertEquals(1, s.size());
         assertEquals("int a = 1 < 2 && true ? 1 : 0;", s.get(0).code());
         assertEquals(2, s.get(0).line());
+        List<Snippet> withOutput = Snippet.fromHtml("t.html", "<pre><code class=\"language-java\">"
+                + "System.out.println(1 &lt; 2);</code></pre>\n  <pre class=\"output\"><code>true\n</code></pre>"
+                + "<pre><code class=\"language-java\">int q = 1;</code></pre><p>x</p><pre class=\"output\"><code>no"
+                + "</code></pre>");
+        assertEquals("true\n", withOutput.get(0).expectedOutput());
+        assertEquals(null, withOutput.get(1).expectedOutput(), "output block not directly after: not compared");
         List<Snippet> md = Snippet.fromMarkdown("r.md", "a\n```java\nint b = 2;\n```\n```\nnot java\n```\n");
         assertEquals(1, md.size());
         assertEquals("int b = 2;\n", md.get(0).code());
@@ -155,19 +172,35 @@ class DocumentationSnippetsTest {
             }
             List<String> failures = new ArrayList<>();
             for (Snippet block : blocks) {
+                out.flush();
+                printed.reset();
                 String problem = run(shell, block.code());
+                out.flush();
+                if (problem == null && block.expectedOutput() != null) {
+                    String expected = normalized(block.expectedOutput());
+                    String actual = normalized(printed.toString(StandardCharsets.UTF_8));
+                    if (!expected.equals(actual)) {
+                        problem = "prints other text than the output block that follows it on the page."
+                                + "\n--- page shows ---\n" + expected + "\n--- block prints ---\n" + actual;
+                    }
+                }
                 if (problem != null) {
                     failures.add(block + ":\n" + problem + "\n--- block ---\n" + block.code().strip());
                 }
             }
             if (!failures.isEmpty()) {
-                fail(failures.size() + " failing Java block(s):\n\n" + String.join("\n\n", failures)
-                        + "\n--- printed ---\n" + printed.toString(StandardCharsets.UTF_8));
+                fail(failures.size() + " failing Java block(s):\n\n" + String.join("\n\n", failures));
             }
         } finally {
             System.setOut(realOut);
             System.setErr(realErr);
         }
+    }
+
+    /** Text compared line by line: line ends unified, trailing blanks and blank edge lines dropped. */
+    static String normalized(String text) {
+        return text.replace("\r\n", "\n").lines().map(String::stripTrailing)
+                .collect(Collectors.joining("\n")).strip();
     }
 
     /** Runs one block statement by statement; returns what went wrong, or null. */
