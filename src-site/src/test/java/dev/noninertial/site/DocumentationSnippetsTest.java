@@ -203,40 +203,58 @@ class DocumentationSnippetsTest {
                 .collect(Collectors.joining("\n")).strip();
     }
 
-    /** Runs one block statement by statement; returns what went wrong, or null. */
+    /**
+     * Runs one block as a reader pasting it into the jshell tool would: line by line, each
+     * statement run as soon as the lines so far complete it. A line that starts with
+     * {@code .method(...)} after a complete statement therefore fails here as it fails there.
+     * Returns what went wrong, or null.
+     */
     private static String run(JShell shell, String code) {
         SourceCodeAnalysis analysis = shell.sourceCodeAnalysis();
-        String rest = code;
-        while (!rest.isBlank()) {
-            SourceCodeAnalysis.CompletionInfo info = analysis.analyzeCompletion(rest);
-            switch (info.completeness()) {
-                case COMPLETE, COMPLETE_WITH_SEMI, UNKNOWN:
+        String pending = "";
+        for (String line : code.split("\n", -1)) {
+            pending = pending + line + "\n";
+            while (!pending.isBlank()) {
+                SourceCodeAnalysis.CompletionInfo info = analysis.analyzeCompletion(pending);
+                if (info.completeness() == SourceCodeAnalysis.Completeness.EMPTY) {
+                    pending = "";
                     break;
-                case EMPTY:
-                    return null;
-                default:
-                    return "incomplete source (" + info.completeness() + "): " + rest.strip();
+                }
+                if (!info.completeness().isComplete() && info.completeness() != SourceCodeAnalysis.Completeness.UNKNOWN) {
+                    break; // wait for more lines
+                }
+                String problem = evaluate(shell, info.source());
+                if (problem != null) {
+                    return problem;
+                }
+                pending = info.remaining();
             }
-            String source = info.source();
-            rest = info.remaining();
-            for (SnippetEvent e : shell.eval(source)) {
-                if (e.causeSnippet() != null) {
-                    continue; // an update of an earlier snippet, not this statement
-                }
-                if (e.status() == Status.REJECTED) {
-                    return "does not compile: " + source.strip() + "\n" + diagnostics(shell, List.of(e));
-                }
-                if (e.status() == Status.RECOVERABLE_DEFINED || e.status() == Status.RECOVERABLE_NOT_DEFINED) {
-                    return "refers to something undefined: " + source.strip() + "\n"
-                            + shell.unresolvedDependencies((jdk.jshell.DeclarationSnippet) e.snippet())
-                                   .collect(Collectors.joining(", "));
-                }
-                if (e.exception() != null) {
-                    Throwable x = e.exception();
-                    String type = x instanceof jdk.jshell.EvalException
-                            ? ((jdk.jshell.EvalException) x).getExceptionClassName() : x.getClass().getName();
-                    return "throws " + type + ": " + x.getMessage() + "\n  at: " + source.strip();
-                }
+        }
+        if (!pending.isBlank()) {
+            return "incomplete source at the end of the block: " + pending.strip();
+        }
+        return null;
+    }
+
+    /** Evaluates one complete snippet; returns what went wrong, or null. */
+    private static String evaluate(JShell shell, String source) {
+        for (SnippetEvent e : shell.eval(source)) {
+            if (e.causeSnippet() != null) {
+                continue; // an update of an earlier snippet, not this statement
+            }
+            if (e.status() == Status.REJECTED) {
+                return "does not compile: " + source.strip() + "\n" + diagnostics(shell, List.of(e));
+            }
+            if (e.status() == Status.RECOVERABLE_DEFINED || e.status() == Status.RECOVERABLE_NOT_DEFINED) {
+                return "refers to something undefined: " + source.strip() + "\n"
+                        + shell.unresolvedDependencies((jdk.jshell.DeclarationSnippet) e.snippet())
+                               .collect(Collectors.joining(", "));
+            }
+            if (e.exception() != null) {
+                Throwable x = e.exception();
+                String type = x instanceof jdk.jshell.EvalException
+                        ? ((jdk.jshell.EvalException) x).getExceptionClassName() : x.getClass().getName();
+                return "throws " + type + ": " + x.getMessage() + "\n  at: " + source.strip();
             }
         }
         return null;
