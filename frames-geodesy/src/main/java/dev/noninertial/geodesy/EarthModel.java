@@ -360,10 +360,11 @@ public final class EarthModel implements Serializable {
         }
         double rm = ellipsoid.meridianRadius(lat) + position.height();
         double rn = ellipsoid.primeVerticalRadius(lat) + position.height();
-        double north = -northSpeed / rm;        // about east
-        double east = eastSpeed / rn;           // about north
-        double up = eastSpeed * Math.tan(lat) / rn;
-        return axes == LocalAxes.ENU ? new Vector3D(north, east, up) : new Vector3D(east, -north, -up);
+        double aboutEast = -northSpeed / rm;
+        double aboutNorth = eastSpeed / rn;
+        double aboutUp = eastSpeed * Math.tan(lat) / rn;
+        return axes == LocalAxes.ENU ? new Vector3D(aboutEast, aboutNorth, aboutUp)
+                : new Vector3D(aboutNorth, aboutEast, -aboutUp);
     }
 
     /**
