@@ -112,6 +112,26 @@ class GeodeticConversionTest {
     }
 
     @Test
+    void pointsNearTheCentreInvertToTheNearestFootPoint() {
+        // invariants of the nearest-point problem: the foot point F = toCartesian(lat, lon, 0) is at
+        // distance |h| from X, X - F is along the normal, and no pole is nearer than F
+        SplittableRandom random = new SplittableRandom(7L);
+        for (int i = 0; i < 500; i++) {
+            Vector3D x = new Vector3D(random.nextDouble(-60e3, 60e3), random.nextDouble(-60e3, 60e3),
+                    random.nextDouble(-60e3, 60e3));
+            LatLonHeight g = WGS84.toGeodetic(x);
+            Vector3D foot = WGS84.toCartesian(g.withHeight(0));
+            // 1e-8 m: rounding of coordinates of 6.4e6 m
+            assertEquals(-g.height(), foot.distance(x), 1e-8, x.toString());
+            Vector3D along = x.subtract(foot);
+            assertTrue(Vector3D.crossProduct(along, WGS84.normal(g)).getNorm() < 1e-8, x.toString());
+            double p = Math.hypot(x.getX(), x.getY());
+            double toPole = Math.hypot(p, WGS84.semiMinorAxis() - Math.abs(x.getZ()));
+            assertTrue(-g.height() <= toPole + 1e-8, x.toString());
+        }
+    }
+
+    @Test
     void badInputIsRefusedWithClearMessages() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> LatLonHeight.ofDegrees(90.5, 0, 0));
@@ -142,10 +162,13 @@ class GeodeticConversionTest {
     }
 
     static Result measure(DfpGeodesy ref, double lat, double lon, double h) {
-        Dfp[] exact = ref.toCartesian(lat, lon, h);
+        Dfp[] trig = ref.trig(lat, lon);
+        Dfp[] exact = ref.forward(trig[0], trig[1], trig[2], trig[3], DfpGeodesy.FIELD.newDfp(h));
         Vector3D rounded = new Vector3D(exact[0].toDouble(), exact[1].toDouble(), exact[2].toDouble());
         LatLonHeight back = WGS84.toGeodetic(rounded);
-        Dfp[] image = ref.toCartesian(back.latitude(), back.longitude(), back.height());
+        boolean near = Math.abs(back.latitude() - lat) < 1e-6 && Math.abs(back.longitude() - lon) < 1e-6;
+        Dfp[] image = near ? ref.toCartesianNear(trig, lat, lon, back.latitude(), back.longitude(), back.height())
+                : ref.toCartesian(back.latitude(), back.longitude(), back.height());
         return new Result(DfpGeodesy.distance(exact, image), DfpGeodesy.norm(exact));
     }
 }
