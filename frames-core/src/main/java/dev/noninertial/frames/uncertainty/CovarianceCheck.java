@@ -7,6 +7,7 @@ import org.hipparchus.linear.MatrixUtils;
 import org.hipparchus.linear.RealMatrix;
 
 import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.Formats;
 
 /**
  * The acceptance rules for a covariance matrix given to this package, applied before any use.
@@ -113,7 +114,7 @@ public final class CovarianceCheck {
         if (smallest < -SEMIDEFINITE_TOLERANCE * Math.max(largest, 0.0)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "%s must be positive semidefinite: smallest eigenvalue of its correlation-scaled matrix is %s,"
-                    + " below -%s times the largest (%s)", name, smallest, SEMIDEFINITE_TOLERANCE, largest));
+                    + " below -%s times the largest (%s)", name, Formats.number(smallest), SEMIDEFINITE_TOLERANCE, Formats.number(largest)));
         }
     }
 }
