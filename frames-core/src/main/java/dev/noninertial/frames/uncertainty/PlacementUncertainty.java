@@ -36,7 +36,9 @@ public final class PlacementUncertainty implements Serializable {
 
     private static final PlacementUncertainty NONE = new PlacementUncertainty(new double[3][3], new double[3][3]);
 
+    /** Covariance of the attitude rotation vector, resolved in F (rad^2), 3x3. */
     private final double[][] attitude;
+    /** Covariance of the origin error, resolved in B (m^2), 3x3. */
     private final double[][] origin;
 
     private PlacementUncertainty(double[][] attitude, double[][] origin) {

@@ -47,8 +47,11 @@ public final class UncertainState implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** The mean state with its frame and time. */
     private final FramedState mean;
+    /** Which components the covariance covers. */
     private final StateLayout layout;
+    /** The covariance, symmetric positive semidefinite, {@code layout.size()} square. */
     private final double[][] covariance;
 
     private UncertainState(FramedState mean, StateLayout layout, double[][] covariance) {
