@@ -12,12 +12,12 @@ import dev.noninertial.frames.FramedState;
  * at the event time (s from the user's epoch); its acceleration is computed from the equations of
  * motion at that instant. Convert it with {@code state().in(otherFrame)}.
  *
+ * <p>Immutable and thread-safe.
+ *
  * @param eventName name of the event that fired
  * @param state the point at the event time, in the integration frame
  * @param rising true if the event's crossing function went from negative to positive
  * @param stoppedRun true if this occurrence ended the integration
- *
- * <p>Immutable and thread-safe.
  */
 public record EventMark(String eventName, FramedState state, boolean rising, boolean stoppedRun)
         implements Serializable {

@@ -268,6 +268,6 @@ public final class Trajectory {
         return "Trajectory{frame=" + frame().path() + ", span=[" + Formats.number(startTime) + ", "
                 + Formats.number(endTime) + "] s, " + steps.size() + " steps, " + evaluations
                 + " evaluations, " + method + (stop == null ? "" : ", stopped by " + stop.eventName())
-                + ", " + marks.size() + " events}";
+                + ", events=" + marks.size() + "}";
     }
 }

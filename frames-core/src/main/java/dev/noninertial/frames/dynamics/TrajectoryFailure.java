@@ -17,7 +17,9 @@ public final class TrajectoryFailure extends RuntimeException {
 
     private static final long serialVersionUID = 1L;
 
+    /** Time of the failure (s). */
     private final double time;
+    /** x, y, z, vx, vy, vz at the failure, empty if unknown. */
     private final double[] components;
 
     TrajectoryFailure(String what, double time, double[] y, Throwable cause) {

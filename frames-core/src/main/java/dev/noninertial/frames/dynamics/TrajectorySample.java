@@ -18,11 +18,11 @@ import dev.noninertial.frames.FramedState;
  * that frame, time in s from the user's epoch. {@code state().state().acceleration()} equals
  * {@code realForce() + fictitious().total()}.
  *
+ * <p>Immutable and thread-safe.
+ *
  * @param state the point at {@link #time()}, in the integration frame
  * @param realForce sum of the real specific forces (m/s^2)
  * @param fictitious frame acceleration, Euler, Coriolis and centrifugal terms (m/s^2)
- *
- * <p>Immutable and thread-safe.
  */
 public record TrajectorySample(FramedState state, Vector3D realForce, FictitiousAccelerations fictitious)
         implements Serializable {
