@@ -83,6 +83,7 @@ public final class TrajectorySolver {
     private final double positionTolerance;
     private final double velocityTolerance;
     private final double relativeTolerance;
+    private final double minStep;
     private final double maxStep;
     private final int maxEvaluations;
     private final IntegrationScheme scheme;
@@ -90,7 +91,7 @@ public final class TrajectorySolver {
 
     private TrajectorySolver(ReferenceFrame frame, List<SpecificForce> forces, List<TrajectoryEvent> events,
                              double positionTolerance, double velocityTolerance, double relativeTolerance,
-                             double maxStep, int maxEvaluations, IntegrationScheme scheme,
+                             double minStep, double maxStep, int maxEvaluations, IntegrationScheme scheme,
                              Supplier<? extends ODEIntegrator> custom) {
         this.frame = frame;
         this.forces = List.copyOf(forces);
@@ -98,6 +99,7 @@ public final class TrajectorySolver {
         this.positionTolerance = positionTolerance;
         this.velocityTolerance = velocityTolerance;
         this.relativeTolerance = relativeTolerance;
+        this.minStep = minStep;
         this.maxStep = maxStep;
         this.maxEvaluations = maxEvaluations;
         this.scheme = scheme;
@@ -115,7 +117,7 @@ public final class TrajectorySolver {
     public static TrajectorySolver in(ReferenceFrame frame) {
         Arguments.nonNull("frame", frame);
         return new TrajectorySolver(frame, List.of(), List.of(), DEFAULT_POSITION_TOLERANCE,
-                DEFAULT_VELOCITY_TOLERANCE, DEFAULT_RELATIVE_TOLERANCE, Double.NaN, DEFAULT_MAX_EVALUATIONS,
+                DEFAULT_VELOCITY_TOLERANCE, DEFAULT_RELATIVE_TOLERANCE, 0.0, Double.NaN, DEFAULT_MAX_EVALUATIONS,
                 IntegrationScheme.DORMAND_PRINCE_853, null);
     }
 
@@ -132,7 +134,7 @@ public final class TrajectorySolver {
         List<SpecificForce> more = new ArrayList<>(forces);
         more.add(force);
         return new TrajectorySolver(frame, more, events, positionTolerance, velocityTolerance,
-                relativeTolerance, maxStep, maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom);
     }
 
     /**
@@ -147,7 +149,7 @@ public final class TrajectorySolver {
         List<TrajectoryEvent> more = new ArrayList<>(events);
         more.add(event);
         return new TrajectorySolver(frame, forces, more, positionTolerance, velocityTolerance,
-                relativeTolerance, maxStep, maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom);
     }
 
     /**
@@ -177,7 +179,7 @@ public final class TrajectorySolver {
         return new TrajectorySolver(frame, forces, events,
                 Arguments.positive("positionTolerance", positionTolerance),
                 Arguments.positive("velocityTolerance", velocityTolerance),
-                Arguments.positive("relative", relative), maxStep, maxEvaluations, scheme, custom);
+                Arguments.positive("relative", relative), minStep, maxStep, maxEvaluations, scheme, custom);
     }
 
     /**
@@ -190,7 +192,22 @@ public final class TrajectorySolver {
      */
     public TrajectorySolver withMaxStep(double seconds) {
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, Arguments.positive("seconds", seconds), maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, Arguments.positive("seconds", seconds), maxEvaluations, scheme, custom);
+    }
+
+    /**
+     * A copy with a smallest step: a run whose error control asks for a shorter step (a force
+     * that is singular or much stiffer than expected) ends with a {@link TrajectoryFailure}
+     * instead of creeping on. The last step of a run and steps cut short by events may be
+     * shorter. Default 0 (no limit).
+     *
+     * @param seconds smallest step (s), positive and finite, below the largest step
+     * @return the copy
+     * @throws IllegalArgumentException if {@code seconds} is not in (0, +inf)
+     */
+    public TrajectorySolver withMinStep(double seconds) {
+        return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
+                relativeTolerance, Arguments.positive("seconds", seconds), maxStep, maxEvaluations, scheme, custom);
     }
 
     /**
@@ -206,7 +223,7 @@ public final class TrajectorySolver {
             throw new IllegalArgumentException("count must be in [1, " + Integer.MAX_VALUE + "], got " + count);
         }
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, maxStep, count, scheme, custom);
+                relativeTolerance, minStep, maxStep, count, scheme, custom);
     }
 
     /**
@@ -219,7 +236,7 @@ public final class TrajectorySolver {
     public TrajectorySolver withScheme(IntegrationScheme newScheme) {
         Arguments.nonNull("newScheme", newScheme);
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, maxStep, maxEvaluations, newScheme, null);
+                relativeTolerance, minStep, maxStep, maxEvaluations, newScheme, null);
     }
 
     /**
@@ -235,7 +252,7 @@ public final class TrajectorySolver {
     public TrajectorySolver withIntegrator(Supplier<? extends ODEIntegrator> supplier) {
         Arguments.nonNull("supplier", supplier);
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, maxStep, maxEvaluations, scheme, supplier);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, supplier);
     }
 
     /** @return the integration frame */
@@ -341,7 +358,11 @@ public final class TrajectorySolver {
         double u = velocityTolerance;
         double q = relativeTolerance;
         double step = Double.isNaN(maxStep) ? span : maxStep;
-        return scheme.create(0.0, step, new double[] {p, p, p, u, u, u}, new double[] {q, q, q, q, q, q});
+        if (!(minStep < step)) {
+            throw new IllegalArgumentException("minimum step must be below the largest step " + step
+                    + " s (the span unless set), got " + minStep + " s");
+        }
+        return scheme.create(minStep, step, new double[] {p, p, p, u, u, u}, new double[] {q, q, q, q, q, q});
     }
 
     @Override
@@ -349,7 +370,8 @@ public final class TrajectorySolver {
         return "TrajectorySolver{frame=" + frame.path() + ", " + forces.size() + " forces, " + events.size()
                 + " events, tolerance position=" + Formats.number(positionTolerance) + " m, velocity="
                 + Formats.number(velocityTolerance) + " m/s, relative=" + Formats.number(relativeTolerance)
-                + ", maxStep=" + (Double.isNaN(maxStep) ? "span" : Formats.number(maxStep) + " s") + ", "
+                + ", minStep=" + Formats.number(minStep) + " s, maxStep="
+                + (Double.isNaN(maxStep) ? "span" : Formats.number(maxStep) + " s") + ", "
                 + (custom == null ? scheme : "custom integrator") + "}";
     }
 

@@ -111,6 +111,14 @@ class BadInputTest {
                 () -> TrajectorySolver.in(LAB).withForce((t, st) -> st.position().scalarMultiply(-100.0))
                         .withTolerance(1e-12).withMaxEvaluations(50).solve(START, 0.0, 100.0));
         assertMessage(budget, "gave up", "at t = ");
+        // a stiff spring (period 6e-4 s) cannot be followed with steps of at least 0.01 s
+        TrajectoryFailure stiff = assertThrows(TrajectoryFailure.class,
+                () -> TrajectorySolver.in(LAB).withForce((t, st) -> st.position().scalarMultiply(-1e8))
+                        .withMinStep(0.01).solve(START, 0.0, 10.0));
+        assertMessage(stiff, "gave up", "at t = ");
+        assertMessage(assertThrows(IllegalArgumentException.class,
+                () -> TrajectorySolver.in(LAB).withMinStep(1.0).withMaxStep(0.5).solve(START, 0.0, 10.0)),
+                "minimum step", "0.5", "1.0");
     }
 
     @Test
