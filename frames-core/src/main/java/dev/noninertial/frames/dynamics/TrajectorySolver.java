@@ -184,7 +184,11 @@ public final class TrajectorySolver {
 
     /**
      * A copy with a largest step. Useful when a force varies faster than the solver can see from
-     * the trajectory (a short pulse), or to bound the spacing of the dense output.
+     * the trajectory (a short pulse), to bound the spacing of the dense output, and when a force
+     * is defined only in a region (a gravity field that refuses points deep underground): the
+     * stages of one long step probe the force far beyond the point where a stopping event
+     * (ground impact) would end the run, since events are located only after a step. Default:
+     * the whole span.
      *
      * @param seconds largest step (s), positive and finite
      * @return the copy
