@@ -78,6 +78,15 @@ class BadInputTest {
     }
 
     @Test
+    void stateOverflowIsReportedWithTimeAndState() {
+        // finite but absurd force: the state overflows to infinity within a step or two
+        SpecificForce huge = (t, st) -> new Vector3D(1e308, 0, 0);
+        TrajectoryFailure f = assertThrows(TrajectoryFailure.class,
+                () -> TrajectorySolver.in(LAB).withForce(huge).solve(START, 0.0, 10.0));
+        assertMessage(f, "non-finite", "at t = ");
+    }
+
+    @Test
     void throwingAndNullForcesAreReportedWithTimeAndState() {
         SpecificForce throwing = (t, st) -> {
             if (st.position().getZ() > 4.0) {
