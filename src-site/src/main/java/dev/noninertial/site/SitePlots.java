@@ -50,6 +50,10 @@ public final class SitePlots {
         CurveSheet[] roll = rollCycle();
         write(folder, "roll-cycle-transverse.svg", roll[0], written);
         write(folder, "roll-cycle-vertical.svg", roll[1], written);
+        CurveSheet[] shot = TrajectoryPlots.deflection();
+        write(folder, "shot-deflection-cross-range.svg", shot[0], written);
+        write(folder, "shot-deflection-range.svg", shot[1], written);
+        write(folder, "foucault-swing-plane.svg", TrajectoryPlots.foucault(), written);
         return written;
     }
 
