@@ -98,11 +98,14 @@ public final class SiteBuilder {
         copyStatic(source.resolve("static"), output);
         copyPageAssets(pagesDir, output);
 
+        long t0 = System.nanoTime();
         List<String> plots = SitePlots.writeAll(output.resolve("plots"));
-        System.out.println("plots: " + String.join(", ", plots));
+        System.out.printf("plots (%.1f s): %s%n", (System.nanoTime() - t0) * 1e-9, String.join(", ", plots));
 
+        long t1 = System.nanoTime();
         ApiReference.Result api = ApiReference.write(source.getParent(), output.resolve("api"), classPath);
-        System.out.println("API reference: " + api.packages().size() + " packages " + api.packages());
+        System.out.printf("API reference (%.1f s): %d packages %s%n", (System.nanoTime() - t1) * 1e-9,
+                api.packages().size(), api.packages());
         Path warningsFile = output.getParent().resolve("javadoc-warnings.txt");
         Files.write(warningsFile, api.warnings(), StandardCharsets.UTF_8);
         if (!api.warnings().isEmpty()) {

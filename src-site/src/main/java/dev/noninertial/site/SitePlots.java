@@ -53,7 +53,9 @@ public final class SitePlots {
         CurveSheet[] shot = TrajectoryPlots.deflection();
         write(folder, "shot-deflection-cross-range.svg", shot[0], written);
         write(folder, "shot-deflection-range.svg", shot[1], written);
-        write(folder, "foucault-swing-plane.svg", TrajectoryPlots.foucault(), written);
+        CurveSheet[] pendulum = TrajectoryPlots.foucault();
+        write(folder, "foucault-swing-plane.svg", pendulum[0], written);
+        write(folder, "foucault-difference.svg", pendulum[1], written);
         return written;
     }
 

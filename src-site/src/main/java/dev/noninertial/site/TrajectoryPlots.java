@@ -130,9 +130,11 @@ final class TrajectoryPlots {
 
     /**
      * Azimuth of a Foucault pendulum's swing plane over one hour, from the turning points of the
-     * integrated motion, against {@code -w sin(lat) t}.
+     * integrated motion, against {@code w sin(lat) t}, and their difference.
+     *
+     * @return the azimuth sheet and the difference sheet
      */
-    static CurveSheet foucault() {
+    static CurveSheet[] foucault() {
         ReferenceFrame enu = localLevel(PENDULUM_LATITUDE, EARTH_RATE);
         Vector3D hold = enu.state(0.0, PointState.atRest(Vector3D.ZERO)).fictitious().total();
         double k = GRAVITY / PENDULUM_LENGTH;
@@ -170,10 +172,19 @@ final class TrajectoryPlots {
         for (int i = 0; i < t.length; i++) {
             line[i] = rate * t[i] * 60.0;
         }
-        return CurveSheet.titled("Foucault pendulum, 40 m, at 52 deg N: azimuth of the swing plane")
+        double[] gap = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            gap[i] = (az[i] - line[i]) * 3.6e6;  // deg to milliarcseconds
+        }
+        CurveSheet plane = CurveSheet.titled("Foucault pendulum, 40 m, at 52 deg N: azimuth of the swing plane")
                 .withHorizontalAxis("time", "min")
                 .withVerticalAxis("swing-plane azimuth from north", "deg")
                 .withCurve(Curve.of("integrated: turning points of the bob", t, az))
                 .withCurve(Curve.of("w sin(lat) t, clockwise seen from above", t, line));
+        CurveSheet difference = CurveSheet.titled("Same pendulum: integrated azimuth minus w sin(lat) t")
+                .withHorizontalAxis("time", "min")
+                .withVerticalAxis("difference", "milliarcsecond")
+                .withCurve(Curve.of("integrated minus formula, at each turning point", t, gap));
+        return new CurveSheet[] {plane, difference};
     }
 }

@@ -57,7 +57,8 @@ final class AxisScale {
         if (!(min < max)) {
             return covering(min, max);
         }
-        return new AxisScale(min, max, niceStep((max - min) / TARGET_INTERVALS));
+        // a horizontal axis has room for more labels than a vertical one
+        return new AxisScale(min, max, niceStep((max - min) / (TARGET_INTERVALS + 3)));
     }
 
     private static double niceStep(double raw) {
