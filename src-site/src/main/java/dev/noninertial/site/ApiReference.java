@@ -77,7 +77,7 @@ public final class ApiReference {
                 "-classpath", classPath,
                 "-encoding", "UTF-8", "-docencoding", "UTF-8", "-charset", "UTF-8",
                 "-Xdoclint:all",
-                "-quiet", "-notimestamp",
+                "-quiet", "-notimestamp", "-notree", "-nohelp", "-nodeprecatedlist",
                 "-windowtitle", "noninertial frames API",
                 "-doctitle", "noninertial frames 0.1.0-SNAPSHOT: API reference",
                 "-bottom", "Results are for simulation and analysis only: see the cautions of the guide."));
