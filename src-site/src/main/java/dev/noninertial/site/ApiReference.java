@@ -78,6 +78,8 @@ public final class ApiReference {
                 "-encoding", "UTF-8", "-docencoding", "UTF-8", "-charset", "UTF-8",
                 "-Xdoclint:all",
                 "-quiet", "-notimestamp", "-notree", "-nohelp", "-nodeprecatedlist",
+                // offline: no links to the JDK's online documentation; Hipparchus types by simple name
+                "--no-platform-links", "-noqualifier", "all",
                 "-windowtitle", "noninertial frames API",
                 "-doctitle", "noninertial frames 0.1.0-SNAPSHOT: API reference",
                 "-bottom", "Results are for simulation and analysis only: see the cautions of the guide."));
