@@ -363,11 +363,60 @@ public final class SampledMotion implements Motion, Serializable {
         return evaluate(i, t);
     }
 
-    /** Index i with times[i] &lt;= t &lt;= times[i + 1], i in [0, n - 2]; t within the span. */
+    /**
+     * Index i with times[i] &lt;= t &lt;= times[i + 1], i in [0, n - 2]; t within the span. Starts
+     * from the index a uniform record would have, then gallops and bisects: two or three reads for
+     * evenly sampled logs, O(log n) at worst, no state shared between threads.
+     */
     private int segment(double t) {
-        int k = Arrays.binarySearch(times, t);
-        int i = k >= 0 ? k : -k - 2;
-        return Math.min(Math.max(i, 0), times.length - 2);
+        double[] ts = times;
+        int last = ts.length - 2;
+        double t0 = ts[0];
+        int g = (int) ((t - t0) / (ts[last + 1] - t0) * (last + 1));
+        g = Math.min(Math.max(g, 0), last);
+        int lo;
+        int hi;
+        if (ts[g] <= t) {
+            if (t <= ts[g + 1]) {
+                return g;
+            }
+            // gallop right from g + 1 (ts[g + 1] < t) until a time beyond t or the end
+            lo = g + 1;
+            int step = 1;
+            hi = lo + step;
+            while (hi <= last && ts[hi] <= t) {
+                lo = hi;
+                step <<= 1;
+                hi = lo + step;
+            }
+            hi = Math.min(hi, last);
+        } else {
+            // gallop left from g (ts[g] > t) until a time not beyond t (ts[0] <= t always)
+            hi = g;
+            lo = g - 1;
+            int step = 1;
+            while (lo > 0 && ts[lo] > t) {
+                hi = lo;
+                step <<= 1;
+                lo = Math.max(0, lo - step);
+            }
+            hi = hi - 1;
+        }
+        // bisect for the largest i in [lo, hi] with ts[i] <= t
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (ts[mid] <= t) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
+        }
+        return lo;
+    }
+
+    /** @return the interval index the search finds for t (tests compare it with the JDK's search) */
+    int intervalIndex(double t) {
+        return segment(t);
     }
 
     /** The segment to evaluate t on, or -(i + 1) if t is in the gap segment i. */
@@ -400,263 +449,222 @@ public final class SampledMotion implements Motion, Serializable {
     @SuppressWarnings("checkstyle:MethodLength")
     private Placement evaluate(int i, double t) {
         int j = i + 1;
-        double h = times[j] - times[i];
-        double s = (t - times[i]) / h;
-
-        // stencils: nodes lo .. lo + m - 1 of each knot's run
-        int loI = stencilStart(i);
-        int mI = stencilSize(i, loI);
-        int loJ = stencilStart(j);
-        int mJ = stencilSize(j, loJ);
-
-        // derivative weights at knot i: d1 = sum a_k y_k, d2 = sum b_k y_k over the stencil
         double tI = times[i];
-        double a0 = 0;
-        double a1 = 0;
-        double a2 = 0;
-        double a3 = 0;
-        double a4 = 0;
-        double b0 = 0;
-        double b1 = 0;
-        double b2 = 0;
-        double b3 = 0;
-        double b4 = 0;
-        {
-            int kk = i - loI;
-            double x0 = mI > 0 ? times[loI] - tI : 0;
-            double x1 = mI > 1 ? times[loI + 1] - tI : 0;
-            double x2 = mI > 2 ? times[loI + 2] - tI : 0;
-            double x3 = mI > 3 ? times[loI + 3] - tI : 0;
-            double x4 = mI > 4 ? times[loI + 4] - tI : 0;
-            double sum = 0;
-            double sq = 0;
-            for (int k = 0; k < mI; k++) {
-                if (k != kk) {
-                    double inv = 1.0 / pick(k, x0, x1, x2, x3, x4);
-                    sum += inv;
-                    sq += inv * inv;
-                }
-            }
-            for (int k = 0; k < mI; k++) {
-                double ak;
-                double bk;
-                if (k == kk) {
-                    ak = -sum;
-                    bk = sum * sum - sq;
-                } else {
-                    double xk = pick(k, x0, x1, x2, x3, x4);
-                    double g = 1.0 / xk;
-                    for (int l = 0; l < mI; l++) {
-                        if (l != k && l != kk) {
-                            double xl = pick(l, x0, x1, x2, x3, x4);
-                            g *= xl / (xl - xk);
-                        }
-                    }
-                    ak = g;
-                    bk = -2.0 * g * (sum - 1.0 / xk);
-                }
-                switch (k) {
-                    case 0: a0 = ak; b0 = bk; break;
-                    case 1: a1 = ak; b1 = bk; break;
-                    case 2: a2 = ak; b2 = bk; break;
-                    case 3: a3 = ak; b3 = bk; break;
-                    default: a4 = ak; b4 = bk; break;
-                }
-            }
-        }
-        // the same at knot j
         double tJ = times[j];
-        double c0 = 0;
-        double c1 = 0;
-        double c2 = 0;
-        double c3 = 0;
-        double c4 = 0;
-        double e0 = 0;
-        double e1 = 0;
-        double e2 = 0;
-        double e3 = 0;
-        double e4 = 0;
-        {
-            int kk = j - loJ;
-            double x0 = mJ > 0 ? times[loJ] - tJ : 0;
-            double x1 = mJ > 1 ? times[loJ + 1] - tJ : 0;
-            double x2 = mJ > 2 ? times[loJ + 2] - tJ : 0;
-            double x3 = mJ > 3 ? times[loJ + 3] - tJ : 0;
-            double x4 = mJ > 4 ? times[loJ + 4] - tJ : 0;
-            double sum = 0;
-            double sq = 0;
-            for (int k = 0; k < mJ; k++) {
-                if (k != kk) {
-                    double inv = 1.0 / pick(k, x0, x1, x2, x3, x4);
-                    sum += inv;
-                    sq += inv * inv;
-                }
-            }
-            for (int k = 0; k < mJ; k++) {
-                double ak;
-                double bk;
-                if (k == kk) {
-                    ak = -sum;
-                    bk = sum * sum - sq;
-                } else {
-                    double xk = pick(k, x0, x1, x2, x3, x4);
-                    double g = 1.0 / xk;
-                    for (int l = 0; l < mJ; l++) {
-                        if (l != k && l != kk) {
-                            double xl = pick(l, x0, x1, x2, x3, x4);
-                            g *= xl / (xl - xk);
-                        }
-                    }
-                    ak = g;
-                    bk = -2.0 * g * (sum - 1.0 / xk);
-                }
-                switch (k) {
-                    case 0: c0 = ak; e0 = bk; break;
-                    case 1: c1 = ak; e1 = bk; break;
-                    case 2: c2 = ak; e2 = bk; break;
-                    case 3: c3 = ak; e3 = bk; break;
-                    default: c4 = ak; e4 = bk; break;
-                }
-            }
-        }
+        double h = tJ - tI;
+        double hh = h * h;
+        double invH = 1.0 / h;
+        double invHH = invH * invH;
+        double s = (t - tI) * invH;
 
-        // ---- position: quintic Hermite per axis
+        // Derivative stencils of both knots: the knot itself (index iK / jK) and up to four other
+        // samples of its run; absent ones point at the knot with weight 0. The first derivative
+        // at a knot is sum(a * y), the second sum(b * y) (c and e at knot j): the derivatives there
+        // of the Lagrange polynomial through the stencil.
+        int iK = i;
+        int jK = j;
+        int loI = stencilStart(i);
+        int rI = stencilSize(i, loI) - 1;
+        int kI = i - loI;
+        int i1 = 0 < rI ? loI + 0 + (0 >= kI ? 1 : 0) : i;
+        int i2 = 1 < rI ? loI + 1 + (1 >= kI ? 1 : 0) : i;
+        int i3 = 2 < rI ? loI + 2 + (2 >= kI ? 1 : 0) : i;
+        int i4 = 3 < rI ? loI + 3 + (3 >= kI ? 1 : 0) : i;
+        double u1 = times[i1] - tI;
+        double u2 = times[i2] - tI;
+        double u3 = times[i3] - tI;
+        double u4 = times[i4] - tI;
+        double ui1 = 0 < rI ? 1.0 / u1 : 0.0;
+        double ui2 = 1 < rI ? 1.0 / u2 : 0.0;
+        double ui3 = 2 < rI ? 1.0 / u3 : 0.0;
+        double ui4 = 3 < rI ? 1.0 / u4 : 0.0;
+        double uS = ui1 + ui2 + ui3 + ui4;
+        double uQ = ui1 * ui1 + ui2 * ui2 + ui3 * ui3 + ui4 * ui4;
+        double aK = -uS;
+        double bK = uS * uS - uQ;
+        double a1 = basis(u1, u2, u3, u4, 1 < rI, 2 < rI, 3 < rI);
+        double a2 = 1 < rI ? basis(u2, u1, u3, u4, true, 2 < rI, 3 < rI) : 0.0;
+        double a3 = 2 < rI ? basis(u3, u1, u2, u4, true, true, 3 < rI) : 0.0;
+        double a4 = 3 < rI ? basis(u4, u1, u2, u3, true, true, true) : 0.0;
+        double b1 = -2.0 * a1 * (uS - ui1);
+        double b2 = -2.0 * a2 * (uS - ui2);
+        double b3 = -2.0 * a3 * (uS - ui3);
+        double b4 = -2.0 * a4 * (uS - ui4);
+        int loJ = stencilStart(j);
+        int rJ = stencilSize(j, loJ) - 1;
+        int kJ = j - loJ;
+        int j1 = 0 < rJ ? loJ + 0 + (0 >= kJ ? 1 : 0) : j;
+        int j2 = 1 < rJ ? loJ + 1 + (1 >= kJ ? 1 : 0) : j;
+        int j3 = 2 < rJ ? loJ + 2 + (2 >= kJ ? 1 : 0) : j;
+        int j4 = 3 < rJ ? loJ + 3 + (3 >= kJ ? 1 : 0) : j;
+        double x1 = times[j1] - tJ;
+        double x2 = times[j2] - tJ;
+        double x3 = times[j3] - tJ;
+        double x4 = times[j4] - tJ;
+        double xi1 = 0 < rJ ? 1.0 / x1 : 0.0;
+        double xi2 = 1 < rJ ? 1.0 / x2 : 0.0;
+        double xi3 = 2 < rJ ? 1.0 / x3 : 0.0;
+        double xi4 = 3 < rJ ? 1.0 / x4 : 0.0;
+        double xS = xi1 + xi2 + xi3 + xi4;
+        double xQ = xi1 * xi1 + xi2 * xi2 + xi3 * xi3 + xi4 * xi4;
+        double cK = -xS;
+        double eK = xS * xS - xQ;
+        double c1 = basis(x1, x2, x3, x4, 1 < rJ, 2 < rJ, 3 < rJ);
+        double c2 = 1 < rJ ? basis(x2, x1, x3, x4, true, 2 < rJ, 3 < rJ) : 0.0;
+        double c3 = 2 < rJ ? basis(x3, x1, x2, x4, true, true, 3 < rJ) : 0.0;
+        double c4 = 3 < rJ ? basis(x4, x1, x2, x3, true, true, true) : 0.0;
+        double e1 = -2.0 * c1 * (xS - xi1);
+        double e2 = -2.0 * c2 * (xS - xi2);
+        double e3 = -2.0 * c3 * (xS - xi3);
+        double e4 = -2.0 * c4 * (xS - xi4);
+
+        // ---- position: per axis the quintic Hermite on s in [0, 1] matching value, first and
+        // second derivative at both ends: y0 + a1 s + a2 s^2 + k3 s^3 + k4 s^4 + k5 s^5
         double[] p = positions;
-        double px;
-        double py;
-        double pz;
-        double vx;
-        double vy;
-        double vz;
-        double ax;
-        double ay;
-        double az;
-        if (velocities == null) {
-            px = quintic(0, s, h, p[3 * i], p[3 * j],
-                    weigh(p, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 0, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 0, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 0, loJ, mJ, e0, e1, e2, e3, e4));
-            vx = quintic(1, s, h, p[3 * i], p[3 * j],
-                    weigh(p, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 0, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 0, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 0, loJ, mJ, e0, e1, e2, e3, e4));
-            ax = quintic(2, s, h, p[3 * i], p[3 * j],
-                    weigh(p, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 0, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 0, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 0, loJ, mJ, e0, e1, e2, e3, e4));
-            py = quintic(0, s, h, p[3 * i + 1], p[3 * j + 1],
-                    weigh(p, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 1, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 1, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 1, loJ, mJ, e0, e1, e2, e3, e4));
-            vy = quintic(1, s, h, p[3 * i + 1], p[3 * j + 1],
-                    weigh(p, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 1, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 1, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 1, loJ, mJ, e0, e1, e2, e3, e4));
-            ay = quintic(2, s, h, p[3 * i + 1], p[3 * j + 1],
-                    weigh(p, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 1, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 1, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 1, loJ, mJ, e0, e1, e2, e3, e4));
-            pz = quintic(0, s, h, p[3 * i + 2], p[3 * j + 2],
-                    weigh(p, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 2, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 2, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 2, loJ, mJ, e0, e1, e2, e3, e4));
-            vz = quintic(1, s, h, p[3 * i + 2], p[3 * j + 2],
-                    weigh(p, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 2, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 2, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 2, loJ, mJ, e0, e1, e2, e3, e4));
-            az = quintic(2, s, h, p[3 * i + 2], p[3 * j + 2],
-                    weigh(p, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(p, 3, 2, loJ, mJ, c0, c1, c2, c3, c4),
-                    weigh(p, 3, 2, loI, mI, b0, b1, b2, b3, b4), weigh(p, 3, 2, loJ, mJ, e0, e1, e2, e3, e4));
-        } else {
-            double[] v = velocities;
-            px = quintic(0, s, h, p[3 * i], p[3 * j], v[3 * i], v[3 * j],
-                    weigh(v, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 0, loJ, mJ, c0, c1, c2, c3, c4));
-            vx = quintic(1, s, h, p[3 * i], p[3 * j], v[3 * i], v[3 * j],
-                    weigh(v, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 0, loJ, mJ, c0, c1, c2, c3, c4));
-            ax = quintic(2, s, h, p[3 * i], p[3 * j], v[3 * i], v[3 * j],
-                    weigh(v, 3, 0, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 0, loJ, mJ, c0, c1, c2, c3, c4));
-            py = quintic(0, s, h, p[3 * i + 1], p[3 * j + 1], v[3 * i + 1], v[3 * j + 1],
-                    weigh(v, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 1, loJ, mJ, c0, c1, c2, c3, c4));
-            vy = quintic(1, s, h, p[3 * i + 1], p[3 * j + 1], v[3 * i + 1], v[3 * j + 1],
-                    weigh(v, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 1, loJ, mJ, c0, c1, c2, c3, c4));
-            ay = quintic(2, s, h, p[3 * i + 1], p[3 * j + 1], v[3 * i + 1], v[3 * j + 1],
-                    weigh(v, 3, 1, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 1, loJ, mJ, c0, c1, c2, c3, c4));
-            pz = quintic(0, s, h, p[3 * i + 2], p[3 * j + 2], v[3 * i + 2], v[3 * j + 2],
-                    weigh(v, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 2, loJ, mJ, c0, c1, c2, c3, c4));
-            vz = quintic(1, s, h, p[3 * i + 2], p[3 * j + 2], v[3 * i + 2], v[3 * j + 2],
-                    weigh(v, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 2, loJ, mJ, c0, c1, c2, c3, c4));
-            az = quintic(2, s, h, p[3 * i + 2], p[3 * j + 2], v[3 * i + 2], v[3 * j + 2],
-                    weigh(v, 3, 2, loI, mI, a0, a1, a2, a3, a4), weigh(v, 3, 2, loJ, mJ, c0, c1, c2, c3, c4));
-        }
+        double[] v = velocities;
+        double f0x = v == null ? weigh(p, 3, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 0];
+        double f1x = v == null ? weigh(p, 3, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 0];
+        double g0x = v == null ? weigh(p, 3, 0, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double g1x = v == null ? weigh(p, 3, 0, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double hxa1 = h * f0x;
+        double hxa2 = 0.5 * hh * g0x;
+        double hxdv = p[3 * j + 0] - p[3 * i + 0] - hxa1 - hxa2;
+        double hxds = h * f1x - hxa1 - 2 * hxa2;
+        double hxdc = hh * g1x - 2 * hxa2;
+        double hxk3 = 10 * hxdv - 4 * hxds + 0.5 * hxdc;
+        double hxk4 = -15 * hxdv + 7 * hxds - hxdc;
+        double hxk5 = 6 * hxdv - 3 * hxds + 0.5 * hxdc;
+        double px = p[3 * i + 0] + s * (hxa1 + s * (hxa2 + s * (hxk3 + s * (hxk4 + s * hxk5))));
+        double vx = (hxa1 + s * (2 * hxa2 + s * (3 * hxk3 + s * (4 * hxk4 + s * 5 * hxk5)))) * invH;
+        double ax = (2 * hxa2 + s * (6 * hxk3 + s * (12 * hxk4 + s * 20 * hxk5))) * invHH;
+        double f0y = v == null ? weigh(p, 3, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 1];
+        double f1y = v == null ? weigh(p, 3, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 1];
+        double g0y = v == null ? weigh(p, 3, 1, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double g1y = v == null ? weigh(p, 3, 1, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double hya1 = h * f0y;
+        double hya2 = 0.5 * hh * g0y;
+        double hydv = p[3 * j + 1] - p[3 * i + 1] - hya1 - hya2;
+        double hyds = h * f1y - hya1 - 2 * hya2;
+        double hydc = hh * g1y - 2 * hya2;
+        double hyk3 = 10 * hydv - 4 * hyds + 0.5 * hydc;
+        double hyk4 = -15 * hydv + 7 * hyds - hydc;
+        double hyk5 = 6 * hydv - 3 * hyds + 0.5 * hydc;
+        double py = p[3 * i + 1] + s * (hya1 + s * (hya2 + s * (hyk3 + s * (hyk4 + s * hyk5))));
+        double vy = (hya1 + s * (2 * hya2 + s * (3 * hyk3 + s * (4 * hyk4 + s * 5 * hyk5)))) * invH;
+        double ay = (2 * hya2 + s * (6 * hyk3 + s * (12 * hyk4 + s * 20 * hyk5))) * invHH;
+        double f0z = v == null ? weigh(p, 3, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 2];
+        double f1z = v == null ? weigh(p, 3, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 2];
+        double g0z = v == null ? weigh(p, 3, 2, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double g1z = v == null ? weigh(p, 3, 2, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double hza1 = h * f0z;
+        double hza2 = 0.5 * hh * g0z;
+        double hzdv = p[3 * j + 2] - p[3 * i + 2] - hza1 - hza2;
+        double hzds = h * f1z - hza1 - 2 * hza2;
+        double hzdc = hh * g1z - 2 * hza2;
+        double hzk3 = 10 * hzdv - 4 * hzds + 0.5 * hzdc;
+        double hzk4 = -15 * hzdv + 7 * hzds - hzdc;
+        double hzk5 = 6 * hzdv - 3 * hzds + 0.5 * hzdc;
+        double pz = p[3 * i + 2] + s * (hza1 + s * (hza2 + s * (hzk3 + s * (hzk4 + s * hzk5))));
+        double vz = (hza1 + s * (2 * hza2 + s * (3 * hzk3 + s * (4 * hzk4 + s * 5 * hzk5)))) * invH;
+        double az = (2 * hza2 + s * (6 * hzk3 + s * (12 * hzk4 + s * 20 * hzk5))) * invHH;
 
-        // ---- attitude: quintic Hermite per quaternion component, p(t), p'(t), p''(t)
-        double r0;
-        double r1;
-        double r2;
-        double r3;
-        double d0;
-        double dd1;
-        double dd2;
-        double dd3;
-        double s0;
-        double s1;
-        double s2;
-        double s3;
-        if (rates == null) {
-            r0 = quatQuintic(0, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            d0 = quatQuintic(1, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            s0 = quatQuintic(2, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            r1 = quatQuintic(0, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            dd1 = quatQuintic(1, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            s1 = quatQuintic(2, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            r2 = quatQuintic(0, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            dd2 = quatQuintic(1, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            s2 = quatQuintic(2, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            r3 = quatQuintic(0, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            dd3 = quatQuintic(1, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-            s3 = quatQuintic(2, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, b0, b1, b2, b3, b4,
-                    c0, c1, c2, c3, c4, e0, e1, e2, e3, e4);
-        } else {
-            r0 = rateQuintic(0, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            d0 = rateQuintic(1, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            s0 = rateQuintic(2, 0, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            r1 = rateQuintic(0, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            dd1 = rateQuintic(1, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            s1 = rateQuintic(2, 1, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            r2 = rateQuintic(0, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            dd2 = rateQuintic(1, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            s2 = rateQuintic(2, 2, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            r3 = rateQuintic(0, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            dd3 = rateQuintic(1, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-            s3 = rateQuintic(2, 3, s, h, i, j, loI, mI, loJ, mJ, a0, a1, a2, a3, a4, c0, c1, c2, c3, c4);
-        }
+        // ---- attitude: quintic Hermite per quaternion component: p(t) as r, p' as d, p'' as dd
+        double[] q = attitudes;
+        boolean measured = rates != null;
+        double qf00 = measured ? quaternionRate(0, i) : weigh(q, 4, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double qf10 = measured ? quaternionRate(0, j) : weigh(q, 4, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double qg00 = measured ? weighRates(0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 0, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
+        double qg10 = measured ? weighRates(0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 0, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
+        double q0a1 = h * qf00;
+        double q0a2 = 0.5 * hh * qg00;
+        double q0dv = q[4 * j + 0] - q[4 * i + 0] - q0a1 - q0a2;
+        double q0ds = h * qf10 - q0a1 - 2 * q0a2;
+        double q0dc = hh * qg10 - 2 * q0a2;
+        double q0k3 = 10 * q0dv - 4 * q0ds + 0.5 * q0dc;
+        double q0k4 = -15 * q0dv + 7 * q0ds - q0dc;
+        double q0k5 = 6 * q0dv - 3 * q0ds + 0.5 * q0dc;
+        double r0 = q[4 * i + 0] + s * (q0a1 + s * (q0a2 + s * (q0k3 + s * (q0k4 + s * q0k5))));
+        double d0 = (q0a1 + s * (2 * q0a2 + s * (3 * q0k3 + s * (4 * q0k4 + s * 5 * q0k5)))) * invH;
+        double dd0 = (2 * q0a2 + s * (6 * q0k3 + s * (12 * q0k4 + s * 20 * q0k5))) * invHH;
+        double qf01 = measured ? quaternionRate(1, i) : weigh(q, 4, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double qf11 = measured ? quaternionRate(1, j) : weigh(q, 4, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double qg01 = measured ? weighRates(1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 1, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
+        double qg11 = measured ? weighRates(1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 1, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
+        double q1a1 = h * qf01;
+        double q1a2 = 0.5 * hh * qg01;
+        double q1dv = q[4 * j + 1] - q[4 * i + 1] - q1a1 - q1a2;
+        double q1ds = h * qf11 - q1a1 - 2 * q1a2;
+        double q1dc = hh * qg11 - 2 * q1a2;
+        double q1k3 = 10 * q1dv - 4 * q1ds + 0.5 * q1dc;
+        double q1k4 = -15 * q1dv + 7 * q1ds - q1dc;
+        double q1k5 = 6 * q1dv - 3 * q1ds + 0.5 * q1dc;
+        double r1 = q[4 * i + 1] + s * (q1a1 + s * (q1a2 + s * (q1k3 + s * (q1k4 + s * q1k5))));
+        double d1 = (q1a1 + s * (2 * q1a2 + s * (3 * q1k3 + s * (4 * q1k4 + s * 5 * q1k5)))) * invH;
+        double dd1 = (2 * q1a2 + s * (6 * q1k3 + s * (12 * q1k4 + s * 20 * q1k5))) * invHH;
+        double qf02 = measured ? quaternionRate(2, i) : weigh(q, 4, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double qf12 = measured ? quaternionRate(2, j) : weigh(q, 4, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double qg02 = measured ? weighRates(2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 2, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
+        double qg12 = measured ? weighRates(2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 2, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
+        double q2a1 = h * qf02;
+        double q2a2 = 0.5 * hh * qg02;
+        double q2dv = q[4 * j + 2] - q[4 * i + 2] - q2a1 - q2a2;
+        double q2ds = h * qf12 - q2a1 - 2 * q2a2;
+        double q2dc = hh * qg12 - 2 * q2a2;
+        double q2k3 = 10 * q2dv - 4 * q2ds + 0.5 * q2dc;
+        double q2k4 = -15 * q2dv + 7 * q2ds - q2dc;
+        double q2k5 = 6 * q2dv - 3 * q2ds + 0.5 * q2dc;
+        double r2 = q[4 * i + 2] + s * (q2a1 + s * (q2a2 + s * (q2k3 + s * (q2k4 + s * q2k5))));
+        double d2 = (q2a1 + s * (2 * q2a2 + s * (3 * q2k3 + s * (4 * q2k4 + s * 5 * q2k5)))) * invH;
+        double dd2 = (2 * q2a2 + s * (6 * q2k3 + s * (12 * q2k4 + s * 20 * q2k5))) * invHH;
+        double qf03 = measured ? quaternionRate(3, i) : weigh(q, 4, 3, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+        double qf13 = measured ? quaternionRate(3, j) : weigh(q, 4, 3, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        double qg03 = measured ? weighRates(3, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 3, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
+        double qg13 = measured ? weighRates(3, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 3, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
+        double q3a1 = h * qf03;
+        double q3a2 = 0.5 * hh * qg03;
+        double q3dv = q[4 * j + 3] - q[4 * i + 3] - q3a1 - q3a2;
+        double q3ds = h * qf13 - q3a1 - 2 * q3a2;
+        double q3dc = hh * qg13 - 2 * q3a2;
+        double q3k3 = 10 * q3dv - 4 * q3ds + 0.5 * q3dc;
+        double q3k4 = -15 * q3dv + 7 * q3ds - q3dc;
+        double q3k5 = 6 * q3dv - 3 * q3ds + 0.5 * q3dc;
+        double r3 = q[4 * i + 3] + s * (q3a1 + s * (q3a2 + s * (q3k3 + s * (q3k4 + s * q3k5))));
+        double d3 = (q3a1 + s * (2 * q3a2 + s * (3 * q3k3 + s * (4 * q3k4 + s * 5 * q3k5)))) * invH;
+        double dd3 = (2 * q3a2 + s * (6 * q3k3 + s * (12 * q3k4 + s * 20 * q3k5))) * invHH;
 
-        // q = p / |p|; w = 2 vec(p* p') / |p|^2; al = 2 vec(p* p'') / |p|^2 - 2 (p . p') w / |p|^2
+        // q = p / |p|; w = 2 vec(p* p') / |p|^2; al = 2 vec(p* p'') / |p|^2 - 2 (p . p') w / |p|^2,
+        // with vec(a* b) = a0 b_v - b0 a_v - a_v x b_v
         double n2 = r0 * r0 + r1 * r1 + r2 * r2 + r3 * r3;
-        double inv2 = 1.0 / n2;
-        double invN = Math.sqrt(inv2);
-        double wx = 2 * inv2 * (r0 * dd1 - d0 * r1 - (r2 * dd3 - r3 * dd2));
-        double wy = 2 * inv2 * (r0 * dd2 - d0 * r2 - (r3 * dd1 - r1 * dd3));
-        double wz = 2 * inv2 * (r0 * dd3 - d0 * r3 - (r1 * dd2 - r2 * dd1));
-        double dot = 2 * inv2 * (r0 * d0 + r1 * dd1 + r2 * dd2 + r3 * dd3);
-        double alx = 2 * inv2 * (r0 * s1 - s0 * r1 - (r2 * s3 - r3 * s2)) - dot * wx;
-        double aly = 2 * inv2 * (r0 * s2 - s0 * r2 - (r3 * s1 - r1 * s3)) - dot * wy;
-        double alz = 2 * inv2 * (r0 * s3 - s0 * r3 - (r1 * s2 - r2 * s1)) - dot * wz;
+        double inv2 = 2.0 / n2;
+        double invN = 1.0 / Math.sqrt(n2);
+        double wx = inv2 * (r0 * d1 - d0 * r1 - (r2 * d3 - r3 * d2));
+        double wy = inv2 * (r0 * d2 - d0 * r2 - (r3 * d1 - r1 * d3));
+        double wz = inv2 * (r0 * d3 - d0 * r3 - (r1 * d2 - r2 * d1));
+        double dot = inv2 * (r0 * d0 + r1 * d1 + r2 * d2 + r3 * d3);
+        double alx = inv2 * (r0 * dd1 - dd0 * r1 - (r2 * dd3 - r3 * dd2)) - dot * wx;
+        double aly = inv2 * (r0 * dd2 - dd0 * r2 - (r3 * dd1 - r1 * dd3)) - dot * wy;
+        double alz = inv2 * (r0 * dd3 - dd0 * r3 - (r1 * dd2 - r2 * dd1)) - dot * wz;
         return Placement.ofQuaternion(px, py, pz, vx, vy, vz, ax, ay, az,
                 r0 * invN, r1 * invN, r2 * invN, r3 * invN, wx, wy, wz, alx, aly, alz);
     }
 
-    private static double pick(int k, double x0, double x1, double x2, double x3, double x4) {
-        switch (k) {
-            case 0: return x0;
-            case 1: return x1;
-            case 2: return x2;
-            case 3: return x3;
-            default: return x4;
+    /** Weight of the node at offset ua in the first derivative at offset 0 (Lagrange basis). */
+    private static double basis(double ua, double ub, double uc, double ud, boolean pb, boolean pc, boolean pd) {
+        double num = 1.0;
+        double den = ua;
+        if (pb) {
+            num *= ub;
+            den *= ub - ua;
         }
+        if (pc) {
+            num *= uc;
+            den *= uc - ua;
+        }
+        if (pd) {
+            num *= ud;
+            den *= ud - ua;
+        }
+        return num / den;
     }
 
     /** First index of the derivative stencil of knot k: up to five samples of k's run, centred. */
@@ -686,57 +694,11 @@ public final class SampledMotion implements Motion, Serializable {
         return hi - lo + 1;
     }
 
-    private static double weigh(double[] data, int stride, int comp, int lo, int m,
-                                double w0, double w1, double w2, double w3, double w4) {
-        int base = stride * lo + comp;
-        double sum = w0 * data[base] + w1 * data[base + stride];
-        if (m > 2) {
-            sum += w2 * data[base + 2 * stride];
-        }
-        if (m > 3) {
-            sum += w3 * data[base + 3 * stride];
-        }
-        if (m > 4) {
-            sum += w4 * data[base + 4 * stride];
-        }
-        return sum;
-    }
-
-    /**
-     * Quintic Hermite on [0, 1] in s = (t - t_i) / h from values y0, y1, first derivatives f0, f1
-     * and second derivatives g0, g1 in time; returns the value (order 0) or the first or second
-     * time derivative.
-     */
-    private static double quintic(int order, double s, double h, double y0, double y1,
-                                  double f0, double f1, double g0, double g1) {
-        double a1 = h * f0;
-        double a2 = 0.5 * h * h * g0;
-        double dv = y1 - y0 - a1 - a2;
-        double ds = h * f1 - a1 - 2 * a2;
-        double dc = h * h * g1 - 2 * a2;
-        double k3 = 10 * dv - 4 * ds + 0.5 * dc;
-        double k4 = -15 * dv + 7 * ds - dc;
-        double k5 = 6 * dv - 3 * ds + 0.5 * dc;
-        if (order == 0) {
-            return y0 + s * (a1 + s * (a2 + s * (k3 + s * (k4 + s * k5))));
-        }
-        if (order == 1) {
-            return (a1 + s * (2 * a2 + s * (3 * k3 + s * (4 * k4 + s * 5 * k5)))) / h;
-        }
-        return (2 * a2 + s * (6 * k3 + s * (12 * k4 + s * 20 * k5))) / (h * h);
-    }
-
     @SuppressWarnings("checkstyle:ParameterNumber")
-    private double quatQuintic(int order, int comp, double s, double h, int i, int j,
-                               int loI, int mI, int loJ, int mJ,
-                               double a0, double a1, double a2, double a3, double a4,
-                               double b0, double b1, double b2, double b3, double b4,
-                               double c0, double c1, double c2, double c3, double c4,
-                               double e0, double e1, double e2, double e3, double e4) {
-        double[] q = attitudes;
-        return quintic(order, s, h, q[4 * i + comp], q[4 * j + comp],
-                weigh(q, 4, comp, loI, mI, a0, a1, a2, a3, a4), weigh(q, 4, comp, loJ, mJ, c0, c1, c2, c3, c4),
-                weigh(q, 4, comp, loI, mI, b0, b1, b2, b3, b4), weigh(q, 4, comp, loJ, mJ, e0, e1, e2, e3, e4));
+    private static double weigh(double[] data, int stride, int comp, int k0, int k1, int k2, int k3, int k4,
+                                double w0, double w1, double w2, double w3, double w4) {
+        return w0 * data[stride * k0 + comp] + w1 * data[stride * k1 + comp] + w2 * data[stride * k2 + comp]
+                + w3 * data[stride * k3 + comp] + w4 * data[stride * k4 + comp];
     }
 
     /** Component comp of q' = q (0, w) / 2 at sample k, from the held attitude and measured rate. */
@@ -756,29 +718,11 @@ public final class SampledMotion implements Motion, Serializable {
         }
     }
 
-    private double weighRates(int comp, int lo, int m, double w0, double w1, double w2, double w3, double w4) {
-        double sum = w0 * quaternionRate(comp, lo) + w1 * quaternionRate(comp, lo + 1);
-        if (m > 2) {
-            sum += w2 * quaternionRate(comp, lo + 2);
-        }
-        if (m > 3) {
-            sum += w3 * quaternionRate(comp, lo + 3);
-        }
-        if (m > 4) {
-            sum += w4 * quaternionRate(comp, lo + 4);
-        }
-        return sum;
-    }
-
     @SuppressWarnings("checkstyle:ParameterNumber")
-    private double rateQuintic(int order, int comp, double s, double h, int i, int j,
-                               int loI, int mI, int loJ, int mJ,
-                               double a0, double a1, double a2, double a3, double a4,
-                               double c0, double c1, double c2, double c3, double c4) {
-        double[] q = attitudes;
-        return quintic(order, s, h, q[4 * i + comp], q[4 * j + comp],
-                quaternionRate(comp, i), quaternionRate(comp, j),
-                weighRates(comp, loI, mI, a0, a1, a2, a3, a4), weighRates(comp, loJ, mJ, c0, c1, c2, c3, c4));
+    private double weighRates(int comp, int k0, int k1, int k2, int k3, int k4,
+                              double w0, double w1, double w2, double w3, double w4) {
+        return w0 * quaternionRate(comp, k0) + w1 * quaternionRate(comp, k1) + w2 * quaternionRate(comp, k2)
+                + w3 * quaternionRate(comp, k3) + w4 * quaternionRate(comp, k4);
     }
 
     // ------------------------------------------------------------------ validation
