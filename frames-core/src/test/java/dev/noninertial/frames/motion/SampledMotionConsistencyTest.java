@@ -138,6 +138,44 @@ class SampledMotionConsistencyTest {
     }
 
     @Test
+    void concurrentQueriesAnswerAsSequentialOnes() throws Exception {
+        // immutability by construction: threads sharing one motion see bit-identical answers
+        AnalyticRecord r = new AnalyticRecord(jitteredTimes(300, 5));
+        SampledMotion m = r.withRates();
+        double[] queries = new double[5000];
+        Random random = new Random(9);
+        for (int k = 0; k < queries.length; k++) {
+            queries[k] = random.nextDouble() * m.end();
+        }
+        Placement[] expected = new Placement[queries.length];
+        for (int k = 0; k < queries.length; k++) {
+            expected[k] = m.at(queries[k]);
+        }
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            java.util.List<java.util.concurrent.Future<Integer>> results = new java.util.ArrayList<>();
+            for (int thread = 0; thread < 4; thread++) {
+                int offset = thread;
+                results.add(pool.submit(() -> {
+                    int mismatches = 0;
+                    for (int k = 0; k < queries.length; k++) {
+                        int index = (k * 7 + offset * 1237) % queries.length;
+                        if (!m.at(queries[index]).equals(expected[index])) {
+                            mismatches++;
+                        }
+                    }
+                    return mismatches;
+                }));
+            }
+            for (java.util.concurrent.Future<Integer> f : results) {
+                assertEquals(0, f.get().intValue());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Test
     void serializedCopyAnswersTheSame() throws Exception {
         AnalyticRecord r = AnalyticRecord.uniform(10, 5);
         SampledMotion m = r.withRates().withMaxGap(0.5);
