@@ -577,7 +577,7 @@ public final class Placement implements Serializable {
         }
     }
 
-    private static void checkBulk(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
+    static void checkBulk(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         Arguments.nonNull("source", source);
         Arguments.nonNull("target", target);
         if (count < 0) {
@@ -672,6 +672,161 @@ public final class Placement implements Serializable {
         double y = vectorInBase.getY();
         double z = vectorInBase.getZ();
         return new Vector3D(r00 * x + r01 * y + r02 * z, r10 * x + r11 * y + r12 * z, r20 * x + r21 * y + r22 * z);
+    }
+
+    // ------------------------------------------------------------------ primitive layout
+
+    /**
+     * Number of doubles one placement occupies in the primitive layout of
+     * {@link #toArray(double[], int)} and {@link Motion#at(double, double[], int)}.
+     */
+    public static final int COMPONENTS = 24;
+
+    /**
+     * Writes this placement on primitives, {@link #COMPONENTS} consecutive doubles in this order:
+     * origin o (3, m), origin velocity o' (3, m/s), origin acceleration o'' (3, m/s^2), all in B
+     * axes; the orientation matrix R row by row (9; {@code v_F = R v_B}, row i holds F's axis i
+     * in B components); angular velocity w (3, rad/s) and angular acceleration al (3, rad/s^2)
+     * of F relative to B, in F axes. Allocates nothing.
+     *
+     * @param target destination array
+     * @param offset index where o's x component is written
+     * @throws IllegalArgumentException if the range does not fit the array
+     */
+    public void toArray(double[] target, int offset) {
+        Arguments.nonNull("target", target);
+        if (offset < 0 || offset > target.length - COMPONENTS) {
+            throw new IllegalArgumentException("offset must be in [0, " + (target.length - COMPONENTS)
+                    + "] for an array of length " + target.length + ", got " + offset);
+        }
+        int o = offset;
+        target[o] = ox;
+        target[o + 1] = oy;
+        target[o + 2] = oz;
+        target[o + 3] = ovx;
+        target[o + 4] = ovy;
+        target[o + 5] = ovz;
+        target[o + 6] = oax;
+        target[o + 7] = oay;
+        target[o + 8] = oaz;
+        target[o + 9] = r00;
+        target[o + 10] = r01;
+        target[o + 11] = r02;
+        target[o + 12] = r10;
+        target[o + 13] = r11;
+        target[o + 14] = r12;
+        target[o + 15] = r20;
+        target[o + 16] = r21;
+        target[o + 17] = r22;
+        target[o + 18] = wx;
+        target[o + 19] = wy;
+        target[o + 20] = wz;
+        target[o + 21] = alx;
+        target[o + 22] = aly;
+        target[o + 23] = alz;
+    }
+
+    /**
+     * Converts one state F to B with the placement given in the primitive layout of
+     * {@link #toArray(double[], int)}; same arithmetic as {@link #toBase(PointState)}.
+     * No checks: callers validate the ranges.
+     */
+    static void toBase(double[] p, int po, double[] source, int i, double[] target, int j) {
+        double x = source[i];
+        double y = source[i + 1];
+        double z = source[i + 2];
+        double vx = source[i + 3];
+        double vy = source[i + 4];
+        double vz = source[i + 5];
+        double ax = source[i + 6];
+        double ay = source[i + 7];
+        double az = source[i + 8];
+        double m00 = p[po + 9];
+        double m01 = p[po + 10];
+        double m02 = p[po + 11];
+        double m10 = p[po + 12];
+        double m11 = p[po + 13];
+        double m12 = p[po + 14];
+        double m20 = p[po + 15];
+        double m21 = p[po + 16];
+        double m22 = p[po + 17];
+        double qx = p[po + 18];
+        double qy = p[po + 19];
+        double qz = p[po + 20];
+        double bx = p[po + 21];
+        double by = p[po + 22];
+        double bz = p[po + 23];
+        double cx = qy * z - qz * y;
+        double cy = qz * x - qx * z;
+        double cz = qx * y - qy * x;
+        double vfx = vx + cx;
+        double vfy = vy + cy;
+        double vfz = vz + cz;
+        double afx = ax + (by * z - bz * y) + 2 * (qy * vz - qz * vy) + (qy * cz - qz * cy);
+        double afy = ay + (bz * x - bx * z) + 2 * (qz * vx - qx * vz) + (qz * cx - qx * cz);
+        double afz = az + (bx * y - by * x) + 2 * (qx * vy - qy * vx) + (qx * cy - qy * cx);
+        target[j] = p[po] + m00 * x + m10 * y + m20 * z;
+        target[j + 1] = p[po + 1] + m01 * x + m11 * y + m21 * z;
+        target[j + 2] = p[po + 2] + m02 * x + m12 * y + m22 * z;
+        target[j + 3] = p[po + 3] + m00 * vfx + m10 * vfy + m20 * vfz;
+        target[j + 4] = p[po + 4] + m01 * vfx + m11 * vfy + m21 * vfz;
+        target[j + 5] = p[po + 5] + m02 * vfx + m12 * vfy + m22 * vfz;
+        target[j + 6] = p[po + 6] + m00 * afx + m10 * afy + m20 * afz;
+        target[j + 7] = p[po + 7] + m01 * afx + m11 * afy + m21 * afz;
+        target[j + 8] = p[po + 8] + m02 * afx + m12 * afy + m22 * afz;
+    }
+
+    /**
+     * Converts one state B to F with the placement given in the primitive layout of
+     * {@link #toArray(double[], int)}; same arithmetic as {@link #fromBase(PointState)}.
+     * No checks: callers validate the ranges.
+     */
+    static void fromBase(double[] p, int po, double[] source, int i, double[] target, int j) {
+        double dx = source[i] - p[po];
+        double dy = source[i + 1] - p[po + 1];
+        double dz = source[i + 2] - p[po + 2];
+        double ux = source[i + 3] - p[po + 3];
+        double uy = source[i + 4] - p[po + 4];
+        double uz = source[i + 5] - p[po + 5];
+        double bx = source[i + 6] - p[po + 6];
+        double by = source[i + 7] - p[po + 7];
+        double bz = source[i + 8] - p[po + 8];
+        double m00 = p[po + 9];
+        double m01 = p[po + 10];
+        double m02 = p[po + 11];
+        double m10 = p[po + 12];
+        double m11 = p[po + 13];
+        double m12 = p[po + 14];
+        double m20 = p[po + 15];
+        double m21 = p[po + 16];
+        double m22 = p[po + 17];
+        double qx = p[po + 18];
+        double qy = p[po + 19];
+        double qz = p[po + 20];
+        double ex = p[po + 21];
+        double ey = p[po + 22];
+        double ez = p[po + 23];
+        double rx = m00 * dx + m01 * dy + m02 * dz;
+        double ry = m10 * dx + m11 * dy + m12 * dz;
+        double rz = m20 * dx + m21 * dy + m22 * dz;
+        double cx = qy * rz - qz * ry;
+        double cy = qz * rx - qx * rz;
+        double cz = qx * ry - qy * rx;
+        double vx = m00 * ux + m01 * uy + m02 * uz - cx;
+        double vy = m10 * ux + m11 * uy + m12 * uz - cy;
+        double vz = m20 * ux + m21 * uy + m22 * uz - cz;
+        target[j] = rx;
+        target[j + 1] = ry;
+        target[j + 2] = rz;
+        target[j + 3] = vx;
+        target[j + 4] = vy;
+        target[j + 5] = vz;
+        target[j + 6] = m00 * bx + m01 * by + m02 * bz - (ey * rz - ez * ry) - 2 * (qy * vz - qz * vy)
+                - (qy * cz - qz * cy);
+        target[j + 7] = m10 * bx + m11 * by + m12 * bz - (ez * rx - ex * rz) - 2 * (qz * vx - qx * vz)
+                - (qz * cx - qx * cz);
+        target[j + 8] = m20 * bx + m21 * by + m22 * bz - (ex * ry - ey * rx) - 2 * (qx * vy - qy * vx)
+                - (qx * cy - qy * cx);
     }
 
     // ------------------------------------------------------------------ object methods
