@@ -158,14 +158,6 @@ public class BulkBenchmark {
         return target;
     }
 
-    /** @return library, spin-up motion at one time per state, base to frame */
-    @Benchmark
-    @OperationsPerInvocation(N)
-    public double[] motionFromBaseLibrary() {
-        spin.fromBase(times, 0, source, 0, target, 0, N);
-        return target;
-    }
-
     private static void store(ObjectBaseline.Kinematics s, double[] target, int i) {
         target[i] = s.position().getX();
         target[i + 1] = s.position().getY();

@@ -14,6 +14,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
+import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.ReferenceFrame;
 
@@ -34,6 +35,7 @@ public class ChainBenchmark {
     @Param({"1", "3", "6"})
     public int depth;
 
+    Motion[] links = Scenario.chainMotions();
     ReferenceFrame root;
     ReferenceFrame leaf;
     double t;
@@ -75,5 +77,21 @@ public class ChainBenchmark {
         t = next(t);
         PrimitiveBaseline.chain(depth, t, scratch, out);
         return out;
+    }
+
+    /**
+     * The same {@code depth} link motions evaluated alone with {@link Motion#at(double)}, not
+     * composed: the part of the chain's cost that is the motions themselves.
+     *
+     * @return a sum of components, so that nothing is optimized away
+     */
+    @Benchmark
+    public double linksAlone() {
+        t = next(t);
+        double sum = 0;
+        for (int i = 0; i < depth; i++) {
+            sum += links[i].at(t).origin().getX();
+        }
+        return sum;
     }
 }
