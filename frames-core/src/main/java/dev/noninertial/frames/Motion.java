@@ -10,6 +10,9 @@ package dev.noninertial.frames;
  * {@code dev.noninertial.frames.motion.Motions}.
  *
  * <p>Implementations should be immutable and thread-safe; every motion of this library is.
+ * Frames travel through Java serialization (for example to the executors of a distributed Monte
+ * Carlo job) only when their motions are serializable: every motion of this library is; a user
+ * lambda must be declared so, as in {@code (Motion & Serializable) t -> ...}.
  */
 @FunctionalInterface
 public interface Motion {
@@ -31,9 +34,7 @@ public interface Motion {
      * @return the motion of the moving frame relative to the parent
      */
     default Motion then(Motion inner) {
-        Arguments.nonNull("inner", inner);
-        Motion outer = this;
-        return t -> outer.at(t).then(inner.at(t));
+        return new StackedMotion(this, Arguments.nonNull("inner", inner));
     }
 
     /**

@@ -1,0 +1,8 @@
+// Start-up script for the noninertial frames library: imports every public package so that an
+// analyst can start typing at once. Conventions: SI units; the orientation R of a frame F in its
+// base B maps B components to F components (v_F = R v_B); angular velocity and acceleration of F
+// relative to B are resolved in F.
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import dev.noninertial.frames.*;
+import dev.noninertial.frames.motion.*;
