@@ -35,8 +35,8 @@ public class ChainBenchmark {
     @Param({"1", "3", "6"})
     public int depth;
 
-    Motion[] links = Scenario.chainMotions();
     ReferenceFrame root;
+    ReferenceFrame[] singles;
     ReferenceFrame leaf;
     double t;
     double[] scratch = new double[PrimitiveBaseline.P];
@@ -48,6 +48,11 @@ public class ChainBenchmark {
         ReferenceFrame[] frames = Scenario.chain(depth);
         root = frames[0];
         leaf = frames[depth];
+        Motion[] links = Scenario.chainMotions();
+        singles = new ReferenceFrame[depth];
+        for (int i = 0; i < depth; i++) {
+            singles[i] = root.attach("single" + i, links[i]);
+        }
         t = 0.0;
     }
 
@@ -80,17 +85,19 @@ public class ChainBenchmark {
     }
 
     /**
-     * The same {@code depth} link motions evaluated alone with {@link Motion#at(double)}, not
-     * composed: the part of the chain's cost that is the motions themselves.
+     * Each of the same {@code depth} link motions as a frame attached directly to the root, placed
+     * with {@link ReferenceFrame#placementIn(ReferenceFrame, double)} one after the other: the
+     * cost of the links as single links, without composing them. Divided by {@code depth}, it is
+     * the mean cost of one single link of this chain.
      *
      * @return a sum of components, so that nothing is optimized away
      */
     @Benchmark
-    public double linksAlone() {
+    public double eachLinkAlone() {
         t = next(t);
         double sum = 0;
         for (int i = 0; i < depth; i++) {
-            sum += links[i].at(t).origin().getX();
+            sum += singles[i].placementIn(root, t).origin().getX();
         }
         return sum;
     }
