@@ -210,10 +210,10 @@ public final class HotPathGate {
         return new Speed(path, ratios, gated);
     }
 
-    /** Best of five calls, in ns: the minimum is the least disturbed by other processes. */
+    /** Best of 15 calls, in ns: the minimum is the least disturbed by other processes. */
     private static double time(Runnable r) {
         long best = Long.MAX_VALUE;
-        for (int k = 0; k < 5; k++) {
+        for (int k = 0; k < 15; k++) {
             long t0 = System.nanoTime();
             r.run();
             best = Math.min(best, System.nanoTime() - t0);

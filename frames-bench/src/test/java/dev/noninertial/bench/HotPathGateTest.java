@@ -31,7 +31,7 @@ class HotPathGateTest {
 
     @Test
     void hotPathsAreNotGrosslySlowerThanHandWrittenCode() {
-        int rounds = Integer.getInteger("bench.gate.rounds", 5);
+        int rounds = Integer.getInteger("bench.gate.rounds", 7);
         List<HotPathGate.Speed> rows = HotPathGate.speeds(rounds);
         String table = HotPathGate.formatSpeeds(rows);
         System.out.print(table);

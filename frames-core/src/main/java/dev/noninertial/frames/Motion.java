@@ -45,7 +45,8 @@ public interface Motion {
      * <p>This is what the bulk conversions {@link #toBase(double[], int, double[], int, double[], int, int)}
      * and {@link #fromBase(double[], int, double[], int, double[], int, int)} call once per state.
      * The default implementation calls {@link #at(double)} and copies the result, so it
-     * <em>allocates one {@link Placement} per call</em>. Every motion made by
+     * <em>allocates one {@link Placement} per call</em> (the JIT's escape analysis may remove that
+     * allocation once the code is hot, but nothing guarantees it). Every motion made by
      * {@code dev.noninertial.frames.motion.Motions} except {@code compose} overrides it and
      * allocates nothing; a user motion on a hot path should override it too, writing exactly the
      * values {@link #at(double)} would return.
