@@ -1,0 +1,135 @@
+package dev.noninertial.frames.dynamics;
+
+import java.util.List;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
+
+import dev.noninertial.frames.FictitiousAccelerations;
+import dev.noninertial.frames.FramedState;
+import dev.noninertial.frames.Placement;
+import dev.noninertial.frames.PointState;
+import dev.noninertial.frames.ReferenceFrame;
+
+/**
+ * Newton's law written in a possibly non-inertial frame F, state y = (r, v) seen in F:
+ * r' = v, v' = f_real - R o'' - al x r - 2 w x v - w x (w x r), with the placement of F in the
+ * inertial root. Stateless after construction, so one instance serves a run and every later
+ * query of its trajectory, from any thread.
+ */
+final class MotionEquations implements OrdinaryDifferentialEquation {
+
+    private final ReferenceFrame frame;
+    private final ReferenceFrame root;
+    private final SpecificForce[] forces;
+
+    MotionEquations(ReferenceFrame frame, List<SpecificForce> forces) {
+        this.frame = frame;
+        this.root = frame.root();
+        this.forces = forces.toArray(new SpecificForce[0]);
+    }
+
+    ReferenceFrame frame() {
+        return frame;
+    }
+
+    @Override
+    public int getDimension() {
+        return 6;
+    }
+
+    @Override
+    public double[] computeDerivatives(double t, double[] y) {
+        checkState(t, y);
+        Vector3D f = realForce(t, y);
+        Placement p = placement(t, y);
+        Vector3D w = p.angularVelocity();
+        Vector3D al = p.angularAcceleration();
+        // R o'': the frame origin's inertial acceleration in F axes; it enters with a minus sign
+        Vector3D ro = p.vectorFromBase(p.originAcceleration());
+        double wx = w.getX();
+        double wy = w.getY();
+        double wz = w.getZ();
+        double x = y[0];
+        double yy = y[1];
+        double z = y[2];
+        double vx = y[3];
+        double vy = y[4];
+        double vz = y[5];
+        double cx = wy * z - wz * yy;
+        double cy = wz * x - wx * z;
+        double cz = wx * yy - wy * x;
+        double ax = f.getX() - ro.getX() - (al.getY() * z - al.getZ() * yy) - 2 * (wy * vz - wz * vy)
+                - (wy * cz - wz * cy);
+        double ay = f.getY() - ro.getY() - (al.getZ() * x - al.getX() * z) - 2 * (wz * vx - wx * vz)
+                - (wz * cx - wx * cz);
+        double az = f.getZ() - ro.getZ() - (al.getX() * yy - al.getY() * x) - 2 * (wx * vy - wy * vx)
+                - (wx * cy - wy * cx);
+        return new double[] {vx, vy, vz, ax, ay, az};
+    }
+
+    /** The point with its acceleration from the equations of motion, tagged with F and t. */
+    FramedState framed(double t, double[] y) {
+        TrajectorySample s = sample(t, y);
+        return s.state();
+    }
+
+    /** Full breakdown at (t, y). */
+    TrajectorySample sample(double t, double[] y) {
+        checkState(t, y);
+        Vector3D f = realForce(t, y);
+        PointState bare = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
+        FictitiousAccelerations fict = placement(t, y).fictitious(bare);
+        PointState full = bare.withAcceleration(f.add(fict.total()));
+        return new TrajectorySample(FramedState.of(frame, t, full), f, fict);
+    }
+
+    /** Sum of the real forces, refused with time and state when a force misbehaves. */
+    Vector3D realForce(double t, double[] y) {
+        if (forces.length == 0) {
+            return Vector3D.ZERO;
+        }
+        PointState s = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
+        double fx = 0;
+        double fy = 0;
+        double fz = 0;
+        for (int i = 0; i < forces.length; i++) {
+            Vector3D f;
+            try {
+                f = forces[i].at(t, s);
+            } catch (TrajectoryFailure e) {
+                throw e;
+            } catch (RuntimeException e) {
+                throw new TrajectoryFailure("specific force #" + i + " threw " + e, t, y, e);
+            }
+            if (f == null) {
+                throw new TrajectoryFailure("specific force #" + i + " returned null", t, y, null);
+            }
+            if (!Double.isFinite(f.getX()) || !Double.isFinite(f.getY()) || !Double.isFinite(f.getZ())) {
+                throw new TrajectoryFailure("specific force #" + i + " returned a non-finite value ("
+                        + f.getX() + ", " + f.getY() + ", " + f.getZ() + ") m/s^2", t, y, null);
+            }
+            fx += f.getX();
+            fy += f.getY();
+            fz += f.getZ();
+        }
+        return new Vector3D(fx, fy, fz);
+    }
+
+    private Placement placement(double t, double[] y) {
+        try {
+            return frame.placementIn(root, t);
+        } catch (RuntimeException e) {
+            throw new TrajectoryFailure("motion of frame '" + frame.path() + "' failed (" + e.getMessage() + ")",
+                    t, y, e);
+        }
+    }
+
+    static void checkState(double t, double[] y) {
+        for (double c : y) {
+            if (!Double.isFinite(c)) {
+                throw new TrajectoryFailure("state became non-finite", t, y, null);
+            }
+        }
+    }
+}

@@ -1,0 +1,426 @@
+package dev.noninertial.geodesy;
+
+import java.io.Serializable;
+import java.util.Locale;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.Orientations;
+
+/**
+ * An oblate ellipsoid of revolution about the z axis: semi-major axis {@code a} and flattening
+ * {@code f = (a - b) / a}. It carries the geodetic conversions, the radii of curvature and the
+ * local-level axes.
+ *
+ * <p>Conventions: Cartesian coordinates are Earth-fixed (ECEF: origin at the centre, z along the
+ * axis of revolution toward the north pole, x in the plane of longitude 0, y completing a
+ * right-handed set), in metres. Angles are in radians. {@link LatLonHeight} holds geodetic
+ * latitude (angle of the ellipsoid normal above the equator), longitude and height along the
+ * normal.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class Ellipsoid implements Serializable {
+
+    private static final long serialVersionUID = 1L;
+
+    /** Smallest accepted semi-major axis (m). */
+    public static final double MIN_SEMI_MAJOR_AXIS = 1.0;
+
+    /** Largest accepted semi-major axis (m). */
+    public static final double MAX_SEMI_MAJOR_AXIS = 1.0e10;
+
+    /** Largest accepted flattening; beyond it the shape is no longer a planet-like body. */
+    public static final double MAX_FLATTENING = 0.5;
+
+    /** WGS84: a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., Table 3.1). */
+    public static final Ellipsoid WGS84 = ofInverseFlattening(6378137.0, 298.257223563);
+
+    /** GRS80: a = 6378137 m, 1/f = 298.257222101 (Moritz, Geodetic Reference System 1980). */
+    public static final Ellipsoid GRS80 = ofInverseFlattening(6378137.0, 298.257222101);
+
+    private final double a;
+    private final double f;
+    private final double b;
+    private final double e2;
+    private final double ep2;
+    /** a^2 - b^2, the squared linear eccentricity (m^2). */
+    private final double linear2;
+
+    private Ellipsoid(double a, double f) {
+        this.a = a;
+        this.f = f;
+        this.b = a * (1.0 - f);
+        this.e2 = f * (2.0 - f);
+        this.ep2 = e2 / ((1.0 - f) * (1.0 - f));
+        this.linear2 = a * a * e2;
+    }
+
+    /**
+     * An ellipsoid from semi-major axis and flattening.
+     *
+     * @param semiMajorAxis a (m), in [{@value #MIN_SEMI_MAJOR_AXIS}, {@value #MAX_SEMI_MAJOR_AXIS}]
+     * @param flattening f = (a - b) / a, in [0, {@value #MAX_FLATTENING}] (0 is a sphere)
+     * @return the ellipsoid
+     * @throws IllegalArgumentException if a value is NaN or out of its range
+     */
+    public static Ellipsoid of(double semiMajorAxis, double flattening) {
+        Arguments.inRange("semiMajorAxis (m)", semiMajorAxis, MIN_SEMI_MAJOR_AXIS, MAX_SEMI_MAJOR_AXIS);
+        Arguments.inRange("flattening", flattening, 0.0, MAX_FLATTENING);
+        return new Ellipsoid(semiMajorAxis, flattening);
+    }
+
+    /**
+     * An ellipsoid from semi-major axis and inverse flattening, the way standards publish them.
+     *
+     * @param semiMajorAxis a (m), in [{@value #MIN_SEMI_MAJOR_AXIS}, {@value #MAX_SEMI_MAJOR_AXIS}]
+     * @param inverseFlattening 1/f, at least 2 (use {@link #of(double, double)} with f = 0 for a sphere)
+     * @return the ellipsoid
+     * @throws IllegalArgumentException if a value is NaN or out of its range
+     */
+    public static Ellipsoid ofInverseFlattening(double semiMajorAxis, double inverseFlattening) {
+        if (!(inverseFlattening >= 1.0 / MAX_FLATTENING) || Double.isInfinite(inverseFlattening)) {
+            throw new IllegalArgumentException("inverseFlattening must be finite and >= "
+                    + (1.0 / MAX_FLATTENING) + ", got " + inverseFlattening);
+        }
+        return of(semiMajorAxis, 1.0 / inverseFlattening);
+    }
+
+    /** @return semi-major (equatorial) axis a (m) */
+    public double semiMajorAxis() {
+        return a;
+    }
+
+    /** @return semi-minor (polar) axis b = a (1 - f) (m) */
+    public double semiMinorAxis() {
+        return b;
+    }
+
+    /** @return flattening f = (a - b) / a */
+    public double flattening() {
+        return f;
+    }
+
+    /** @return first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2 */
+    public double eccentricitySquared() {
+        return e2;
+    }
+
+    /** @return second eccentricity squared e'^2 = (a^2 - b^2) / b^2 */
+    public double secondEccentricitySquared() {
+        return ep2;
+    }
+
+    /** @return linear eccentricity E = sqrt(a^2 - b^2) (m) */
+    public double linearEccentricity() {
+        return Math.sqrt(linear2);
+    }
+
+    // ------------------------------------------------------------------ radii
+
+    /**
+     * Meridian radius of curvature {@code RM = a (1 - e^2) / (1 - e^2 sin^2 lat)^1.5}.
+     *
+     * @param latitude geodetic latitude (rad), in [-pi/2, pi/2]
+     * @return RM (m)
+     * @throws IllegalArgumentException if the latitude is out of range or NaN
+     */
+    public double meridianRadius(double latitude) {
+        checkLatitude(latitude);
+        double s = Math.sin(latitude);
+        double w2 = 1.0 - e2 * s * s;
+        return a * (1.0 - e2) / (w2 * Math.sqrt(w2));
+    }
+
+    /**
+     * Prime-vertical radius of curvature {@code RN = a / sqrt(1 - e^2 sin^2 lat)} (the radius of
+     * curvature in the east-west direction; also the length of the normal from the surface to the
+     * polar axis).
+     *
+     * @param latitude geodetic latitude (rad), in [-pi/2, pi/2]
+     * @return RN (m)
+     * @throws IllegalArgumentException if the latitude is out of range or NaN
+     */
+    public double primeVerticalRadius(double latitude) {
+        checkLatitude(latitude);
+        double s = Math.sin(latitude);
+        return a / Math.sqrt(1.0 - e2 * s * s);
+    }
+
+    static void checkLatitude(double latitude) {
+        if (!(Math.abs(latitude) <= 0.5 * Math.PI)) {
+            throw new IllegalArgumentException("latitude must be in [-pi/2, pi/2] rad ([-90, 90] deg), got "
+                    + latitude + " rad");
+        }
+    }
+
+    // ------------------------------------------------------------------ conversions
+
+    /**
+     * Geodetic to Earth-fixed Cartesian:
+     * {@code x = (RN + h) cos lat cos lon, y = (RN + h) cos lat sin lon, z = (RN (1 - e^2) + h) sin lat}.
+     *
+     * @param position geodetic position (radians, metres)
+     * @return Earth-fixed Cartesian position (m), ECEF axes
+     */
+    public Vector3D toCartesian(LatLonHeight position) {
+        Arguments.nonNull("position", position);
+        double sLat = Math.sin(position.latitude());
+        double cLat = Math.cos(position.latitude());
+        double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);
+        double h = position.height();
+        double rp = (n + h) * cLat;
+        return new Vector3D(rp * Math.cos(position.longitude()), rp * Math.sin(position.longitude()),
+                (n * (1.0 - e2) + h) * sLat);
+    }
+
+    /**
+     * Earth-fixed Cartesian to geodetic, exact to double precision for every point (all
+     * latitudes including the poles, the centre and the region inside the evolute of the
+     * meridian ellipse included).
+     *
+     * <p>Method: the foot point F on the ellipse satisfies {@code X - F = s grad(q)/2} with
+     * {@code q = p^2/a^2 + z^2/b^2 - 1}, which gives {@code F = (a^2 p/(a^2+s), b^2 z/(b^2+s))}
+     * and one scalar equation in {@code s}, strictly decreasing and convex on the admissible
+     * interval (the classical Lagrange-multiplier form of the nearest-point problem). It is solved
+     * by Newton's method in {@code sigma = b^2 + s}, started from a Bowring-type estimate and kept
+     * inside a proven bracket, so it converges monotonically from below in a few steps. The
+     * latitude follows from the normal at F and the height from the projection of X on it.
+     * At the centre the nearest surface points are the poles: the result is latitude +pi/2,
+     * height -b. On the axis the longitude is reported as 0.
+     *
+     * @param position Earth-fixed Cartesian position (m), ECEF axes, finite
+     * @return geodetic position: latitude in [-pi/2, pi/2], longitude in [-pi, pi] (rad), height (m)
+     * @throws IllegalArgumentException if a component is NaN or infinite
+     */
+    public LatLonHeight toGeodetic(Vector3D position) {
+        Arguments.finite("position", position);
+        double x = position.getX();
+        double y = position.getY();
+        double zs = position.getZ();
+        double p = Math.hypot(x, y);
+        double lon = p == 0.0 ? 0.0 : longitude(x, y);
+        double z = Math.abs(zs);
+        double lat;
+        if (p == 0.0) {
+            lat = 0.5 * Math.PI;
+        } else if (z == 0.0 && a * p <= linear2) {
+            // on the equatorial plane inside the evolute: the nearest foot points are off the
+            // plane (two mirror images); the northern one is reported
+            double fp = a * p / linear2;                      // cos of the parametric latitude
+            double sinBeta = Math.sqrt((1.0 - fp) * (1.0 + fp));
+            lat = Math.atan2(a * sinBeta, b * fp);
+        } else {
+            lat = footLatitude(p, z);
+        }
+        return new LatLonHeight(zs < 0 ? -lat : lat, lon, height(x, y, p, z, lat));
+    }
+
+    /**
+     * Height {@code h = p cos lat + z sin lat - a sqrt(1 - e^2 sin^2 lat)}: projection of (p, z)
+     * on the normal minus the foot point's own projection. Near the surface the three terms are
+     * about 6e6 m and cancel, so each is carried as an unevaluated sum of two doubles (products
+     * split exactly with fused multiply-add); this keeps the height to about 0.3 nm instead of
+     * about 2 nm.
+     */
+    private double height(double x, double y, double p, double z, double lat) {
+        double sLat = Math.sin(lat);
+        double cLat = Math.cos(lat);
+        // low part of p = sqrt(x^2 + y^2)
+        double xx = x * x;
+        double xxl = Math.fma(x, x, -xx);
+        double yy = y * y;
+        double yyl = Math.fma(y, y, -yy);
+        double pp = xx + yy;
+        double ppl = (xx - pp) + yy + xxl + yyl;     // |xx| >= |yy| is not needed for this bound
+        if (Math.abs(yy) > Math.abs(xx)) {
+            ppl = (yy - pp) + xx + xxl + yyl;
+        }
+        double pl = (Math.fma(-p, p, pp) + ppl) / (2.0 * p);
+        if (p == 0.0) {
+            pl = 0.0;
+        }
+        // W^2 = 1 - e^2 sin^2 lat as a double-double, then W and a W
+        double ss = sLat * sLat;
+        double ssl = Math.fma(sLat, sLat, -ss);
+        double q = e2 * ss;
+        double ql = Math.fma(e2, ss, -q) + e2 * ssl;
+        double t = 1.0 - q;
+        double tl = ((1.0 - t) - q) - ql;
+        double w = Math.sqrt(t);
+        double wl = (Math.fma(-w, w, t) + tl) / (2.0 * w);
+        double aw = a * w;
+        double awl = Math.fma(a, w, -aw) + a * wl;
+        // p cos + z sin - a W with exact products and a compensated sum
+        double r1 = p * cLat;
+        double r1l = Math.fma(p, cLat, -r1) + pl * cLat;
+        double r2 = z * sLat;
+        double r2l = Math.fma(z, sLat, -r2);
+        double s1 = r1 + r2;
+        double s1l = twoSumError(r1, r2, s1);
+        double s2 = s1 - aw;
+        double s2l = twoSumError(s1, -aw, s2);
+        return s2 + (s2l + s1l + r1l + r2l - awl);
+    }
+
+    /**
+     * Longitude from atan2 plus one Newton correction on {@code y cos(lon) - x sin(lon) = 0}
+     * with the products split exactly: atan2 alone can be 2 ulp off, which near lon = +-pi is
+     * 3 nm on the equator.
+     */
+    private static double longitude(double x, double y) {
+        double lon = Math.atan2(y, x);
+        double c = Math.cos(lon);
+        double s = Math.sin(lon);
+        double xs = x * s;
+        double xsl = Math.fma(x, s, -xs);
+        double residual = Math.fma(y, c, -xs) - xsl;
+        double correction = residual / (x * c + y * s);
+        double corrected = lon + correction;
+        // keep the documented range [-pi, pi]
+        return Math.abs(corrected) <= Math.PI ? corrected : lon;
+    }
+
+    /** Rounding error of {@code s = u + v} (Knuth's two-sum). */
+    private static double twoSumError(double u, double v, double s) {
+        double vv = s - u;
+        return (u - (s - vv)) + (v - vv);
+    }
+
+    /** Geodetic latitude in [0, pi/2] of the foot point of (p &gt; 0, z &gt;= 0). */
+    private double footLatitude(double p, double z) {
+        double ap = a * p;
+        double bz = b * z;
+        // bracket of the root of G(sigma) = (ap/(E2+sigma))^2 + (bz/sigma)^2 - 1 (see Javadoc)
+        double lo = Math.max(bz, ap - linear2);
+        double hi = Math.hypot(ap, bz);
+        // starting value: Bowring's one-step latitude, then sigma = b^2 + h a^2 / N
+        double beta = Math.atan2(a * z, b * p);
+        double sb = Math.sin(beta);
+        double cb = Math.cos(beta);
+        double lat0 = Math.atan2(z + ep2 * b * sb * sb * sb, p - e2 * a * cb * cb * cb);
+        double s0 = Math.sin(lat0);
+        double w0 = Math.sqrt(1.0 - e2 * s0 * s0);
+        double h0 = p * Math.cos(lat0) + z * s0 - a * w0;
+        double sigma = b * b + h0 * a * w0;
+        if (!(sigma > lo)) {
+            sigma = lo;
+        } else if (sigma > hi) {
+            sigma = hi;
+        }
+        if (sigma <= 0.0) {
+            // only when z == 0 and ap == E2 exactly (on the evolute's cusp): foot point on the equator
+            return 0.0;
+        }
+        for (int k = 0; k < 60; k++) {
+            double u = ap / (linear2 + sigma);
+            double v = bz / sigma;
+            double g = u * u + v * v - 1.0;
+            double slope = -2.0 * (u * u / (linear2 + sigma) + v * v / sigma);
+            double next = sigma - g / slope;
+            if (k > 0 && g <= 0.0) {
+                break; // convex and decreasing: from below, reaching G <= 0 means converged
+            }
+            if (!(next > lo)) {
+                next = lo;
+            }
+            if (next == sigma) {
+                break;
+            }
+            sigma = next;
+        }
+        double lat = Math.atan2(z * (linear2 + sigma), p * sigma);
+        return polish(p, z, lat);
+    }
+
+    /**
+     * One Newton correction of the latitude on the normal condition
+     * {@code p sin(lat) - z cos(lat) - RN e^2 sin(lat) cos(lat) = 0}, with the two large
+     * products split exactly: the atan2 above can be 1 to 2 ulp off, 1.5 nm on the surface.
+     */
+    private double polish(double p, double z, double lat) {
+        double s = Math.sin(lat);
+        double c = Math.cos(lat);
+        double w2 = 1.0 - e2 * s * s;
+        double n = a / Math.sqrt(w2);
+        double zc = z * c;
+        double zcl = Math.fma(z, c, -zc);
+        double residual = Math.fma(p, s, -zc) - zcl - n * e2 * s * c;
+        double slope = p * c + z * s - n * e2 * (c * c - s * s);
+        if (!(slope > 0.0)) {
+            return lat; // inside the evolute the condition is not monotonic: keep the bracketed root
+        }
+        double corrected = lat - residual / slope;
+        return Math.abs(corrected - lat) < 1e-12 && corrected <= 0.5 * Math.PI && corrected >= 0.0
+                ? corrected : lat;
+    }
+
+    // ------------------------------------------------------------------ normal and local axes
+
+    /**
+     * Outward unit normal of the ellipsoid through a geodetic position ("up"), in ECEF axes:
+     * {@code (cos lat cos lon, cos lat sin lon, sin lat)}. It does not depend on the height.
+     *
+     * @param position geodetic position (rad)
+     * @return unit up vector, ECEF axes
+     */
+    public Vector3D normal(LatLonHeight position) {
+        Arguments.nonNull("position", position);
+        double c = Math.cos(position.latitude());
+        return new Vector3D(c * Math.cos(position.longitude()), c * Math.sin(position.longitude()),
+                Math.sin(position.latitude()));
+    }
+
+    /**
+     * Orientation of the local-level axes at a geodetic position relative to ECEF axes.
+     *
+     * <p>Convention (the library's): the returned rotation's {@code applyTo} maps ECEF components
+     * to local components, {@code v_local = R v_ECEF}. With east
+     * {@code e = (-sin lon, cos lon, 0)}, north {@code n = (-sin lat cos lon, -sin lat sin lon, cos lat)}
+     * and up {@code u} the normal: the rows of R are (e, n, u) for {@link LocalAxes#ENU} and
+     * (n, e, -u) for {@link LocalAxes#NED}.
+     *
+     * @param position geodetic position (rad); the height plays no part
+     * @param axes axis order
+     * @return orientation of the local-level frame in ECEF
+     */
+    public Rotation localOrientation(LatLonHeight position, LocalAxes axes) {
+        Arguments.nonNull("position", position);
+        return Orientations.fromMatrix(localRows(position.latitude(), position.longitude(), axes));
+    }
+
+    /** Rows of the ECEF-to-local matrix at (lat, lon). */
+    static double[][] localRows(double lat, double lon, LocalAxes axes) {
+        Arguments.nonNull("axes", axes);
+        double sLat = Math.sin(lat);
+        double cLat = Math.cos(lat);
+        double sLon = Math.sin(lon);
+        double cLon = Math.cos(lon);
+        double[] east = {-sLon, cLon, 0.0};
+        double[] north = {-sLat * cLon, -sLat * sLon, cLat};
+        double[] up = {cLat * cLon, cLat * sLon, sLat};
+        if (axes == LocalAxes.ENU) {
+            return new double[][] {east, north, up};
+        }
+        return new double[][] {north, east, {-up[0], -up[1], -up[2]}};
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof Ellipsoid
+                && Double.compare(a, ((Ellipsoid) other).a) == 0
+                && Double.compare(f, ((Ellipsoid) other).f) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * Double.hashCode(a) + Double.hashCode(f);
+    }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "Ellipsoid{a=%.4f m, 1/f=%.9f}", a, f == 0 ? Double.POSITIVE_INFINITY : 1 / f);
+    }
+}
