@@ -77,6 +77,18 @@ public final class BenchmarkReport {
         r.add(new Ratio("bulk F to B through a motion at one time per state / (b)", b + "motionToBaseLibrary", b + "motionToBasePrimitives", "at most 1.2", 1.2));
         r.add(new Ratio("bulk F to B through a motion at one time per state / (a)", b + "motionToBaseLibrary", b + "motionToBaseObjects", "", Double.NaN));
         r.add(new Ratio("object API in a loop over the same states / (b) (for reference)", b + "motionToBaseLibraryObjects", b + "motionToBasePrimitives", "", Double.NaN));
+        String g = "GeodesyBenchmark.";
+        r.add(new Ratio("geodetic to Cartesian, library / (a) objects", g + "toCartesianLibrary", g + "toCartesianObjects", "", Double.NaN));
+        r.add(new Ratio("geodetic to Cartesian, library / (b) primitives", g + "toCartesianLibrary", g + "toCartesianPrimitives", "", Double.NaN));
+        r.add(new Ratio("Cartesian to geodetic (exact), library / (a) fixed-point iteration", g + "toGeodeticLibrary", g + "toGeodeticObjects", "", Double.NaN));
+        r.add(new Ratio("Cartesian to geodetic (exact), library / (b) Bowring, two passes", g + "toGeodeticLibrary", g + "toGeodeticPrimitives", "", Double.NaN));
+        r.add(new Ratio("Cartesian to geodetic / geodetic to Cartesian, library", g + "toGeodeticLibrary", g + "toCartesianLibrary", "at most 3", 3));
+        r.add(new Ratio("Earth rotation angle, library / (b) formula without checks", g + "eraLibrary", g + "eraPrimitives", "", Double.NaN));
+        String d = "DynamicsBenchmark.";
+        r.add(new Ratio("one integrator step, library / (a) same integrator, Vector3D equations", d + "stepLibrary", d + "stepObjects", "", Double.NaN));
+        r.add(new Ratio("one integrator step, library / (b) same integrator, primitive equations", d + "stepLibrary", d + "stepPrimitives", "", Double.NaN));
+        r.add(new Ratio("100 s trajectory, library / (a)", d + "trajectoryLibrary", d + "trajectoryObjects", "", Double.NaN));
+        r.add(new Ratio("100 s trajectory, library / (b)", d + "trajectoryLibrary", d + "trajectoryPrimitives", "", Double.NaN));
         return r;
     }
 
