@@ -107,5 +107,26 @@ public final class GeodesyFigures {
             worstRest = Math.max(worstRest, seen.getNorm());
         }
         System.out.printf("point held on the ellipsoid, residual acceleration in ECEF: %.2e m/s^2%n", worstRest);
+        // finite-difference checks (five-point stencil) of a carried frame and a body frame
+        GeodeticPath course = GeodeticPath.steadyCourse(wgs, LatLonHeight.ofDegrees(58.0, -4.0, 30.0), 8.0, -5.0);
+        ReferenceFrame level = earth.carriedLevel("level", course, LocalAxes.NED);
+        report("carried level in ECEF", level, earth.earthFixed(), 5400.0, 1.0);
+        report("carried level in ECI", level, earth.inertial(), 5400.0, 1.0);
+        AttitudeProfile sway = s -> new AttitudeSample(
+                0.7 + 0.1 * Math.sin(0.2 * s), 0.05 * Math.sin(0.5 * s + 1), 0.2 * Math.sin(0.3 * s),
+                0.02 * Math.cos(0.2 * s), 0.025 * Math.cos(0.5 * s + 1), 0.06 * Math.cos(0.3 * s),
+                -0.004 * Math.sin(0.2 * s), -0.0125 * Math.sin(0.5 * s + 1), -0.018 * Math.sin(0.3 * s));
+        ReferenceFrame body = earth.body(level, "hull", sway);
+        report("body in carried level", body, level, 37.0, 1e-3);
+        report("body in ECI", body, earth.inertial(), 37.0, 1e-3);
+    }
+
+    private static void report(String what, ReferenceFrame f, ReferenceFrame b, double t, double h) {
+        Placement p = f.placementIn(b, t);
+        double dw = EarthFramesTest.angularVelocityByDifferences(f, b, t, h).distance(p.angularVelocity());
+        double da = EarthFramesTest.differentiate(x -> f.placementIn(b, x).angularVelocity(), t, h)
+                .distance(p.angularAcceleration());
+        System.out.printf("%s: |w - fd| %.2e rad/s (|w| %.2e), |al - fd| %.2e rad/s^2 (|al| %.2e), step %.0e s%n",
+                what, dw, p.angularVelocity().getNorm(), da, p.angularAcceleration().getNorm(), h);
     }
 }
