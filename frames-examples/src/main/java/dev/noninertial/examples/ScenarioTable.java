@@ -63,6 +63,9 @@ final class ScenarioTable {
 
     private String cellText(int column, Object cell) {
         if (cell instanceof Double d) {
+            if (d.isNaN()) {
+                return ""; // a scalar row has no vector components
+            }
             return String.format(Locale.ROOT, columns.get(column).format(), d);
         }
         return String.valueOf(cell);
@@ -117,7 +120,7 @@ final class ScenarioTable {
             for (Object[] r : rows) {
                 List<String> cells = new ArrayList<>();
                 for (Object cell : r) {
-                    cells.add(cell instanceof Double d ? Double.toString(d) : csv(String.valueOf(cell)));
+                    cells.add(cell instanceof Double d ? (d.isNaN() ? "" : Double.toString(d)) : csv(String.valueOf(cell)));
                 }
                 w.write(String.join(",", cells));
                 w.write('\n');

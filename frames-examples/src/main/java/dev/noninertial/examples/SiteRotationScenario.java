@@ -59,7 +59,6 @@ final class SiteRotationScenario {
         row(table, "held point after 60 s, gravitation passed", heldRight, "m");
         row(table, "held point after 60 s, gravity passed (mistake)", heldWrong, "m");
         table.note("integrate gravitation, not gravity, in an Earth-fixed frame: the engine adds the centrifugal term");
-        table.note("NaN: no vector components for a scalar quantity");
         return table;
     }
 
