@@ -36,4 +36,110 @@ public interface Motion {
     default Motion then(Motion inner) {
         return new StackedMotion(this, Arguments.nonNull("inner", inner));
     }
+
+    /**
+     * Writes the placement at time {@code t} on primitives, in the layout of
+     * {@link Placement#toArray(double[], int)} ({@link Placement#COMPONENTS} doubles: o, o', o''
+     * in parent axes; R row by row with {@code v_F = R v_B}; w and al in the moving frame's axes).
+     *
+     * <p>This is what the bulk conversions {@link #toBase(double[], int, double[], int, double[], int, int)}
+     * and {@link #fromBase(double[], int, double[], int, double[], int, int)} call once per state.
+     * The default implementation calls {@link #at(double)} and copies the result, so it
+     * <em>allocates one {@link Placement} per call</em> (the JIT's escape analysis may remove that
+     * allocation once the code is hot, but nothing guarantees it). Every motion made by
+     * {@code dev.noninertial.frames.motion.Motions} except {@code compose} overrides it and
+     * allocates nothing; a user motion on a hot path should override it too, writing exactly the
+     * values {@link #at(double)} would return.
+     *
+     * @param t time (s from the user's epoch)
+     * @param target destination array
+     * @param offset index where o's x component is written
+     * @throws IllegalArgumentException if {@code t} is outside the span where the motion is known,
+     *         or the range does not fit the array
+     * @throws IllegalStateException if {@link #at(double)} returns null
+     */
+    default void at(double t, double[] target, int offset) {
+        Placement p = at(t);
+        if (p == null) {
+            throw new IllegalStateException("motion " + this + " returned a null placement at t = " + t);
+        }
+        p.toArray(target, offset);
+    }
+
+    /**
+     * Bulk conversion of states seen in the moving frame F to its parent B, each state at its own
+     * time: state {@code k} (9 doubles x, y, z, vx, vy, vz, ax, ay, az, see
+     * {@link PointState#COMPONENTS}) is converted through the placement at
+     * {@code times[timeOffset + k]}, with all terms of {@link Placement#toBase(PointState)}.
+     *
+     * <p>When to use it: for many states (a logged track, a particle cloud, a batch of sensor
+     * samples) kept in primitive arrays, where one {@link Placement} and one {@link PointState} per
+     * sample would dominate the cost. It allocates one scratch array of
+     * {@link Placement#COMPONENTS} doubles per call and nothing per state, provided
+     * {@link #at(double, double[], int)} allocates nothing (true for the motions of
+     * {@code Motions} except {@code compose}; the default for a user lambda allocates one
+     * placement per state). For one state, or states already held as objects, use
+     * {@link Placement#toBase(PointState)}; for many states at one time, use
+     * {@link Placement#toBase(double[], int, double[], int, int)}.
+     *
+     * <p>Source and target may be the same array when the offsets are equal (in-place).
+     *
+     * @param times time of each state (s from the user's epoch)
+     * @param timeOffset index of the first state's time in {@code times}
+     * @param source states seen in F
+     * @param sourceOffset index of the first state's x in {@code source}
+     * @param target receives the states seen in B (caller-owned)
+     * @param targetOffset index of the first state's x in {@code target}
+     * @param count number of states
+     * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
+     *         with different offsets, or a time is outside the span where the motion is known
+     */
+    default void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
+                        double[] target, int targetOffset, int count) {
+        Placement.checkBulk(source, sourceOffset, target, targetOffset, count);
+        checkTimes(times, timeOffset, count);
+        double[] p = new double[Placement.COMPONENTS];
+        for (int k = 0; k < count; k++) {
+            at(times[timeOffset + k], p, 0);
+            Placement.toBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
+                    target, targetOffset + k * PointState.COMPONENTS);
+        }
+    }
+
+    /**
+     * Bulk conversion of states seen in the parent B to the moving frame F, each state at its own
+     * time; the inverse of {@link #toBase(double[], int, double[], int, double[], int, int)}, with
+     * all terms of {@link Placement#fromBase(PointState)}, the same layout, the same allocation
+     * behaviour (nothing per state when {@link #at(double, double[], int)} allocates nothing) and
+     * the same advice on when to use it.
+     *
+     * @param times time of each state (s from the user's epoch)
+     * @param timeOffset index of the first state's time in {@code times}
+     * @param source states seen in B
+     * @param sourceOffset index of the first state's x in {@code source}
+     * @param target receives the states seen in F (caller-owned)
+     * @param targetOffset index of the first state's x in {@code target}
+     * @param count number of states
+     * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
+     *         with different offsets, or a time is outside the span where the motion is known
+     */
+    default void fromBase(double[] times, int timeOffset, double[] source, int sourceOffset,
+                          double[] target, int targetOffset, int count) {
+        Placement.checkBulk(source, sourceOffset, target, targetOffset, count);
+        checkTimes(times, timeOffset, count);
+        double[] p = new double[Placement.COMPONENTS];
+        for (int k = 0; k < count; k++) {
+            at(times[timeOffset + k], p, 0);
+            Placement.fromBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
+                    target, targetOffset + k * PointState.COMPONENTS);
+        }
+    }
+
+    private static void checkTimes(double[] times, int timeOffset, int count) {
+        Arguments.nonNull("times", times);
+        if (timeOffset < 0 || (long) timeOffset + count > times.length) {
+            throw new IllegalArgumentException("timeOffset must be in [0, " + (times.length - count)
+                    + "] for " + count + " states, got " + timeOffset);
+        }
+    }
 }

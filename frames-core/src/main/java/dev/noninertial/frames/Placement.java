@@ -577,7 +577,7 @@ public final class Placement implements Serializable {
         }
     }
 
-    private static void checkBulk(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
+    static void checkBulk(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         Arguments.nonNull("source", source);
         Arguments.nonNull("target", target);
         if (count < 0) {
@@ -672,6 +672,311 @@ public final class Placement implements Serializable {
         double y = vectorInBase.getY();
         double z = vectorInBase.getZ();
         return new Vector3D(r00 * x + r01 * y + r02 * z, r10 * x + r11 * y + r12 * z, r20 * x + r21 * y + r22 * z);
+    }
+
+    // ------------------------------------------------------------------ primitive layout
+
+    /**
+     * Number of doubles one placement occupies in the primitive layout of
+     * {@link #toArray(double[], int)} and {@link Motion#at(double, double[], int)}.
+     */
+    public static final int COMPONENTS = 24;
+
+    /**
+     * Writes this placement on primitives, {@link #COMPONENTS} consecutive doubles in this order:
+     * origin o (3, m), origin velocity o' (3, m/s), origin acceleration o'' (3, m/s^2), all in B
+     * axes; the orientation matrix R row by row (9; {@code v_F = R v_B}, row i holds F's axis i
+     * in B components); angular velocity w (3, rad/s) and angular acceleration al (3, rad/s^2)
+     * of F relative to B, in F axes. Allocates nothing.
+     *
+     * @param target destination array
+     * @param offset index where o's x component is written
+     * @throws IllegalArgumentException if the range does not fit the array
+     */
+    public void toArray(double[] target, int offset) {
+        Arguments.nonNull("target", target);
+        if (offset < 0 || offset > target.length - COMPONENTS) {
+            throw new IllegalArgumentException("offset must be in [0, " + (target.length - COMPONENTS)
+                    + "] for an array of length " + target.length + ", got " + offset);
+        }
+        int o = offset;
+        target[o] = ox;
+        target[o + 1] = oy;
+        target[o + 2] = oz;
+        target[o + 3] = ovx;
+        target[o + 4] = ovy;
+        target[o + 5] = ovz;
+        target[o + 6] = oax;
+        target[o + 7] = oay;
+        target[o + 8] = oaz;
+        target[o + 9] = r00;
+        target[o + 10] = r01;
+        target[o + 11] = r02;
+        target[o + 12] = r10;
+        target[o + 13] = r11;
+        target[o + 14] = r12;
+        target[o + 15] = r20;
+        target[o + 16] = r21;
+        target[o + 17] = r22;
+        target[o + 18] = wx;
+        target[o + 19] = wy;
+        target[o + 20] = wz;
+        target[o + 21] = alx;
+        target[o + 22] = aly;
+        target[o + 23] = alz;
+    }
+
+    /**
+     * Converts one state F to B with the placement given in the primitive layout of
+     * {@link #toArray(double[], int)}; same arithmetic as {@link #toBase(PointState)}.
+     * No checks: callers validate the ranges.
+     */
+    static void toBase(double[] p, int po, double[] source, int i, double[] target, int j) {
+        double x = source[i];
+        double y = source[i + 1];
+        double z = source[i + 2];
+        double vx = source[i + 3];
+        double vy = source[i + 4];
+        double vz = source[i + 5];
+        double ax = source[i + 6];
+        double ay = source[i + 7];
+        double az = source[i + 8];
+        double m00 = p[po + 9];
+        double m01 = p[po + 10];
+        double m02 = p[po + 11];
+        double m10 = p[po + 12];
+        double m11 = p[po + 13];
+        double m12 = p[po + 14];
+        double m20 = p[po + 15];
+        double m21 = p[po + 16];
+        double m22 = p[po + 17];
+        double qx = p[po + 18];
+        double qy = p[po + 19];
+        double qz = p[po + 20];
+        double bx = p[po + 21];
+        double by = p[po + 22];
+        double bz = p[po + 23];
+        double cx = qy * z - qz * y;
+        double cy = qz * x - qx * z;
+        double cz = qx * y - qy * x;
+        double vfx = vx + cx;
+        double vfy = vy + cy;
+        double vfz = vz + cz;
+        double afx = ax + (by * z - bz * y) + 2 * (qy * vz - qz * vy) + (qy * cz - qz * cy);
+        double afy = ay + (bz * x - bx * z) + 2 * (qz * vx - qx * vz) + (qz * cx - qx * cz);
+        double afz = az + (bx * y - by * x) + 2 * (qx * vy - qy * vx) + (qx * cy - qy * cx);
+        target[j] = p[po] + m00 * x + m10 * y + m20 * z;
+        target[j + 1] = p[po + 1] + m01 * x + m11 * y + m21 * z;
+        target[j + 2] = p[po + 2] + m02 * x + m12 * y + m22 * z;
+        target[j + 3] = p[po + 3] + m00 * vfx + m10 * vfy + m20 * vfz;
+        target[j + 4] = p[po + 4] + m01 * vfx + m11 * vfy + m21 * vfz;
+        target[j + 5] = p[po + 5] + m02 * vfx + m12 * vfy + m22 * vfz;
+        target[j + 6] = p[po + 6] + m00 * afx + m10 * afy + m20 * afz;
+        target[j + 7] = p[po + 7] + m01 * afx + m11 * afy + m21 * afz;
+        target[j + 8] = p[po + 8] + m02 * afx + m12 * afy + m22 * afz;
+    }
+
+    /**
+     * Converts one state B to F with the placement given in the primitive layout of
+     * {@link #toArray(double[], int)}; same arithmetic as {@link #fromBase(PointState)}.
+     * No checks: callers validate the ranges.
+     */
+    static void fromBase(double[] p, int po, double[] source, int i, double[] target, int j) {
+        double dx = source[i] - p[po];
+        double dy = source[i + 1] - p[po + 1];
+        double dz = source[i + 2] - p[po + 2];
+        double ux = source[i + 3] - p[po + 3];
+        double uy = source[i + 4] - p[po + 4];
+        double uz = source[i + 5] - p[po + 5];
+        double bx = source[i + 6] - p[po + 6];
+        double by = source[i + 7] - p[po + 7];
+        double bz = source[i + 8] - p[po + 8];
+        double m00 = p[po + 9];
+        double m01 = p[po + 10];
+        double m02 = p[po + 11];
+        double m10 = p[po + 12];
+        double m11 = p[po + 13];
+        double m12 = p[po + 14];
+        double m20 = p[po + 15];
+        double m21 = p[po + 16];
+        double m22 = p[po + 17];
+        double qx = p[po + 18];
+        double qy = p[po + 19];
+        double qz = p[po + 20];
+        double ex = p[po + 21];
+        double ey = p[po + 22];
+        double ez = p[po + 23];
+        double rx = m00 * dx + m01 * dy + m02 * dz;
+        double ry = m10 * dx + m11 * dy + m12 * dz;
+        double rz = m20 * dx + m21 * dy + m22 * dz;
+        double cx = qy * rz - qz * ry;
+        double cy = qz * rx - qx * rz;
+        double cz = qx * ry - qy * rx;
+        double vx = m00 * ux + m01 * uy + m02 * uz - cx;
+        double vy = m10 * ux + m11 * uy + m12 * uz - cy;
+        double vz = m20 * ux + m21 * uy + m22 * uz - cz;
+        target[j] = rx;
+        target[j + 1] = ry;
+        target[j + 2] = rz;
+        target[j + 3] = vx;
+        target[j + 4] = vy;
+        target[j + 5] = vz;
+        target[j + 6] = m00 * bx + m01 * by + m02 * bz - (ey * rz - ez * ry) - 2 * (qy * vz - qz * vy)
+                - (qy * cz - qz * cy);
+        target[j + 7] = m10 * bx + m11 * by + m12 * bz - (ez * rx - ex * rz) - 2 * (qz * vx - qx * vz)
+                - (qz * cx - qx * cz);
+        target[j + 8] = m20 * bx + m21 * by + m22 * bz - (ex * ry - ey * rx) - 2 * (qx * vy - qy * vx)
+                - (qx * cy - qy * cx);
+    }
+
+    /**
+     * Composition on the primitive layout of {@link #toArray(double[], int)}, with exactly the
+     * arithmetic of {@link #then(Placement)}: {@code a} is F in B, {@code b} is G in F, {@code out}
+     * receives G in B. {@code out} may be the same range as {@code a} or {@code b}. No checks.
+     */
+    @SuppressWarnings("checkstyle:MethodLength")
+    static void compose(double[] a, int ao, double[] b, int bo, double[] out, int oo) {
+        double ox = a[ao + 0];
+        double oy = a[ao + 1];
+        double oz = a[ao + 2];
+        double ovx = a[ao + 3];
+        double ovy = a[ao + 4];
+        double ovz = a[ao + 5];
+        double oax = a[ao + 6];
+        double oay = a[ao + 7];
+        double oaz = a[ao + 8];
+        double r00 = a[ao + 9];
+        double r01 = a[ao + 10];
+        double r02 = a[ao + 11];
+        double r10 = a[ao + 12];
+        double r11 = a[ao + 13];
+        double r12 = a[ao + 14];
+        double r20 = a[ao + 15];
+        double r21 = a[ao + 16];
+        double r22 = a[ao + 17];
+        double wx = a[ao + 18];
+        double wy = a[ao + 19];
+        double wz = a[ao + 20];
+        double alx = a[ao + 21];
+        double aly = a[ao + 22];
+        double alz = a[ao + 23];
+        double qox = b[bo + 0];
+        double qoy = b[bo + 1];
+        double qoz = b[bo + 2];
+        double qovx = b[bo + 3];
+        double qovy = b[bo + 4];
+        double qovz = b[bo + 5];
+        double qoax = b[bo + 6];
+        double qoay = b[bo + 7];
+        double qoaz = b[bo + 8];
+        double qr00 = b[bo + 9];
+        double qr01 = b[bo + 10];
+        double qr02 = b[bo + 11];
+        double qr10 = b[bo + 12];
+        double qr11 = b[bo + 13];
+        double qr12 = b[bo + 14];
+        double qr20 = b[bo + 15];
+        double qr21 = b[bo + 16];
+        double qr22 = b[bo + 17];
+        double qwx = b[bo + 18];
+        double qwy = b[bo + 19];
+        double qwz = b[bo + 20];
+        double qalx = b[bo + 21];
+        double qaly = b[bo + 22];
+        double qalz = b[bo + 23];
+        // origin of G: the point (o, o', o'') of b, seen in F, converted to B
+        double px = qox;
+        double py = qoy;
+        double pz = qoz;
+        double pvx = qovx;
+        double pvy = qovy;
+        double pvz = qovz;
+        // w x p
+        double cx = wy * pz - wz * py;
+        double cy = wz * px - wx * pz;
+        double cz = wx * py - wy * px;
+        double vfx = pvx + cx;
+        double vfy = pvy + cy;
+        double vfz = pvz + cz;
+        // al x p + 2 w x pv + w x (w x p)
+        double afx = qoax + (aly * pz - alz * py) + 2 * (wy * pvz - wz * pvy) + (wy * cz - wz * cy);
+        double afy = qoay + (alz * px - alx * pz) + 2 * (wz * pvx - wx * pvz) + (wz * cx - wx * cz);
+        double afz = qoaz + (alx * py - aly * px) + 2 * (wx * pvy - wy * pvx) + (wx * cy - wy * cx);
+
+        // R_GB = Rq * Rp
+        double m00 = qr00 * r00 + qr01 * r10 + qr02 * r20;
+        double m01 = qr00 * r01 + qr01 * r11 + qr02 * r21;
+        double m02 = qr00 * r02 + qr01 * r12 + qr02 * r22;
+        double m10 = qr10 * r00 + qr11 * r10 + qr12 * r20;
+        double m11 = qr10 * r01 + qr11 * r11 + qr12 * r21;
+        double m12 = qr10 * r02 + qr11 * r12 + qr12 * r22;
+        double m20 = qr20 * r00 + qr21 * r10 + qr22 * r20;
+        double m21 = qr20 * r01 + qr21 * r11 + qr22 * r21;
+        double m22 = qr20 * r02 + qr21 * r12 + qr22 * r22;
+
+        // Rq w and Rq al
+        double twx = qr00 * wx + qr01 * wy + qr02 * wz;
+        double twy = qr10 * wx + qr11 * wy + qr12 * wz;
+        double twz = qr20 * wx + qr21 * wy + qr22 * wz;
+        double tax = qr00 * alx + qr01 * aly + qr02 * alz;
+        double tay = qr10 * alx + qr11 * aly + qr12 * alz;
+        double taz = qr20 * alx + qr21 * aly + qr22 * alz;
+
+        double nox = ox + r00 * px + r10 * py + r20 * pz;
+        double noy = oy + r01 * px + r11 * py + r21 * pz;
+        double noz = oz + r02 * px + r12 * py + r22 * pz;
+        double novx = ovx + r00 * vfx + r10 * vfy + r20 * vfz;
+        double novy = ovy + r01 * vfx + r11 * vfy + r21 * vfz;
+        double novz = ovz + r02 * vfx + r12 * vfy + r22 * vfz;
+        double noax = oax + r00 * afx + r10 * afy + r20 * afz;
+        double noay = oay + r01 * afx + r11 * afy + r21 * afz;
+        double noaz = oaz + r02 * afx + r12 * afy + r22 * afz;
+        double nr00 = m00;
+        double nr01 = m01;
+        double nr02 = m02;
+        double nr10 = m10;
+        double nr11 = m11;
+        double nr12 = m12;
+        double nr20 = m20;
+        double nr21 = m21;
+        double nr22 = m22;
+        double nwx = qwx + twx;
+        double nwy = qwy + twy;
+        double nwz = qwz + twz;
+        double nalx = qalx + tax - (qwy * twz - qwz * twy);
+        double naly = qaly + tay - (qwz * twx - qwx * twz);
+        double nalz = qalz + taz - (qwx * twy - qwy * twx);
+        out[oo + 0] = nox;
+        out[oo + 1] = noy;
+        out[oo + 2] = noz;
+        out[oo + 3] = novx;
+        out[oo + 4] = novy;
+        out[oo + 5] = novz;
+        out[oo + 6] = noax;
+        out[oo + 7] = noay;
+        out[oo + 8] = noaz;
+        out[oo + 9] = nr00;
+        out[oo + 10] = nr01;
+        out[oo + 11] = nr02;
+        out[oo + 12] = nr10;
+        out[oo + 13] = nr11;
+        out[oo + 14] = nr12;
+        out[oo + 15] = nr20;
+        out[oo + 16] = nr21;
+        out[oo + 17] = nr22;
+        out[oo + 18] = nwx;
+        out[oo + 19] = nwy;
+        out[oo + 20] = nwz;
+        out[oo + 21] = nalx;
+        out[oo + 22] = naly;
+        out[oo + 23] = nalz;
+    }
+
+    /** A placement from the primitive layout of {@link #toArray(double[], int)}; no checks. */
+    static Placement fromArray(double[] c, int o) {
+        return new Placement(c[o], c[o + 1], c[o + 2], c[o + 3], c[o + 4], c[o + 5], c[o + 6], c[o + 7], c[o + 8],
+                c[o + 9], c[o + 10], c[o + 11], c[o + 12], c[o + 13], c[o + 14], c[o + 15], c[o + 16], c[o + 17],
+                c[o + 18], c[o + 19], c[o + 20], c[o + 21], c[o + 22], c[o + 23]);
     }
 
     // ------------------------------------------------------------------ object methods

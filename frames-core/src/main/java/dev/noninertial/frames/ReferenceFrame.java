@@ -140,14 +140,29 @@ public final class ReferenceFrame implements Serializable {
         if (this == ancestor) {
             return Placement.identity();
         }
+        if (parent != ancestor) {
+            // two links or more: compose on primitives, one scratch array instead of two
+            // placements per link; same arithmetic as then(), hence the same bits
+            double[] work = new double[2 * Placement.COMPONENTS];
+            placeInAncestor(ancestor, t, work);
+            return Placement.fromArray(work, 0);
+        }
         Placement local = motion.at(t);
         if (local == null) {
             throw new IllegalStateException("motion of frame '" + path() + "' returned null at t = " + t);
         }
+        return local;
+    }
+
+    /** Writes the placement of this frame in a strict ancestor into work[0, 24); work[24, 48) is scratch. */
+    private void placeInAncestor(ReferenceFrame ancestor, double t, double[] work) {
         if (parent == ancestor) {
-            return local;
+            motion.at(t, work, 0);
+            return;
         }
-        return parent.placementInAncestor(ancestor, t).then(local);
+        parent.placeInAncestor(ancestor, t, work);
+        motion.at(t, work, Placement.COMPONENTS);
+        Placement.compose(work, 0, work, Placement.COMPONENTS, work, 0);
     }
 
     /**

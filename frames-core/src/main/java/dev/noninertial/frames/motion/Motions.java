@@ -167,6 +167,83 @@ public final class Motions {
                 th2 * n.getX(), th2 * n.getY(), th2 * n.getZ());
     }
 
+    /**
+     * Writes the placement of a turn by angle {@code th} about the unit axis {@code (nx, ny, nz)}
+     * with rate {@code th1} and acceleration {@code th2} (origin at rest at zero) in the layout of
+     * {@link Placement#toArray(double[], int)}, with exactly the arithmetic of {@link Placement#ofQuaternion} so that
+     * both paths give identical bits. No checks.
+     */
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static void writeTurn(double nx, double ny, double nz, double th, double th1, double th2,
+                          double[] target, int o) {
+        double half = 0.5 * th;
+        double s = Math.sin(half);
+        double q0 = Math.cos(half);
+        double q1 = s * nx;
+        double q2 = s * ny;
+        double q3 = s * nz;
+        double q0q0 = q0 * q0;
+        double q0q1 = q0 * q1;
+        double q0q2 = q0 * q2;
+        double q0q3 = q0 * q3;
+        double q1q1 = q1 * q1;
+        double q1q2 = q1 * q2;
+        double q1q3 = q1 * q3;
+        double q2q2 = q2 * q2;
+        double q2q3 = q2 * q3;
+        double q3q3 = q3 * q3;
+        for (int k = 0; k < 9; k++) {
+            target[o + k] = 0.0;
+        }
+        target[o + 9] = 2.0 * (q0q0 + q1q1) - 1.0;
+        target[o + 10] = 2.0 * (q1q2 + q0q3);
+        target[o + 11] = 2.0 * (q1q3 - q0q2);
+        target[o + 12] = 2.0 * (q1q2 - q0q3);
+        target[o + 13] = 2.0 * (q0q0 + q2q2) - 1.0;
+        target[o + 14] = 2.0 * (q2q3 + q0q1);
+        target[o + 15] = 2.0 * (q1q3 + q0q2);
+        target[o + 16] = 2.0 * (q2q3 - q0q1);
+        target[o + 17] = 2.0 * (q0q0 + q3q3) - 1.0;
+        target[o + 18] = th1 * nx;
+        target[o + 19] = th1 * ny;
+        target[o + 20] = th1 * nz;
+        target[o + 21] = th2 * nx;
+        target[o + 22] = th2 * ny;
+        target[o + 23] = th2 * nz;
+    }
+
+    /**
+     * Writes a pure translation (identity orientation, no rotation rates) in the layout of
+     * {@link Placement#toArray(double[], int)}. No checks.
+     */
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static void writeTranslation(double px, double py, double pz, double vx, double vy, double vz,
+                                 double ax, double ay, double az, double[] target, int o) {
+        target[o] = px;
+        target[o + 1] = py;
+        target[o + 2] = pz;
+        target[o + 3] = vx;
+        target[o + 4] = vy;
+        target[o + 5] = vz;
+        target[o + 6] = ax;
+        target[o + 7] = ay;
+        target[o + 8] = az;
+        for (int k = 9; k < Placement.COMPONENTS; k++) {
+            target[o + k] = 0.0;
+        }
+        target[o + 9] = 1.0;
+        target[o + 13] = 1.0;
+        target[o + 17] = 1.0;
+    }
+
+    private static void checkTarget(double[] target, int offset) {
+        Arguments.nonNull("target", target);
+        if (offset < 0 || offset > target.length - Placement.COMPONENTS) {
+            throw new IllegalArgumentException("offset must be in [0, " + (target.length - Placement.COMPONENTS)
+                    + "] for an array of length " + target.length + ", got " + offset);
+        }
+    }
+
     private static void checkTime(double t) {
         if (!Double.isFinite(t)) {
             throw new IllegalArgumentException("t must be finite, got " + t);
@@ -178,6 +255,12 @@ public final class Motions {
         public Placement at(double t) {
             checkTime(t);
             return placement;
+        }
+
+        @Override
+        public void at(double t, double[] target, int offset) {
+            checkTime(t);
+            placement.toArray(target, offset);
         }
 
         @Override
@@ -193,6 +276,18 @@ public final class Motions {
             checkTime(t);
             double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
             return turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration);
+        }
+
+        @Override
+        public void at(double t, double[] target, int offset) {
+            checkTime(t);
+            checkTarget(target, offset);
+            double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
+            if (!Double.isFinite(angle)) {
+                throw new IllegalArgumentException("spin angle overflows at t = " + t + ": it must stay finite");
+            }
+            writeTurn(axis.getX(), axis.getY(), axis.getZ(), angle, rateAtZero + angularAcceleration * t,
+                    angularAcceleration, target, offset);
         }
 
         @Override
@@ -213,6 +308,17 @@ public final class Motions {
             double c = Math.cos(arg);
             return turn(axis, amplitude * s, amplitude * angularFrequency * c,
                     -amplitude * angularFrequency * angularFrequency * s);
+        }
+
+        @Override
+        public void at(double t, double[] target, int offset) {
+            checkTime(t);
+            checkTarget(target, offset);
+            double arg = angularFrequency * t + phase;
+            double s = Math.sin(arg);
+            double c = Math.cos(arg);
+            writeTurn(axis.getX(), axis.getY(), axis.getZ(), amplitude * s, amplitude * angularFrequency * c,
+                    -amplitude * angularFrequency * angularFrequency * s, target, offset);
         }
 
         @Override
@@ -237,6 +343,20 @@ public final class Motions {
             double dz = direction.getZ();
             return Placement.ofQuaternion(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz,
                     1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+        }
+
+        @Override
+        public void at(double t, double[] target, int offset) {
+            checkTime(t);
+            checkTarget(target, offset);
+            double arg = angularFrequency * t + phase;
+            double p = amplitude * Math.sin(arg);
+            double v = amplitude * angularFrequency * Math.cos(arg);
+            double a = -angularFrequency * angularFrequency * p;
+            double dx = direction.getX();
+            double dy = direction.getY();
+            double dz = direction.getZ();
+            writeTranslation(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz, target, offset);
         }
 
         @Override
@@ -277,6 +397,32 @@ public final class Motions {
             }
             return Placement.ofQuaternion(p[0], p[1], p[2], p[3], p[4], p[5], p[6], p[7], p[8],
                     1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
+        }
+
+        @Override
+        public void at(double t, double[] target, int offset) {
+            checkTime(t);
+            checkTarget(target, offset);
+            writeTranslation(0, 0, 0, 0, 0, 0, 0, 0, 0, target, offset);
+            int degree = c.length / 3 - 1;
+            // same Horner recurrences as at(t), written straight into the target
+            for (int axis = 0; axis < 3; axis++) {
+                double value = c[3 * degree + axis];
+                double d1 = 0;
+                double d2 = 0;
+                for (int k = degree - 1; k >= 0; k--) {
+                    d2 = d2 * t + 2 * d1;
+                    d1 = d1 * t + value;
+                    value = value * t + c[3 * k + axis];
+                }
+                if (!Double.isFinite(value + d1 + d2)) {
+                    throw new IllegalArgumentException("translation overflows at t = " + t
+                            + ": position, velocity and acceleration must stay finite");
+                }
+                target[offset + axis] = value;
+                target[offset + 3 + axis] = d1;
+                target[offset + 6 + axis] = d2;
+            }
         }
 
         @Override
@@ -331,5 +477,23 @@ public final class Motions {
         public String toString() {
             return "compose" + List.of(chain);
         }
+    }
+
+    /**
+     * A logged motion: samples of the origin position and the attitude, interpolated with
+     * mutually consistent rates; same as
+     * {@link SampledMotion#fromArrays(double[], double[], double[])}, where the interpolation, the
+     * refusals and the file reader are described.
+     *
+     * @param times sample times (s), finite, strictly increasing, at least two
+     * @param positions origin of F in B axes, packed {@code x, y, z} per sample (m)
+     * @param quaternions orientation of F in B, packed {@code q0, q1, q2, q3} per sample, scalar
+     *        first, mapping B components to F components, unit within
+     *        {@link Orientations#QUATERNION_TOLERANCE}
+     * @return the motion, refusing queries outside [times[0], times[n - 1]]
+     * @throws IllegalArgumentException if a sample is refused (the message names its index)
+     */
+    public static SampledMotion sampled(double[] times, double[] positions, double[] quaternions) {
+        return SampledMotion.fromArrays(times, positions, quaternions);
     }
 }

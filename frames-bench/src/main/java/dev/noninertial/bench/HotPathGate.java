@@ -1,0 +1,280 @@
+package dev.noninertial.bench;
+
+import java.lang.management.ManagementFactory;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Random;
+
+import dev.noninertial.frames.Motion;
+import dev.noninertial.frames.Placement;
+import dev.noninertial.frames.PointState;
+
+/**
+ * The quick allocation and speed check that CI runs (through {@code HotPathGateTest} in
+ * {@code mvn -B verify}, or standalone with
+ * {@code java -cp frames-bench/target/benchmarks.jar dev.noninertial.bench.HotPathGate}).
+ *
+ * <p><b>Allocation</b> (deterministic): the bytes allocated by the current thread, read from
+ * {@code com.sun.management.ThreadMXBean#getCurrentThreadAllocatedBytes}, around one call of each
+ * bulk path on {@value #STATES} states, smallest of several repetitions. A bulk path passes when
+ * it allocates nothing per state: at most its documented per-call allowance (0 bytes through a
+ * placement; one scratch array of {@link Placement#COMPONENTS} doubles through a motion, which
+ * the JIT often removes). Any per-state allocation would show as at least
+ * {@value #STATES} x 16 bytes, so the verdict does not depend on timing.
+ *
+ * <p><b>Speed</b> (noisy, so the bound is loose): library and hand-written primitive code
+ * (baseline (b), {@link PrimitiveBaseline}) are timed in alternation on the same inputs, in
+ * rounds; the verdict uses the median ratio over the rounds and fails only above
+ * {@value #GROSS_REGRESSION}x, which catches a lost fast path, not a few percent. The timed paths are
+ * the bulk paths, whose goal is parity with hand-written code; object paths, which allocate
+ * their result, are measured by the JMH benchmarks instead, where the result cannot be optimized
+ * away or hoisted.
+ */
+public final class HotPathGate {
+
+    /** States per bulk call. */
+    public static final int STATES = 20_000;
+    /** A speed ratio above this fails the gate. */
+    public static final double GROSS_REGRESSION = 3.0;
+
+    private static final double[] SINK = new double[1];
+    private static final double[][] CONTROL = new double[1][];
+
+    private HotPathGate() {
+    }
+
+    /**
+     * One allocation measurement.
+     *
+     * @param path what was measured
+     * @param bytesPerCall smallest bytes allocated by one call over the repetitions
+     * @param states states converted per call
+     * @param allowanceBytes bytes per call allowed (nothing per state); negative for an
+     *        informational row that cannot fail
+     */
+    public record Allocation(String path, long bytesPerCall, int states, long allowanceBytes) {
+        /** @return true unless the path is gated and allocates more than its allowance */
+        public boolean passed() {
+            return allowanceBytes < 0 || bytesPerCall <= allowanceBytes;
+        }
+
+        /** @return bytes per state */
+        public double bytesPerState() {
+            return (double) bytesPerCall / states;
+        }
+    }
+
+    /**
+     * One paired timing.
+     *
+     * @param path what was measured
+     * @param ratios library time over baseline (b) time, one per round
+     * @param gated true if a median above {@link #GROSS_REGRESSION} fails the gate; false for an
+     *        informational row (object paths, which allocate their result and are not expected
+     *        to match allocation-free code)
+     */
+    public record Speed(String path, double[] ratios, boolean gated) {
+        /** @return the median ratio */
+        public double median() {
+            double[] s = ratios.clone();
+            Arrays.sort(s);
+            int n = s.length;
+            return n % 2 == 1 ? s[n / 2] : 0.5 * (s[n / 2 - 1] + s[n / 2]);
+        }
+
+        /** @return true for an informational row or a median ratio of at most {@link #GROSS_REGRESSION} */
+        public boolean passed() {
+            return !gated || median() <= GROSS_REGRESSION;
+        }
+    }
+
+    /** Inputs shared by the checks (invented, fixed seed). */
+    static final class Inputs {
+        final Placement placement = Scenario.placement();
+        final Motion spin = Scenario.spinUp();
+        final Motion lambda;
+        final double[] p = PrimitiveBaseline.scenarioPlacement();
+        final PointState state = Scenario.state();
+        final double[] times = new double[STATES];
+        final double[] source = new double[STATES * PointState.COMPONENTS];
+        final double[] target = new double[STATES * PointState.COMPONENTS];
+
+        Inputs() {
+            Motion built = spin;
+            lambda = t -> built.at(t);
+            Random random = new Random(42L);
+            for (int k = 0; k < STATES; k++) {
+                times[k] = 60.0 * k / STATES;
+            }
+            for (int i = 0; i < source.length; i++) {
+                source[i] = 200 * random.nextDouble() - 100;
+            }
+        }
+    }
+
+    /**
+     * Measures the allocation of every bulk path (gated) and of some object paths (informational).
+     *
+     * @return one row per path
+     */
+    public static List<Allocation> allocations() {
+        Inputs in = new Inputs();
+        com.sun.management.ThreadMXBean mx = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+        if (!mx.isThreadAllocatedMemorySupported()) {
+            throw new IllegalStateException("this JVM does not count allocated bytes per thread");
+        }
+        mx.setThreadAllocatedMemoryEnabled(true);
+        long scratch = 16 + 8L * Placement.COMPONENTS;
+        List<Allocation> rows = new ArrayList<>();
+        rows.add(new Allocation("Placement.toBase(double[]...)", bytes(mx,
+                () -> in.placement.toBase(in.source, 0, in.target, 0, STATES)), STATES, 0));
+        rows.add(new Allocation("Placement.fromBase(double[]...)", bytes(mx,
+                () -> in.placement.fromBase(in.source, 0, in.target, 0, STATES)), STATES, 0));
+        rows.add(new Allocation("Motion.toBase(times, ...) spin-up", bytes(mx,
+                () -> in.spin.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
+        rows.add(new Allocation("Motion.fromBase(times, ...) spin-up", bytes(mx,
+                () -> in.spin.fromBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
+        rows.add(new Allocation("Motion.toBase(times, ...) user lambda (info: default at(t))", bytes(mx,
+                () -> in.lambda.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, -1));
+        rows.add(new Allocation("Placement.toBase(PointState) x STATES (info: one result each)", bytes(mx, () -> {
+            double sum = 0;
+            for (int k = 0; k < STATES; k++) {
+                sum += in.placement.toBase(in.state).position().getX();
+            }
+            SINK[0] = sum;
+        }), STATES, -1));
+        rows.add(new Allocation("control: one new double[STATES] per call (info: proves the counter)",
+                bytes(mx, () -> CONTROL[0] = new double[STATES]), STATES, -1));
+        return rows;
+    }
+
+    private static long bytes(com.sun.management.ThreadMXBean mx, Runnable r) {
+        long overhead = Long.MAX_VALUE;
+        long best = Long.MAX_VALUE;
+        for (int rep = 0; rep < 8; rep++) {
+            long b0 = mx.getCurrentThreadAllocatedBytes();
+            long b1 = mx.getCurrentThreadAllocatedBytes();
+            overhead = Math.min(overhead, b1 - b0);
+            long c0 = mx.getCurrentThreadAllocatedBytes();
+            r.run();
+            long c1 = mx.getCurrentThreadAllocatedBytes();
+            best = Math.min(best, c1 - c0);
+        }
+        return Math.max(0, best - overhead);
+    }
+
+    /**
+     * Paired timings of library paths against baseline (b).
+     *
+     * @param rounds number of rounds (odd is best for the median)
+     * @return one row per path
+     */
+    public static List<Speed> speeds(int rounds) {
+        Inputs in = new Inputs();
+        List<Speed> rows = new ArrayList<>();
+        rows.add(pair("bulk Placement.toBase, per state", rounds, true,
+                () -> in.placement.toBase(in.source, 0, in.target, 0, STATES),
+                () -> PrimitiveBaseline.toBaseAll(in.p, in.source, in.target, STATES)));
+        rows.add(pair("bulk Placement.fromBase, per state", rounds, true,
+                () -> in.placement.fromBase(in.source, 0, in.target, 0, STATES),
+                () -> PrimitiveBaseline.fromBaseAll(in.p, in.source, in.target, STATES)));
+        rows.add(pair("bulk Motion.toBase spin-up, per state", rounds, true,
+                () -> in.spin.toBase(in.times, 0, in.source, 0, in.target, 0, STATES),
+                () -> PrimitiveBaseline.spinUpToBaseAll(in.times, in.source, in.target, STATES)));
+        return rows;
+    }
+
+    private static Speed pair(String path, int rounds, boolean gated, Runnable library, Runnable baseline) {
+        // warm-up: enough calls for both to reach the optimizing compiler
+        long until = System.nanoTime() + 400_000_000L;
+        while (System.nanoTime() < until) {
+            library.run();
+            baseline.run();
+        }
+        double[] ratios = new double[rounds];
+        for (int r = 0; r < rounds; r++) {
+            // alternate which goes first, so a slow moment of a shared machine hits both evenly
+            double a;
+            double b;
+            if (r % 2 == 0) {
+                a = time(library);
+                b = time(baseline);
+            } else {
+                b = time(baseline);
+                a = time(library);
+            }
+            ratios[r] = a / b;
+        }
+        return new Speed(path, ratios, gated);
+    }
+
+    /** Best of 15 calls, in ns: the minimum is the least disturbed by other processes. */
+    private static double time(Runnable r) {
+        long best = Long.MAX_VALUE;
+        for (int k = 0; k < 15; k++) {
+            long t0 = System.nanoTime();
+            r.run();
+            best = Math.min(best, System.nanoTime() - t0);
+        }
+        return best;
+    }
+
+    /**
+     * Formats the allocation rows as a table.
+     *
+     * @param rows the rows
+     * @return printable text
+     */
+    public static String format(List<Allocation> rows) {
+        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%-62s %12s %12s %10s%n",
+                "allocation (" + STATES + " states per call)", "bytes/call", "bytes/state", "verdict"));
+        for (Allocation a : rows) {
+            b.append(String.format(Locale.ROOT, "%-62s %12d %12.4f %10s%n", a.path(), a.bytesPerCall(),
+                    a.bytesPerState(), a.allowanceBytes() < 0 ? "info" : a.passed() ? "ok" : "FAIL"));
+        }
+        return b.toString();
+    }
+
+    /**
+     * Formats the speed rows as a table.
+     *
+     * @param rows the rows
+     * @return printable text
+     */
+    public static String formatSpeeds(List<Speed> rows) {
+        StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "%-62s %12s %10s  %s%n",
+                "speed, library / hand-written primitives", "median", "verdict", "rounds"));
+        for (Speed s : rows) {
+            StringBuilder r = new StringBuilder();
+            for (double x : s.ratios()) {
+                r.append(String.format(Locale.ROOT, " %.2f", x));
+            }
+            b.append(String.format(Locale.ROOT, "%-62s %11.2fx %10s %s%n", s.path(), s.median(),
+                    !s.gated() ? "info" : s.passed() ? "ok" : "FAIL", r));
+        }
+        return b.toString();
+    }
+
+    /**
+     * Runs both checks and prints the tables; exits with status 1 if a check fails.
+     *
+     * @param args optional: number of speed rounds (default 7)
+     */
+    public static void main(String[] args) {
+        int rounds = args.length > 0 ? Integer.parseInt(args[0]) : 7;
+        if (rounds < 1) {
+            throw new IllegalArgumentException("rounds must be >= 1, got " + rounds);
+        }
+        List<Allocation> alloc = allocations();
+        System.out.print(format(alloc));
+        List<Speed> speed = speeds(rounds);
+        System.out.print(formatSpeeds(speed));
+        boolean ok = alloc.stream().allMatch(Allocation::passed) && speed.stream().allMatch(Speed::passed);
+        System.out.println(ok ? "hot-path gate: passed" : "hot-path gate: FAILED");
+        if (!ok) {
+            System.exit(1);
+        }
+    }
+}
