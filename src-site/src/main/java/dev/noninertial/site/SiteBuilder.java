@@ -19,7 +19,8 @@ import java.util.stream.Stream;
  *   <li>a placeholder {@code benchmarks.html} while the benchmark report is missing;</li>
  *   <li>the plots, computed by calling the library ({@link SitePlots});</li>
  *   <li>the API reference, by the JDK's Javadoc tool with doclint ({@link ApiReference});</li>
- *   <li>files under {@code static/}, and non-page files beside the pages, copied as they are;</li>
+ *   <li>files under {@code static/} (to the site root), under {@code data/} (to {@code data/}) and
+ *       non-page files beside the pages, copied as they are;</li>
  *   <li>a check of every local link and anchor ({@link LinkAudit}): the build fails with the list
  *       of broken links.</li>
  * </ol>
@@ -96,6 +97,9 @@ public final class SiteBuilder {
         }
         Files.writeString(output.resolve("style.css"), PageLayout.styleSheet(), StandardCharsets.UTF_8);
         copyStatic(source.resolve("static"), output);
+        if (Files.isDirectory(source.resolve("data"))) {
+            copyStatic(source.resolve("data"), output.resolve("data"));
+        }
         copyPageAssets(pagesDir, output);
 
         long t0 = System.nanoTime();

@@ -14,7 +14,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.Enumeration;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.TreeSet;
 import java.util.jar.JarEntry;
 import java.util.jar.JarFile;
@@ -27,6 +29,7 @@ import jdk.jshell.Snippet.Status;
 import jdk.jshell.SnippetEvent;
 import jdk.jshell.SourceCodeAnalysis;
 
+import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestFactory;
@@ -35,12 +38,13 @@ import org.junit.jupiter.api.TestFactory;
  * Runs every Java block of the site pages ({@code <pre><code class="language-java">}) and of the
  * root README ({@code ```java}) through JShell with the project's class path, so that the
  * documentation cannot drift from the API. The blocks of one file run in order in one JShell
- * session, as a reader following the page would type them; each file starts a fresh session.
+ * session, as a reader following the page would type them; each file starts clean (one JShell is
+ * shared for speed, and everything an earlier file defined is dropped first).
  * When a block is followed directly by a {@code <pre class="output">} block, what the block prints
  * must equal that text (line by line, trailing blanks ignored), so quoted results cannot drift.
  *
  * <p>Imports given to every session: all packages of the project found on the class path
- * ({@code dev.noninertial.*}, except this generator), Hipparchus 3-D geometry, and
+ * ({@code dev.noninertial.*}, except this generator), Hipparchus 3-D geometry and linear algebra, and
  * {@code java.time}, plus the default imports of the jshell tool ({@code java.util}, {@code java.io} ...),
  * which the JShell API does not add by itself.
  */
@@ -93,6 +97,7 @@ class DocumentationSnippetsTest {
             imports.add("import " + pkg + ".*;");
         }
         imports.add("import org.hipparchus.geometry.euclidean.threed.*;");
+        imports.add("import org.hipparchus.linear.*;");
         imports.add("import java.time.*;");
         return imports;
     }
@@ -147,15 +152,17 @@ class DocumentationSnippetsTest {
                 .map(d -> DynamicTest.dynamicTest(d.get(0).origin(), () -> runDocument(d, imports)));
     }
 
-    private static void runDocument(List<Snippet> blocks, List<String> imports) {
-        ByteArrayOutputStream printed = new ByteArrayOutputStream();
-        PrintStream out = new PrintStream(printed, true, StandardCharsets.UTF_8);
-        // the local execution engine runs snippets in this JVM: catch what they print for the report
-        PrintStream realOut = System.out;
-        PrintStream realErr = System.err;
-        System.setOut(out);
-        System.setErr(out);
-        try (JShell shell = JShell.builder().executionEngine("local").out(out).err(out).build()) {
+    /** What the snippets print, caught because the local execution engine runs them in this JVM. */
+    private static final ByteArrayOutputStream PRINTED = new ByteArrayOutputStream();
+    private static final PrintStream OUT = new PrintStream(PRINTED, true, StandardCharsets.UTF_8);
+    /** One JShell for all documents (start-up and imports cost about a second each time). */
+    private static JShell shell;
+    private static final Set<String> BASE_SNIPPETS = new HashSet<>();
+
+    /** The shared session, with the class path and imports; the state of earlier documents dropped. */
+    private static JShell freshSession(List<String> imports) {
+        if (shell == null) {
+            shell = JShell.builder().executionEngine("local").out(OUT).err(OUT).build();
             for (String entry : classPath()) {
                 shell.addToClasspath(entry);
             }
@@ -164,21 +171,46 @@ class DocumentationSnippetsTest {
                 if (ev.isEmpty() || ev.get(0).status() != Status.VALID) {
                     fail("JShell refused '" + imp + "': " + diagnostics(shell, ev));
                 }
+                BASE_SNIPPETS.add(ev.get(0).snippet().id());
             }
             // check that JShell really sees the project class path before blaming a page
             List<SnippetEvent> probe = shell.eval("ReferenceFrame.class.getName()");
             if (probe.isEmpty() || !"\"dev.noninertial.frames.ReferenceFrame\"".equals(probe.get(0).value())) {
                 fail("JShell does not see the project class path " + classPath() + ": " + diagnostics(shell, probe));
             }
+        }
+        // each document starts clean: drop every variable, method, class and import it defined
+        shell.snippets().filter(sn -> !BASE_SNIPPETS.contains(sn.id()))
+             .filter(sn -> shell.status(sn).isActive())
+             .collect(Collectors.toList())
+             .forEach(shell::drop);
+        return shell;
+    }
+
+    @AfterAll
+    static void closeSession() {
+        if (shell != null) {
+            shell.close();
+            shell = null;
+        }
+    }
+
+    private static void runDocument(List<Snippet> blocks, List<String> imports) {
+        PrintStream realOut = System.out;
+        PrintStream realErr = System.err;
+        System.setOut(OUT);
+        System.setErr(OUT);
+        try {
+            JShell session = freshSession(imports);
             List<String> failures = new ArrayList<>();
             for (Snippet block : blocks) {
-                out.flush();
-                printed.reset();
-                String problem = run(shell, block.code());
-                out.flush();
+                OUT.flush();
+                PRINTED.reset();
+                String problem = run(session, block.code());
+                OUT.flush();
                 if (problem == null && block.expectedOutput() != null) {
                     String expected = normalized(block.expectedOutput());
-                    String actual = normalized(printed.toString(StandardCharsets.UTF_8));
+                    String actual = normalized(PRINTED.toString(StandardCharsets.UTF_8));
                     if (!expected.equals(actual)) {
                         problem = "prints other text than the output block that follows it on the page."
                                 + "\n--- page shows ---\n" + expected + "\n--- block prints ---\n" + actual;
