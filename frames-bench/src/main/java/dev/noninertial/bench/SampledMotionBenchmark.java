@@ -129,6 +129,17 @@ public class SampledMotionBenchmark {
         }
     }
 
+    private double sequentialTime;
+
+    /** A time stepping forward by 13.7 ms through the record, as a simulation loop would query. */
+    private double nextSequentialTime() {
+        sequentialTime += 0.0137;
+        if (sequentialTime > motion.end()) {
+            sequentialTime -= motion.end();
+        }
+        return sequentialTime;
+    }
+
     private double nextTime() {
         next = (next + 1) & (QUERIES - 1);
         return queryTimes[next];
@@ -174,12 +185,31 @@ public class SampledMotionBenchmark {
         return ANALYTIC.at(nextTime());
     }
 
+    /** @return the interpolated placement at times stepping forward through the record */
+    @Benchmark
+    @BenchmarkMode(Mode.AverageTime)
+    @OutputTimeUnit(TimeUnit.NANOSECONDS)
+    public Placement querySequential() {
+        return motion.at(nextSequentialTime());
+    }
+
+    /** @return the linear baseline at times stepping forward through the record */
+    @Benchmark
+    @BenchmarkMode(Mode.AverageTime)
+    @OutputTimeUnit(TimeUnit.NANOSECONDS)
+    public Placement baselineLinearSequential() {
+        return linear(nextSequentialTime());
+    }
+
     /** @return a hand-written linear interpolation of the same arrays (no rates), the cheapest lookup */
     @Benchmark
     @BenchmarkMode(Mode.AverageTime)
     @OutputTimeUnit(TimeUnit.NANOSECONDS)
     public Placement baselineLinear() {
-        double t = nextTime();
+        return linear(nextTime());
+    }
+
+    private Placement linear(double t) {
         int k = java.util.Arrays.binarySearch(times, t);
         int i = Math.min(Math.max(k >= 0 ? k : -k - 2, 0), SAMPLES - 2);
         double s = (t - times[i]) / (times[i + 1] - times[i]);
