@@ -35,8 +35,10 @@ import dev.noninertial.frames.motion.SampledMotion;
  * interpolation of the same arrays (position lerp, normalised quaternion lerp, no rates).
  *
  * <p>Run briefly with
- * {@code java -jar ... SampledMotionBenchmark -f 1 -wi 3 -i 5 -prof gc}; the gc profiler's
- * {@code gc.alloc.rate.norm} shows the bytes allocated per load and per query.
+ * {@code java -cp (frames-bench jar and its dependencies) org.openjdk.jmh.Main SampledMotionBenchmark
+ * -f 1 -wi 3 -i 8 -prof gc}; the gc profiler's {@code gc.alloc.rate.norm} shows the bytes allocated
+ * per load and per query. Random queries touch the million-sample arrays at random places and so
+ * measure memory latency as much as arithmetic; sequential queries step forward as a simulation does.
  */
 @State(Scope.Thread)
 @Fork(1)
