@@ -35,8 +35,10 @@ import dev.noninertial.frames.motion.SampledMotion;
  * interpolation of the same arrays (position lerp, normalised quaternion lerp, no rates).
  *
  * <p>Run briefly with
- * {@code java -jar ... SampledMotionBenchmark -f 1 -wi 3 -i 5 -prof gc}; the gc profiler's
- * {@code gc.alloc.rate.norm} shows the bytes allocated per load and per query.
+ * {@code java -cp (frames-bench jar and its dependencies) org.openjdk.jmh.Main SampledMotionBenchmark
+ * -f 1 -wi 3 -i 8 -prof gc}; the gc profiler's {@code gc.alloc.rate.norm} shows the bytes allocated
+ * per load and per query. Random queries touch the million-sample arrays at random places and so
+ * measure memory latency as much as arithmetic; sequential queries step forward as a simulation does.
  */
 @State(Scope.Thread)
 @Fork(1)
@@ -129,6 +131,17 @@ public class SampledMotionBenchmark {
         }
     }
 
+    private double sequentialTime;
+
+    /** A time stepping forward by 13.7 ms through the record, as a simulation loop would query. */
+    private double nextSequentialTime() {
+        sequentialTime += 0.0137;
+        if (sequentialTime > motion.end()) {
+            sequentialTime -= motion.end();
+        }
+        return sequentialTime;
+    }
+
     private double nextTime() {
         next = (next + 1) & (QUERIES - 1);
         return queryTimes[next];
@@ -174,12 +187,31 @@ public class SampledMotionBenchmark {
         return ANALYTIC.at(nextTime());
     }
 
+    /** @return the interpolated placement at times stepping forward through the record */
+    @Benchmark
+    @BenchmarkMode(Mode.AverageTime)
+    @OutputTimeUnit(TimeUnit.NANOSECONDS)
+    public Placement querySequential() {
+        return motion.at(nextSequentialTime());
+    }
+
+    /** @return the linear baseline at times stepping forward through the record */
+    @Benchmark
+    @BenchmarkMode(Mode.AverageTime)
+    @OutputTimeUnit(TimeUnit.NANOSECONDS)
+    public Placement baselineLinearSequential() {
+        return linear(nextSequentialTime());
+    }
+
     /** @return a hand-written linear interpolation of the same arrays (no rates), the cheapest lookup */
     @Benchmark
     @BenchmarkMode(Mode.AverageTime)
     @OutputTimeUnit(TimeUnit.NANOSECONDS)
     public Placement baselineLinear() {
-        double t = nextTime();
+        return linear(nextTime());
+    }
+
+    private Placement linear(double t) {
         int k = java.util.Arrays.binarySearch(times, t);
         int i = Math.min(Math.max(k >= 0 ? k : -k - 2, 0), SAMPLES - 2);
         double s = (t - times[i]) / (times[i + 1] - times[i]);

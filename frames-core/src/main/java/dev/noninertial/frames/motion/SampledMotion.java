@@ -42,7 +42,8 @@ import dev.noninertial.frames.Placement;
  *   <li>Between two samples each component is the quintic Hermite polynomial matching value, first
  *       and second derivative at both ends. Value, first and second derivative are therefore
  *       continuous across samples (C2), and the scheme is local: a sample influences only the
- *       segments within three samples of it.</li>
+ *       segments within three samples of it (four near
+ *       the ends of a run).</li>
  *   <li>Position, velocity and acceleration are the quintic and its derivatives. The attitude is
  *       the quintic {@code p(t)} through the sign-aligned quaternion components, normalised:
  *       {@code q = p / |p|}; then {@code w = 2 vec(p* p') / |p|^2} and

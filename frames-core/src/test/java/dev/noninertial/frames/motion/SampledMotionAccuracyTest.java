@@ -61,6 +61,29 @@ class SampledMotionAccuracyTest {
         assertTrue(errors[0][0] * 10 < without[0], errors[0][0] + " vs " + without[0]);
     }
 
+    @Test
+    void fictitiousAccelerationsOnBoardMatchTheAnalyticFrame() {
+        // a point walking on the deck of the sampled frame sees the same frame, Euler, Coriolis and
+        // centrifugal terms as on the analytic frame it was sampled from, to the interpolation
+        // error at 50 Hz (acceleration 1e-6 m/s^2 and angular acceleration 1e-7 rad/s^2 from the
+        // table above, times lever arms of a few metres: 1e-5 m/s^2 bound)
+        AnalyticRecord r = AnalyticRecord.uniform(50, 60.0);
+        dev.noninertial.frames.ReferenceFrame sea = dev.noninertial.frames.ReferenceFrame.inertialRoot("sea");
+        dev.noninertial.frames.ReferenceFrame logged = sea.attach("logged deck", r.poses());
+        dev.noninertial.frames.ReferenceFrame exact = sea.attach("exact deck", AnalyticRecord.REFERENCE);
+        dev.noninertial.frames.PointState walker = dev.noninertial.frames.PointState.of(
+                new org.hipparchus.geometry.euclidean.threed.Vector3D(3.0, -1.5, 0.8),
+                new org.hipparchus.geometry.euclidean.threed.Vector3D(0.6, 0.2, 0.0));
+        for (double t = 0.013; t < 60; t += 1.37) {
+            dev.noninertial.frames.FictitiousAccelerations a = logged.placementIn(sea, t).fictitious(walker);
+            dev.noninertial.frames.FictitiousAccelerations b = exact.placementIn(sea, t).fictitious(walker);
+            assertTrue(a.frameAcceleration().distance(b.frameAcceleration()) < 1e-5, "frame at " + t);
+            assertTrue(a.euler().distance(b.euler()) < 1e-5, "Euler at " + t);
+            assertTrue(a.coriolis().distance(b.coriolis()) < 1e-5, "Coriolis at " + t);
+            assertTrue(a.centrifugal().distance(b.centrifugal()) < 1e-5, "centrifugal at " + t);
+        }
+    }
+
     private static void checkOrders(double[][] errors, int[] promised, double[] floor) {
         for (int q = 0; q < promised.length; q++) {
             for (int k = 0; k + 1 < RATES.length; k++) {

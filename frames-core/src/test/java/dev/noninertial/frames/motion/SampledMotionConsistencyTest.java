@@ -138,6 +138,34 @@ class SampledMotionConsistencyTest {
     }
 
     @Test
+    void shortRunsReproducePolynomialsOfTheirDegree() {
+        // interpolation through m points reproduces every polynomial of degree below m (Lagrange;
+        // any numerical analysis text): 2 samples give the line, 3 the parabola, 5 the quartic
+        for (int m = 2; m <= 6; m++) {
+            int degree = Math.min(m - 1, 4);
+            double[] t = new double[m];
+            double[] p = new double[3 * m];
+            double[] q = new double[4 * m];
+            for (int i = 0; i < m; i++) {
+                t[i] = 0.3 * i + 0.05 * i * i; // uneven spacing
+                p[3 * i] = Math.pow(t[i], degree) - 0.5 * t[i];
+                q[4 * i] = 1;
+            }
+            SampledMotion motion = SampledMotion.fromArrays(t, p, q);
+            for (double x = 0; x <= t[m - 1]; x += t[m - 1] / 7) {
+                Placement at = motion.at(x);
+                double value = Math.pow(x, degree) - 0.5 * x;
+                double slope = degree * Math.pow(x, degree - 1) - 0.5;
+                double curvature = degree < 2 ? 0 : degree * (degree - 1) * Math.pow(x, degree - 2);
+                // rounding of a few operations on values of order 1 to 10: 1e-12
+                assertEquals(value, at.origin().getX(), 1e-12, m + " samples, value at " + x);
+                assertEquals(slope, at.originVelocity().getX(), 1e-11, m + " samples, slope at " + x);
+                assertEquals(curvature, at.originAcceleration().getX(), 1e-10, m + " samples, curvature at " + x);
+            }
+        }
+    }
+
+    @Test
     void concurrentQueriesAnswerAsSequentialOnes() throws Exception {
         // immutability by construction: threads sharing one motion see bit-identical answers
         AnalyticRecord r = new AnalyticRecord(jitteredTimes(300, 5));
