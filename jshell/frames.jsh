@@ -2,7 +2,12 @@
 // analyst can start typing at once. Conventions: SI units; the orientation R of a frame F in its
 // base B maps B components to F components (v_F = R v_B); angular velocity and acceleration of F
 // relative to B are resolved in F.
+import java.time.Instant;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.linear.*;
 import dev.noninertial.frames.*;
 import dev.noninertial.frames.motion.*;
+import dev.noninertial.frames.dynamics.*;
+import dev.noninertial.frames.uncertainty.*;
+import dev.noninertial.geodesy.*;

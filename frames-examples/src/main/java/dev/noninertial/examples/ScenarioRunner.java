@@ -1,19 +1,26 @@
 package dev.noninertial.examples;
 
-import org.hipparchus.geometry.euclidean.threed.Vector3D;
-
-import dev.noninertial.frames.FictitiousAccelerations;
-import dev.noninertial.frames.FramedState;
-import dev.noninertial.frames.PointState;
-import dev.noninertial.frames.ReferenceFrame;
-import dev.noninertial.frames.motion.Motions;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
 
 /**
- * Runs the built-in worked scenarios and prints readable tables with units.
+ * Runs the worked scenarios (invented places and vessels) and prints readable tables with units:
+ * the Earth's rotation at a site and the gravity-versus-gravitation pitfall, the inertial
+ * accelerations at the crane hook of a rolling, pitching, heaving ship under way, and a long-range
+ * drag-free trajectory with and without the Earth's rotation.
  *
- * <p>Scenario, places and vessels are invented for demonstration.
+ * <p>Usage: {@code ScenarioRunner [--out DIR]}; with {@code --out} every table is also written as
+ * {@code DIR/NAME.csv} (the directory is created if needed).
  */
 public final class ScenarioRunner {
+
+    /** Printed first, before any figure. */
+    static final String CAUTION = "CAUTION: results are for simulation and analysis only, not for aiming, lifting "
+            + "or medical decisions;\n         defer to local codes and licensed practice. Places and vessels "
+            + "below are invented.";
 
     private ScenarioRunner() {
     }
@@ -21,20 +28,42 @@ public final class ScenarioRunner {
     /**
      * Entry point.
      *
-     * @param args ignored for now
+     * @param args {@code --out DIR} to also write CSV files, {@code --help} for usage
+     * @throws IOException if a CSV file cannot be written
      */
-    public static void main(String[] args) {
-        System.out.println("Turntable at the (invented) Harrowmere test hall: 0.5 rad/s spin-up to 3 rad/s");
-        ReferenceFrame hall = ReferenceFrame.inertialRoot("hall");
-        ReferenceFrame table = hall.attach("turntable", Motions.spinUp(Vector3D.PLUS_K, 0.0, 0.5, 0.25));
-        PointState cup = PointState.of(new Vector3D(1.2, 0.0, 0.0), new Vector3D(0.0, 0.3, 0.0));
-        System.out.printf("%8s %14s %14s %14s %14s%n", "t [s]", "Euler [m/s^2]", "Coriolis", "centrifugal",
-                "|total|");
-        for (double t = 0.0; t <= 10.0; t += 2.5) {
-            FramedState s = table.state(t, cup);
-            FictitiousAccelerations f = s.fictitious();
-            System.out.printf("%8.2f %14.5f %14.5f %14.5f %14.5f%n", t, f.euler().getNorm(),
-                    f.coriolis().getNorm(), f.centrifugal().getNorm(), f.total().getNorm());
+    public static void main(String[] args) throws IOException {
+        Path out = null;
+        for (int i = 0; i < args.length; i++) {
+            if ("--out".equals(args[i]) && i + 1 < args.length) {
+                out = Path.of(args[++i]);
+            } else if ("--help".equals(args[i])) {
+                System.out.println("usage: ScenarioRunner [--out DIR]   (DIR receives one CSV file per table)");
+                return;
+            } else {
+                System.err.println("unknown or incomplete argument '" + args[i]
+                        + "'; usage: ScenarioRunner [--out DIR]");
+                System.exit(2);
+                return;
+            }
+        }
+        run(System.out, out);
+    }
+
+    static void run(PrintStream print, Path out) throws IOException {
+        print.println(CAUTION);
+        print.println();
+        DemoSetting setting = new DemoSetting();
+        List<ScenarioTable> tables = List.of(SiteRotationScenario.run(setting), ShipCraneScenario.run(setting),
+                LongRangeScenario.run(setting));
+        if (out != null) {
+            Files.createDirectories(out);
+        }
+        for (ScenarioTable t : tables) {
+            print.println(t.toText());
+            if (out != null) {
+                print.println("  written: " + t.writeCsv(out));
+                print.println();
+            }
         }
     }
 }

@@ -28,7 +28,7 @@ class EarthFramesTest {
     private static final double[] OFFSETS = {-2, -1, 1, 2};
 
     /** Angular velocity of F in B, in F axes, from differences of the orientation: dR/dt = -[w]x R. */
-    private static Vector3D angularVelocityByDifferences(ReferenceFrame f, ReferenceFrame b, double t, double h) {
+    static Vector3D angularVelocityByDifferences(ReferenceFrame f, ReferenceFrame b, double t, double h) {
         double[][] rdot = new double[3][3];
         for (int s = 0; s < 4; s++) {
             double[][] m = f.placementIn(b, t + OFFSETS[s] * h).orientationMatrix();
@@ -53,7 +53,7 @@ class EarthFramesTest {
                 0.5 * (omega[1][0] - omega[0][1]));
     }
 
-    private static Vector3D differentiate(java.util.function.DoubleFunction<Vector3D> g, double t, double h) {
+    static Vector3D differentiate(java.util.function.DoubleFunction<Vector3D> g, double t, double h) {
         Vector3D sum = Vector3D.ZERO;
         for (int s = 0; s < 4; s++) {
             sum = sum.add(STENCIL[s] / h, g.apply(t + OFFSETS[s] * h));

@@ -132,6 +132,17 @@ class GeodeticConversionTest {
     }
 
     @Test
+    void onASphereGeodeticIsGeocentric() {
+        // textbook: with f = 0 the normal passes through the centre, lat = atan2(z, p), h = r - R
+        Ellipsoid sphere = Ellipsoid.of(6371000.0, 0.0);
+        Vector3D x = new Vector3D(-2.1e6, 3.3e6, -5.0e6);
+        LatLonHeight g = sphere.toGeodetic(x);
+        assertEquals(Math.atan2(x.getZ(), Math.hypot(x.getX(), x.getY())), g.latitude(), 1e-15);
+        assertEquals(x.getNorm() - 6371000.0, g.height(), 1e-8);
+        assertEquals(6371000.0, sphere.meridianRadius(0.7), 1e-8);
+    }
+
+    @Test
     void badInputIsRefusedWithClearMessages() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> LatLonHeight.ofDegrees(90.5, 0, 0));

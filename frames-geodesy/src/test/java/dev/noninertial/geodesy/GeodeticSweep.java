@@ -69,6 +69,10 @@ public final class GeodeticSweep {
                 worstRel = r.error() / r.radius();
                 atRel = s;
             }
+            if ((i + 1) % 50_000 == 0) {
+                System.out.printf("... %d points, %.0f s, worst near %.3e m, worst relative %.3e%n", i + 1,
+                        (System.nanoTime() - start) * 1e-9, worstNear, worstRel);
+            }
         }
         double seconds = (System.nanoTime() - start) * 1e-9;
         System.out.printf("points %d, seed %d, %.1f s%n", count, seed, seconds);

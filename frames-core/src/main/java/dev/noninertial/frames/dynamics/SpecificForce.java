@@ -23,7 +23,9 @@ import dev.noninertial.frames.ReferenceFrame;
  * again; passing gravity counts it twice. The error is the centrifugal acceleration itself,
  * {@code w^2 d} with {@code d} the distance from the spin axis: at 49 degrees latitude its
  * horizontal part {@code w^2 a cos(lat) sin(lat)} is about 0.0168 m/s^2 toward the equator, a
- * tilt of the apparent vertical of about 1.7 mrad (17 mm at the end of a 10 m pendulum). In an inertial frame gravity and gravitation coincide.
+ * tilt of the apparent vertical of about 1.7 mrad (17 mm at the end of a 10 m pendulum). In an
+ * inertial frame gravity and gravitation coincide. The geodesy module's
+ * {@code EarthModel.gravitation} gives the field to integrate near the Earth.
  *
  * <p>Implementations must be thread-safe if one solver is used from several threads, must return
  * finite components, and should be pure functions of their arguments: the solver calls them many

@@ -478,4 +478,22 @@ public final class Motions {
             return "compose" + List.of(chain);
         }
     }
+
+    /**
+     * A logged motion: samples of the origin position and the attitude, interpolated with
+     * mutually consistent rates; same as
+     * {@link SampledMotion#fromArrays(double[], double[], double[])}, where the interpolation, the
+     * refusals and the file reader are described.
+     *
+     * @param times sample times (s), finite, strictly increasing, at least two
+     * @param positions origin of F in B axes, packed {@code x, y, z} per sample (m)
+     * @param quaternions orientation of F in B, packed {@code q0, q1, q2, q3} per sample, scalar
+     *        first, mapping B components to F components, unit within
+     *        {@link Orientations#QUATERNION_TOLERANCE}
+     * @return the motion, refusing queries outside [times[0], times[n - 1]]
+     * @throws IllegalArgumentException if a sample is refused (the message names its index)
+     */
+    public static SampledMotion sampled(double[] times, double[] positions, double[] quaternions) {
+        return SampledMotion.fromArrays(times, positions, quaternions);
+    }
 }
