@@ -13,7 +13,7 @@ import java.util.Map;
  * JMH runs one benchmark after the other, so a load that changes between two benchmarks skews
  * their ratio; alternation cancels most of that.
  *
- * <p>Run: {@code java -cp frames-bench/target/benchmarks.jar dev.noninertial.bench.PairedRatios [rounds]}.
+ * <p>Run: {@code java -cp frames-bench/target/benchmarks.jar dev.noninertial.bench.PairedRatios [rounds [regex]]}.
  */
 public final class PairedRatios {
 
@@ -89,20 +89,22 @@ public final class PairedRatios {
     /**
      * Measures every ratio and prints median and interquartile range.
      *
-     * @param args optional number of rounds (default 9)
+     * @param args optional number of rounds (default 9), then optionally a regular expression:
+     *        only ratios whose description contains a match are measured
      */
     public static void main(String[] args) {
         int rounds = args.length > 0 ? Integer.parseInt(args[0]) : 9;
         if (rounds < 3) {
             throw new IllegalArgumentException("rounds must be >= 3, got " + rounds);
         }
+        java.util.regex.Pattern only = java.util.regex.Pattern.compile(args.length > 1 ? args[1] : "");
         Map<String, Op> ops = operations();
         StringBuilder html = new StringBuilder("<table>\n<tr><th>ratio</th><th>median</th>"
                 + "<th>interquartile range</th><th>goal</th><th>met</th></tr>\n");
         for (BenchmarkReport.Ratio r : BenchmarkReport.ratios()) {
             Op a = ops.get(r.numerator());
             Op b = ops.get(r.denominator());
-            if (a == null || b == null) {
+            if (a == null || b == null || !only.matcher(r.what()).find()) {
                 continue;
             }
             double[] q = ratios(a, b, rounds);
