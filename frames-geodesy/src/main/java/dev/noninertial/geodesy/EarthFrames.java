@@ -8,7 +8,10 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.Placement;
+import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.dynamics.SpecificForce;
 import dev.noninertial.frames.motion.Motions;
 
 /**
@@ -183,6 +186,48 @@ public final class EarthFrames implements Serializable {
         Arguments.nonNull("level", level);
         Arguments.nonNull("attitude", attitude);
         return level.attach(name, attitude.toMotion());
+    }
+
+    /**
+     * The normal Earth's gravitation as a force to integrate in {@code frame}, any frame of this
+     * Earth's tree (inertial, Earth-fixed, local-level, carried, body): at time {@code t} the
+     * point's position is carried to Earth-fixed axes, {@link EarthModel#gravitation(Vector3D)} is
+     * evaluated there, and the vector is resolved back in {@code frame}'s axes.
+     *
+     * <p><b>Gravitation, not gravity:</b> the integrator adds the frame's centrifugal and Coriolis
+     * terms itself, so in an Earth-fixed or local-level frame this force together with the
+     * engine's terms reproduces normal gravity (what a plumb line shows); passing normal gravity
+     * there would count the centrifugal term twice. The same force is right in the inertial root.
+     *
+     * @param frame the integration frame, in the tree of {@link #inertial()}
+     * @return gravitation per unit mass (m/s^2), resolved in {@code frame}'s axes
+     * @throws IllegalArgumentException if {@code frame} belongs to another tree
+     */
+    public SpecificForce gravitationIn(ReferenceFrame frame) {
+        Arguments.nonNull("frame", frame);
+        if (frame.root() != inertial) {
+            throw new IllegalArgumentException("frame '" + frame.path() + "' is not in the tree of this Earth ('"
+                    + inertial.path() + "'): build it from this EarthFrames");
+        }
+        return new GravitationForce(model, frame, earthFixed);
+    }
+
+    /** Gravitation evaluated in Earth-fixed axes and resolved in the integration frame. */
+    private record GravitationForce(EarthModel model, ReferenceFrame frame, ReferenceFrame earthFixed)
+            implements SpecificForce, Serializable {
+
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public Vector3D at(double time, PointState state) {
+            Placement p = frame.placementIn(earthFixed, time);
+            return p.vectorFromBase(model.gravitation(p.positionToBase(state.position())));
+        }
+
+        @Override
+        public String toString() {
+            return "gravitation of " + model + " in " + frame.path();
+        }
     }
 
     @Override

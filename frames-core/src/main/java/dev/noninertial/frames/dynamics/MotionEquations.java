@@ -100,7 +100,11 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
             } catch (TrajectoryFailure e) {
                 throw e;
             } catch (RuntimeException e) {
-                throw new TrajectoryFailure("specific force #" + i + " threw " + e, t, y, e);
+                // a trial step of an adaptive scheme may probe far past an event (underground, say):
+                // the usual cure is a step limit, so say so
+                throw new TrajectoryFailure("specific force #" + i + " (" + forces[i] + ") threw " + e
+                        + "; if the force is defined only in a region, limit the step with"
+                        + " TrajectorySolver.withMaxStep", t, y, e);
             }
             if (f == null) {
                 throw new TrajectoryFailure("specific force #" + i + " returned null", t, y, null);
