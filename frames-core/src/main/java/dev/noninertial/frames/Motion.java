@@ -74,7 +74,7 @@ public interface Motion {
      *
      * <p>When to use it: for many states (a logged track, a particle cloud, a batch of sensor
      * samples) kept in primitive arrays, where one {@link Placement} and one {@link PointState} per
-     * sample would dominate the cost. It allocates one scratch array of
+     * sample would dominate the cost. It allocates at most one scratch array of
      * {@link Placement#COMPONENTS} doubles per call and nothing per state, provided
      * {@link #at(double, double[], int)} allocates nothing (true for the motions of
      * {@code Motions} except {@code compose}; the default for a user lambda allocates one

@@ -157,12 +157,22 @@ public final class ReferenceFrame implements Serializable {
     /** Writes the placement of this frame in a strict ancestor into work[0, 24); work[24, 48) is scratch. */
     private void placeInAncestor(ReferenceFrame ancestor, double t, double[] work) {
         if (parent == ancestor) {
-            motion.at(t, work, 0);
+            writeLocal(t, work, 0);
             return;
         }
         parent.placeInAncestor(ancestor, t, work);
-        motion.at(t, work, Placement.COMPONENTS);
+        writeLocal(t, work, Placement.COMPONENTS);
         Placement.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+    }
+
+    /** This frame's motion on primitives; a motion that returns null is reported with the frame's path. */
+    private void writeLocal(double t, double[] work, int offset) {
+        try {
+            motion.at(t, work, offset);
+        } catch (IllegalStateException e) {
+            throw new IllegalStateException("motion of frame '" + path() + "' failed at t = " + t + ": "
+                    + e.getMessage(), e);
+        }
     }
 
     /**

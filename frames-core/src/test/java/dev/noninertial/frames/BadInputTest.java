@@ -73,6 +73,14 @@ class BadInputTest {
     }
 
     @Test
+    void motionReturningNullIsReportedWithTheFramePath() {
+        ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
+        ReferenceFrame broken = lab.attach("deck", Motions.fixed(Vector3D.PLUS_I)).attach("mast", t -> null);
+        refused(IllegalStateException.class, "lab/deck/mast", () -> broken.placementIn(lab, 1.0));
+        refused(IllegalStateException.class, "lab/deck/mast", () -> broken.placementIn(broken.parent().get(), 1.0));
+    }
+
+    @Test
     void nullArgumentsAreRefusedByName() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         refused(NullPointerException.class, "childMotion", () -> lab.attach("x", null));

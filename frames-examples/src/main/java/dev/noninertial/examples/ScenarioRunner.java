@@ -13,7 +13,8 @@ import java.util.List;
  * drag-free trajectory with and without the Earth's rotation.
  *
  * <p>Usage: {@code ScenarioRunner [--out DIR]}; with {@code --out} every table is also written as
- * {@code DIR/NAME.csv} (the directory is created if needed).
+ * {@code DIR/NAME.csv} (the directory is created if needed), and the inertial terms at the crane
+ * hook are plotted in {@code DIR/ship-crane.svg}.
  */
 public final class ScenarioRunner {
 
@@ -37,7 +38,7 @@ public final class ScenarioRunner {
             if ("--out".equals(args[i]) && i + 1 < args.length) {
                 out = Path.of(args[++i]);
             } else if ("--help".equals(args[i])) {
-                System.out.println("usage: ScenarioRunner [--out DIR]   (DIR receives one CSV file per table)");
+                System.out.println("usage: ScenarioRunner [--out DIR]   (DIR receives one CSV file per table and an SVG plot)");
                 return;
             } else {
                 System.err.println("unknown or incomplete argument '" + args[i]
@@ -62,6 +63,10 @@ public final class ScenarioRunner {
             print.println(t.toText());
             if (out != null) {
                 print.println("  written: " + t.writeCsv(out));
+                if ("ship-crane".equals(t.id())) {
+                    // the four inertial terms over the roll cycle (columns 3 to 6 of the table)
+                    print.println("  written: " + t.writeSvg(out, "inertial term magnitude", 0, 3, 4, 5, 6));
+                }
                 print.println();
             }
         }

@@ -9,6 +9,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import dev.noninertial.examples.chart.Curve;
+import dev.noninertial.examples.chart.CurveSheet;
+
 /**
  * One result table of a scenario: named columns with units, rows of numbers or words, and notes.
  * Printed as aligned text for the console and written as CSV (full double precision) for
@@ -105,6 +108,31 @@ final class ScenarioTable {
     private static String pad(String text, int width, boolean left) {
         String fill = " ".repeat(Math.max(0, width - text.length()));
         return left ? text + fill : fill + text;
+    }
+
+    /**
+     * Writes {@code DIR/id.svg}: the numeric columns {@code yColumns} against column {@code xColumn},
+     * one curve each, drawn by the project's own chart writer. All y columns must share a unit.
+     */
+    Path writeSvg(Path directory, String quantity, int xColumn, int... yColumns) throws IOException {
+        int n = rows.size();
+        double[] x = new double[n];
+        for (int r = 0; r < n; r++) {
+            x[r] = (Double) rows.get(r)[xColumn];
+        }
+        Column xc = columns.get(xColumn);
+        CurveSheet sheet = CurveSheet.titled(title).withHorizontalAxis(xc.name(), xc.unit())
+                .withVerticalAxis(quantity, columns.get(yColumns[0]).unit());
+        for (int c : yColumns) {
+            double[] y = new double[n];
+            for (int r = 0; r < n; r++) {
+                y[r] = (Double) rows.get(r)[c];
+            }
+            sheet = sheet.withCurve(Curve.of(columns.get(c).name(), x, y));
+        }
+        Path file = directory.resolve(id + ".svg");
+        Files.writeString(file, sheet.toSvg(), StandardCharsets.UTF_8);
+        return file;
     }
 
     /** Writes {@code DIR/id.csv}: a header of "name [unit]" cells, then the rows at full precision. */

@@ -39,6 +39,8 @@ class ScenarioRunnerTest {
         assertTrue(Files.readAllLines(dir.resolve("ship-crane.csv")).get(0).startsWith("t [s],"));
         assertTrue(Files.readAllLines(dir.resolve("long-range.csv")).get(0).startsWith("azimuth [deg],"));
         assertTrue(Files.readAllLines(dir.resolve("site-rotation.csv")).get(0).endsWith(",unit"));
+        String svg = Files.readString(dir.resolve("ship-crane.svg"));
+        assertTrue(svg.startsWith("<") && svg.contains("<svg") && svg.contains("Euler"), "ship-crane.svg is an SVG chart");
     }
 
     @Test

@@ -244,6 +244,36 @@ public final class Motions {
         }
     }
 
+    /** Range checks of the bulk conversions, with the messages of {@link Motion#toBase}. */
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static void checkBulk(double[] times, int timeOffset, double[] source, int sourceOffset,
+                                  double[] target, int targetOffset, int count) {
+        Arguments.nonNull("source", source);
+        Arguments.nonNull("target", target);
+        Arguments.nonNull("times", times);
+        if (count < 0) {
+            throw new IllegalArgumentException("count must be >= 0, got " + count);
+        }
+        long span = (long) count * 9;
+        if (sourceOffset < 0 || sourceOffset + span > source.length) {
+            throw new IllegalArgumentException("sourceOffset must be in [0, " + (source.length - span)
+                    + "] for " + count + " states, got " + sourceOffset);
+        }
+        if (targetOffset < 0 || targetOffset + span > target.length) {
+            throw new IllegalArgumentException("targetOffset must be in [0, " + (target.length - span)
+                    + "] for " + count + " states, got " + targetOffset);
+        }
+        if (source == target && sourceOffset != targetOffset
+                && Math.abs((long) sourceOffset - targetOffset) < span) {
+            throw new IllegalArgumentException("source and target ranges overlap with different offsets ("
+                    + sourceOffset + " and " + targetOffset + ")");
+        }
+        if (timeOffset < 0 || (long) timeOffset + count > times.length) {
+            throw new IllegalArgumentException("timeOffset must be in [0, " + (times.length - count)
+                    + "] for " + count + " states, got " + timeOffset);
+        }
+    }
+
     private static void checkTime(double t) {
         if (!Double.isFinite(t)) {
             throw new IllegalArgumentException("t must be finite, got " + t);
@@ -288,6 +318,78 @@ public final class Motions {
             }
             writeTurn(axis.getX(), axis.getY(), axis.getZ(), angle, rateAtZero + angularAcceleration * t,
                     angularAcceleration, target, offset);
+        }
+
+        // Bulk conversion F to B specialised for a spin: the placement stays in registers and the zero
+        // origin terms are skipped. Same arithmetic as the generic path (which adds the zero
+        // origin), so the same values; only the sign of a zero result may differ.
+        @Override
+        public void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
+                           double[] target, int targetOffset, int count) {
+            checkBulk(times, timeOffset, source, sourceOffset, target, targetOffset, count);
+            double nx = axis.getX();
+            double ny = axis.getY();
+            double nz = axis.getZ();
+            double alx = angularAcceleration * nx;
+            double aly = angularAcceleration * ny;
+            double alz = angularAcceleration * nz;
+            for (int k = 0; k < count; k++) {
+                double t = times[timeOffset + k];
+                checkTime(t);
+                double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
+                if (!Double.isFinite(angle)) {
+                    throw new IllegalArgumentException("spin angle overflows at t = " + t + ": it must stay finite");
+                }
+                double rate = rateAtZero + angularAcceleration * t;
+                double half = 0.5 * angle;
+                double sh = Math.sin(half);
+                double q0 = Math.cos(half);
+                double q1 = sh * nx;
+                double q2 = sh * ny;
+                double q3 = sh * nz;
+                double q0q0 = q0 * q0;
+                double r00 = 2.0 * (q0q0 + q1 * q1) - 1.0;
+                double r01 = 2.0 * (q1 * q2 + q0 * q3);
+                double r02 = 2.0 * (q1 * q3 - q0 * q2);
+                double r10 = 2.0 * (q1 * q2 - q0 * q3);
+                double r11 = 2.0 * (q0q0 + q2 * q2) - 1.0;
+                double r12 = 2.0 * (q2 * q3 + q0 * q1);
+                double r20 = 2.0 * (q1 * q3 + q0 * q2);
+                double r21 = 2.0 * (q2 * q3 - q0 * q1);
+                double r22 = 2.0 * (q0q0 + q3 * q3) - 1.0;
+                double wx = rate * nx;
+                double wy = rate * ny;
+                double wz = rate * nz;
+                int i = sourceOffset + 9 * k;
+                int j = targetOffset + 9 * k;
+                double x = source[i];
+                double y = source[i + 1];
+                double z = source[i + 2];
+                double vx = source[i + 3];
+                double vy = source[i + 4];
+                double vz = source[i + 5];
+                double ax = source[i + 6];
+                double ay = source[i + 7];
+                double az = source[i + 8];
+                double cx = wy * z - wz * y;
+                double cy = wz * x - wx * z;
+                double cz = wx * y - wy * x;
+                double vfx = vx + cx;
+                double vfy = vy + cy;
+                double vfz = vz + cz;
+                double afx = ax + (aly * z - alz * y) + 2 * (wy * vz - wz * vy) + (wy * cz - wz * cy);
+                double afy = ay + (alz * x - alx * z) + 2 * (wz * vx - wx * vz) + (wz * cx - wx * cz);
+                double afz = az + (alx * y - aly * x) + 2 * (wx * vy - wy * vx) + (wx * cy - wy * cx);
+                target[j] = r00 * x + r10 * y + r20 * z;
+                target[j + 1] = r01 * x + r11 * y + r21 * z;
+                target[j + 2] = r02 * x + r12 * y + r22 * z;
+                target[j + 3] = r00 * vfx + r10 * vfy + r20 * vfz;
+                target[j + 4] = r01 * vfx + r11 * vfy + r21 * vfz;
+                target[j + 5] = r02 * vfx + r12 * vfy + r22 * vfz;
+                target[j + 6] = r00 * afx + r10 * afy + r20 * afz;
+                target[j + 7] = r01 * afx + r11 * afy + r21 * afz;
+                target[j + 8] = r02 * afx + r12 * afy + r22 * afz;
+            }
         }
 
         @Override
