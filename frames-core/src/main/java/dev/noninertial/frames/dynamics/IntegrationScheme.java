@@ -11,6 +11,8 @@ import org.hipparchus.ode.nonstiff.HighamHall54Integrator;
  * local error per step against the solver's absolute tolerances (m on position, m/s on velocity)
  * plus its relative tolerance times the component's size. Other Hipparchus integrators can be
  * supplied with {@link TrajectorySolver#withIntegrator(java.util.function.Supplier)}.
+ *
+ * <p>An enum constant: immutable and thread-safe; each run builds its own integrator from it.
  */
 public enum IntegrationScheme {
 

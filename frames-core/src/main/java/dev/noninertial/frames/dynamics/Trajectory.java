@@ -28,7 +28,9 @@ import dev.noninertial.frames.ReferenceFrame;
  * velocity. Times outside [{@link #startTime()}, {@link #endTime()}] are refused, never
  * extrapolated.
  *
- * <p>Immutable; thread-safe when the forces given to the solver are.
+ * <p>Immutable; thread-safe when the forces given to the solver are. Not serializable (it holds
+ * the integrator's dense output): ship the initial state and the solver set-up instead, or the
+ * {@link FramedState}s and samples taken from it, which are.
  */
 public final class Trajectory {
 

@@ -12,6 +12,8 @@ import dev.noninertial.frames.Formats;
  *
  * <p><b>Conventions.</b> {@link #time()} in s from the user's epoch; {@link #components()} are
  * x, y, z (m) and vx, vy, vz (m/s), seen in and resolved in the integration frame.
+ *
+ * <p>Immutable once thrown and safe to pass between threads.
  */
 public final class TrajectoryFailure extends RuntimeException {
 

@@ -7,6 +7,8 @@ package dev.noninertial.frames.uncertainty;
  * position x, y, z (m), then velocity x, y, z (m/s), then, for the nine-component layout,
  * acceleration x, y, z (m/s^2). All components are seen in and resolved in the frame the
  * covariance is tagged with.
+ *
+ * <p>An enum constant: immutable and thread-safe.
  */
 public enum StateLayout {
 
