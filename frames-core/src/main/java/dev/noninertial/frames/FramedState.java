@@ -13,8 +13,11 @@ public final class FramedState implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** Frame the state is seen in and resolved in. */
     private final ReferenceFrame frame;
+    /** Time (s from the user's epoch). */
     private final double time;
+    /** The state. */
     private final PointState state;
 
     FramedState(ReferenceFrame frame, double time, PointState state) {

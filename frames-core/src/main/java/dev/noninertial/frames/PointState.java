@@ -22,14 +22,23 @@ public final class PointState implements Serializable {
     /** Layout of one state in the bulk arrays: x, y, z, vx, vy, vz, ax, ay, az. */
     public static final int COMPONENTS = 9;
 
+    /** Position x (m). */
     final double x;
+    /** Position y (m). */
     final double y;
+    /** Position z (m). */
     final double z;
+    /** Velocity x (m/s). */
     final double vx;
+    /** Velocity y (m/s). */
     final double vy;
+    /** Velocity z (m/s). */
     final double vz;
+    /** Acceleration x (m/s^2). */
     final double ax;
+    /** Acceleration y (m/s^2). */
     final double ay;
+    /** Acceleration z (m/s^2). */
     final double az;
 
     PointState(double x, double y, double z, double vx, double vy, double vz,

@@ -60,10 +60,15 @@ public final class EarthFrames implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** Earth model: shape, GM, rotation rate. */
     private final EarthModel model;
+    /** UT1 instant of t = 0. */
     private final Instant epoch;
+    /** IERS 2010 Earth rotation angle at the epoch (rad). */
     private final double angleAtEpoch;
+    /** Earth-centred inertial root. */
     private final ReferenceFrame inertial;
+    /** Earth-fixed frame spinning under the inertial root. */
     private final ReferenceFrame earthFixed;
 
     private EarthFrames(EarthModel model, Instant epoch) {

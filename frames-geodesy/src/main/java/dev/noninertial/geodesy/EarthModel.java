@@ -54,19 +54,32 @@ public final class EarthModel implements Serializable {
      */
     public static final EarthModel GRS80 = of(Ellipsoid.GRS80, 3.986005e14, 7.292115e-5);
 
+    /** Shape (a, f). */
     private final Ellipsoid ellipsoid;
+    /** Geocentric gravitational constant GM (m^3/s^2). */
     private final double gm;
+    /** Rotation rate (rad/s). */
     private final double omega;
     // derived
+    /** Semi-major axis (m), derived from the shape. */
     private final double a;
+    /** Semi-minor axis (m), derived. */
     private final double b;
+    /** First eccentricity squared, derived. */
     private final double e2;
+    /** Linear eccentricity E (m), derived. */
     private final double linear;     // E
+    /** E squared (m^2), derived. */
     private final double linear2;    // E^2
+    /** Normal-potential auxiliary q0 at u = b, derived. */
     private final double q0;
+    /** m = w^2 a^2 b / GM, derived. */
     private final double m;
+    /** Normal gravity at the equator (m/s^2), derived. */
     private final double gammaE;
+    /** Normal gravity at the poles (m/s^2), derived. */
     private final double gammaP;
+    /** Somigliana constant k, derived. */
     private final double k;
 
     private EarthModel(Ellipsoid ellipsoid, double gm, double omega) {

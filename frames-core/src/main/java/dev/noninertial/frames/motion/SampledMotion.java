@@ -88,6 +88,7 @@ public final class SampledMotion implements Motion, Serializable {
     /** Smallest dot product of consecutive aligned quaternions: cos(MAX_TURN / 2). */
     private static final double MIN_ALIGNED_DOT = Math.cos(0.5 * MAX_TURN_BETWEEN_SAMPLES);
 
+    /** Sample times (s), strictly increasing. */
     private final double[] times;
     /** x, y, z per sample, B axes. */
     private final double[] positions;
@@ -97,6 +98,7 @@ public final class SampledMotion implements Motion, Serializable {
     private final double[] velocities;
     /** measured angular velocity per sample in F axes, or null. */
     private final double[] rates;
+    /** Longest interval between samples that is interpolated (s); queries inside longer gaps are refused. */
     private final double maxGap;
 
     private SampledMotion(double[] times, double[] positions, double[] attitudes, double[] velocities,
@@ -833,6 +835,13 @@ public final class SampledMotion implements Motion, Serializable {
         }
     }
 
+    /**
+     * Re-checks a deserialized motion like any other source of samples.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
     private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
         in.defaultReadObject();
         // a stream is untrusted input: check it like any other source of samples
