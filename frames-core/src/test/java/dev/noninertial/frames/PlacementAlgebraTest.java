@@ -19,6 +19,15 @@ class PlacementAlgebraTest {
 
     private static final double RELATIVE = 1e-12;
 
+    private static double worstState;
+    private static double worstPlacement;
+
+    @org.junit.jupiter.api.AfterAll
+    static void report() {
+        System.out.printf(java.util.Locale.ROOT, "MEASURED placement algebra: worst relative error %.2e (placements),"
+                + " %.2e (state round trips)%n", worstPlacement, worstState);
+    }
+
     private static Placement randomPlacement(Random rng) {
         return Placement.of(RandomFrames.vector(rng, 50), RandomFrames.vector(rng, 10), RandomFrames.vector(rng, 3),
                 RandomFrames.orientation(rng), RandomFrames.vector(rng, 2), RandomFrames.vector(rng, 1));
@@ -106,6 +115,7 @@ class PlacementAlgebraTest {
         double error = expected.position().distance(actual.position())
                 + expected.velocity().distance(actual.velocity())
                 + expected.acceleration().distance(actual.acceleration());
+        worstState = Math.max(worstState, error / scale);
         assertTrue(error <= RELATIVE * scale, () -> "expected " + expected + " got " + actual + " error " + error);
     }
 
@@ -119,6 +129,7 @@ class PlacementAlgebraTest {
                 + expected.angularVelocity().distance(actual.angularVelocity())
                 + expected.angularAcceleration().distance(actual.angularAcceleration());
         double angle = Rotation.distance(expected.orientation(), actual.orientation());
+        worstPlacement = Math.max(worstPlacement, Math.max(error / scale, angle));
         assertTrue(error <= RELATIVE * scale && angle <= RELATIVE,
                 () -> "expected " + expected + "\n got " + actual + "\n error " + error + ", angle " + angle);
     }
