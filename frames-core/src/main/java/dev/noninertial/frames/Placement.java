@@ -495,9 +495,9 @@ public final class Placement implements Serializable {
      */
     public void toBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
-        for (int k = 0; k < count; k++) {
-            int i = sourceOffset + k * PointState.COMPONENTS;
-            int j = targetOffset + k * PointState.COMPONENTS;
+        int end = sourceOffset + count * PointState.COMPONENTS;
+        for (int i = sourceOffset, j = targetOffset; i < end; i += PointState.COMPONENTS,
+                j += PointState.COMPONENTS) {
             double x = source[i];
             double y = source[i + 1];
             double z = source[i + 2];
@@ -541,9 +541,12 @@ public final class Placement implements Serializable {
      */
     public void fromBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
-        for (int k = 0; k < count; k++) {
-            int i = sourceOffset + k * PointState.COMPONENTS;
-            int j = targetOffset + k * PointState.COMPONENTS;
+        // Both indices advance by a stride instead of being recomputed as offset + k * 9 for each
+        // array: with the recomputed pair this loop measured 1.28x the hand-inlined primitive
+        // loop, with strides 0.91x to 1.00x (frames-bench PairedRatios). checkBulk bounds end.
+        int end = sourceOffset + count * PointState.COMPONENTS;
+        for (int i = sourceOffset, j = targetOffset; i < end; i += PointState.COMPONENTS,
+                j += PointState.COMPONENTS) {
             double dx = source[i] - ox;
             double dy = source[i + 1] - oy;
             double dz = source[i + 2] - oz;
