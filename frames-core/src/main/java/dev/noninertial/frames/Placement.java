@@ -325,147 +325,13 @@ public final class Placement implements Serializable {
      */
     public Placement then(Placement inner) {
         Arguments.nonNull("inner", inner);
-        Placement q = inner;
-        double qox = q.ox;
-        double qoy = q.oy;
-        double qoz = q.oz;
-        double qovx = q.ovx;
-        double qovy = q.ovy;
-        double qovz = q.ovz;
-        double qoax = q.oax;
-        double qoay = q.oay;
-        double qoaz = q.oaz;
-        double qr00 = q.r00;
-        double qr01 = q.r01;
-        double qr02 = q.r02;
-        double qr10 = q.r10;
-        double qr11 = q.r11;
-        double qr12 = q.r12;
-        double qr20 = q.r20;
-        double qr21 = q.r21;
-        double qr22 = q.r22;
-        double qwx = q.wx;
-        double qwy = q.wy;
-        double qwz = q.wz;
-        double qalx = q.alx;
-        double qaly = q.aly;
-        double qalz = q.alz;
-        // Two kinds of link are common and cheap to compose: one that only turns (origin at rest at
-        // F's origin: G's origin is F's) and one that only moves its origin (identity orientation,
-        // no rates: G's axes and rates are F's). Their terms that are exactly zero are skipped;
-        // the results agree with the general formulas except possibly in the sign of a zero.
-        // then(Placement) runs this same block, so both compose to the same bits.
-        boolean turnOnly = qox == 0 && qoy == 0 && qoz == 0 && qovx == 0 && qovy == 0 && qovz == 0
-                && qoax == 0 && qoay == 0 && qoaz == 0;
-        boolean moveOnly = qr00 == 1 && qr11 == 1 && qr22 == 1 && qr01 == 0 && qr02 == 0 && qr10 == 0
-                && qr12 == 0 && qr20 == 0 && qr21 == 0 && qwx == 0 && qwy == 0 && qwz == 0
-                && qalx == 0 && qaly == 0 && qalz == 0;
-        double nox;
-        double noy;
-        double noz;
-        double novx;
-        double novy;
-        double novz;
-        double noax;
-        double noay;
-        double noaz;
-        if (turnOnly) {
-            nox = ox;
-            noy = oy;
-            noz = oz;
-            novx = ovx;
-            novy = ovy;
-            novz = ovz;
-            noax = oax;
-            noay = oay;
-            noaz = oaz;
-        } else {
-            // origin of G: the point (o, o', o'') of the inner placement, seen in F, converted to B
-            double px = qox;
-            double py = qoy;
-            double pz = qoz;
-            double pvx = qovx;
-            double pvy = qovy;
-            double pvz = qovz;
-            // w x p
-            double cx = wy * pz - wz * py;
-            double cy = wz * px - wx * pz;
-            double cz = wx * py - wy * px;
-            double vfx = pvx + cx;
-            double vfy = pvy + cy;
-            double vfz = pvz + cz;
-            // al x p + 2 w x pv + w x (w x p)
-            double afx = qoax + (aly * pz - alz * py) + 2 * (wy * pvz - wz * pvy) + (wy * cz - wz * cy);
-            double afy = qoay + (alz * px - alx * pz) + 2 * (wz * pvx - wx * pvz) + (wz * cx - wx * cz);
-            double afz = qoaz + (alx * py - aly * px) + 2 * (wx * pvy - wy * pvx) + (wx * cy - wy * cx);
-            nox = ox + r00 * px + r10 * py + r20 * pz;
-            noy = oy + r01 * px + r11 * py + r21 * pz;
-            noz = oz + r02 * px + r12 * py + r22 * pz;
-            novx = ovx + r00 * vfx + r10 * vfy + r20 * vfz;
-            novy = ovy + r01 * vfx + r11 * vfy + r21 * vfz;
-            novz = ovz + r02 * vfx + r12 * vfy + r22 * vfz;
-            noax = oax + r00 * afx + r10 * afy + r20 * afz;
-            noay = oay + r01 * afx + r11 * afy + r21 * afz;
-            noaz = oaz + r02 * afx + r12 * afy + r22 * afz;
-        }
-        double nr00;
-        double nr01;
-        double nr02;
-        double nr10;
-        double nr11;
-        double nr12;
-        double nr20;
-        double nr21;
-        double nr22;
-        double nwx;
-        double nwy;
-        double nwz;
-        double nalx;
-        double naly;
-        double nalz;
-        if (moveOnly) {
-            nr00 = r00;
-            nr01 = r01;
-            nr02 = r02;
-            nr10 = r10;
-            nr11 = r11;
-            nr12 = r12;
-            nr20 = r20;
-            nr21 = r21;
-            nr22 = r22;
-            nwx = wx;
-            nwy = wy;
-            nwz = wz;
-            nalx = alx;
-            naly = aly;
-            nalz = alz;
-        } else {
-            // R_GB = R_GF R_FB
-            nr00 = qr00 * r00 + qr01 * r10 + qr02 * r20;
-            nr01 = qr00 * r01 + qr01 * r11 + qr02 * r21;
-            nr02 = qr00 * r02 + qr01 * r12 + qr02 * r22;
-            nr10 = qr10 * r00 + qr11 * r10 + qr12 * r20;
-            nr11 = qr10 * r01 + qr11 * r11 + qr12 * r21;
-            nr12 = qr10 * r02 + qr11 * r12 + qr12 * r22;
-            nr20 = qr20 * r00 + qr21 * r10 + qr22 * r20;
-            nr21 = qr20 * r01 + qr21 * r11 + qr22 * r21;
-            nr22 = qr20 * r02 + qr21 * r12 + qr22 * r22;
-            // R_GF w and R_GF al
-            double twx = qr00 * wx + qr01 * wy + qr02 * wz;
-            double twy = qr10 * wx + qr11 * wy + qr12 * wz;
-            double twz = qr20 * wx + qr21 * wy + qr22 * wz;
-            double tax = qr00 * alx + qr01 * aly + qr02 * alz;
-            double tay = qr10 * alx + qr11 * aly + qr12 * alz;
-            double taz = qr20 * alx + qr21 * aly + qr22 * alz;
-            nwx = qwx + twx;
-            nwy = qwy + twy;
-            nwz = qwz + twz;
-            nalx = qalx + tax - (qwy * twz - qwz * twy);
-            naly = qaly + tay - (qwz * twx - qwx * twz);
-            nalz = qalz + taz - (qwx * twy - qwy * twx);
-        }
-        return new Placement(nox, noy, noz, novx, novy, novz, noax, noay, noaz,
-                nr00, nr01, nr02, nr10, nr11, nr12, nr20, nr21, nr22, nwx, nwy, nwz, nalx, naly, nalz);
+        // one composition formula serves objects and the primitive chains of ReferenceFrame, so
+        // both give the same bits; the scratch array is the only allocation besides the result
+        double[] work = new double[2 * COMPONENTS];
+        toArray(work, 0);
+        inner.toArray(work, COMPONENTS);
+        compose(work, 0, work, COMPONENTS, work, 0);
+        return fromArray(work, 0);
     }
 
     /**
@@ -978,7 +844,6 @@ public final class Placement implements Serializable {
         // F's origin: G's origin is F's) and one that only moves its origin (identity orientation,
         // no rates: G's axes and rates are F's). Their terms that are exactly zero are skipped;
         // the results agree with the general formulas except possibly in the sign of a zero.
-        // then(Placement) runs this same block, so both compose to the same bits.
         boolean turnOnly = qox == 0 && qoy == 0 && qoz == 0 && qovx == 0 && qovy == 0 && qovz == 0
                 && qoax == 0 && qoay == 0 && qoaz == 0;
         boolean moveOnly = qr00 == 1 && qr11 == 1 && qr22 == 1 && qr01 == 0 && qr02 == 0 && qr10 == 0
