@@ -35,6 +35,9 @@ public final class Ellipsoid implements Serializable {
     /** Largest accepted flattening; beyond it the shape is no longer a planet-like body. */
     public static final double MAX_FLATTENING = 0.5;
 
+    /** Largest flattening for which {@link #toGeodetic} tries its fast path (Earth: 0.00335). */
+    private static final double FAST_MAX_FLATTENING = 0.01;
+
     /** WGS84: a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., Table 3.1). */
     public static final Ellipsoid WGS84 = ofInverseFlattening(6378137.0, 298.257223563);
 
@@ -205,9 +208,22 @@ public final class Ellipsoid implements Serializable {
         double x = position.getX();
         double y = position.getY();
         double zs = position.getZ();
+        double z = Math.abs(zs);
+        double pp = x * x + y * y;
+        double rr = pp + z * z;
+        double aa = a * a;
+        // fast path: Earth-like flattening, from half the equatorial radius out to a thousand of
+        // them; there the squares neither overflow nor underflow (pp is a normal number with room
+        // for the exact low parts of x*x and y*y), the evolute is far and one Newton step from
+        // Bowring's start already converges
+        if (f <= FAST_MAX_FLATTENING && rr >= 0.25 * aa && rr <= 1.0e6 * aa && pp >= 0x1p-900) {
+            LatLonHeight fast = toGeodeticOutside(x, y, zs, z, pp);
+            if (fast != null) {
+                return fast;
+            }
+        }
         double p = Math.hypot(x, y);
         double lon = p == 0.0 ? 0.0 : longitude(x, y);
-        double z = Math.abs(zs);
         double lat;
         if (p == 0.0) {
             lat = 0.5 * Math.PI;
@@ -220,7 +236,96 @@ public final class Ellipsoid implements Serializable {
         } else {
             lat = footLatitude(p, z);
         }
-        return new LatLonHeight(zs < 0 ? -lat : lat, lon, height(x, y, p, z, lat));
+        double pl = p == 0.0 ? 0.0 : lowPart(x, y, p);
+        double h = height(p, pl, z, Math.sin(lat), Math.cos(lat));
+        return new LatLonHeight(zs < 0 ? -lat : lat, lon, h);
+    }
+
+    /**
+     * The fast path of {@link #toGeodetic} away from the centre: Bowring's start with its sines
+     * and cosines taken from ratios of the coordinates (no trigonometric call), Newton steps on
+     * the normal condition carried as a (sin, cos) pair, one atan2, then the same exactly split
+     * correction and height as the general path, with the sine and cosine of the corrected
+     * latitude obtained from those already at hand. Returns null where it does not converge
+     * within four steps, so that the general path decides.
+     */
+    private LatLonHeight toGeodeticOutside(double x, double y, double zs, double z, double pp) {
+        // no overflow or underflow here (range checked by the caller), so sqrt of the sum of
+        // squares replaces hypot; its last-bit error is carried by the low part pl
+        double p = Math.sqrt(pp);
+        double pl = lowPart(x, y, p);
+        // Bowring's start: parametric latitude beta with tan(beta) = a z / (b p), then
+        // tan(lat0) = (z + e'^2 b sin^3 beta) / (p - e^2 a cos^3 beta)
+        double az = a * z;
+        double bp = b * p;
+        double rb = 1.0 / Math.sqrt(az * az + bp * bp);
+        double sb = az * rb;
+        double cb = bp * rb;
+        double num = z + ep2 * b * sb * sb * sb;
+        double den = p - e2 * a * cb * cb * cb;
+        double rl = 1.0 / Math.sqrt(num * num + den * den);
+        double s = num * rl;
+        double c = den * rl;
+        boolean converged = false;
+        for (int k = 0; k < 4 && !converged; k++) {
+            // residual of the normal condition p sin - z cos - e^2 N sin cos and its exact derivative
+            double ss = s * s;
+            double w2 = 1.0 - e2 * ss;
+            double en = e2 * a / Math.sqrt(w2);
+            double g = p * s - z * c - en * s * c;
+            double slope = p * c + z * s - en * ((c * c - ss) + e2 * ss * c * c / w2);
+            double d = g / slope;
+            if (!(slope > 0.0) || !(Math.abs(d) < 1e-3)) {
+                return null;
+            }
+            // rotate (s, c) by -d; 1 - d^2/2 keeps the pair unit to O(d^4)
+            double half = 1.0 - 0.5 * d * d;
+            double s1 = s * half - c * d;
+            c = c * half + s * d;
+            s = s1;
+            // quadratic convergence with a second-derivative ratio of about e^2 / 2: a step below
+            // 1e-8 rad leaves an error below 1e-18 rad
+            converged = Math.abs(d) < 1e-8;
+        }
+        if (!converged || !(s >= 0.0) || !(c > 0.0)) {
+            return null;
+        }
+        double lat = Math.atan2(s, c);
+        // the same correction as polish, with the low part of p included
+        double sl = Math.sin(lat);
+        double cl = Math.cos(lat);
+        double n = a / Math.sqrt(1.0 - e2 * sl * sl);
+        double zc = z * cl;
+        double zcl = Math.fma(z, cl, -zc);
+        double residual = Math.fma(p, sl, -zc) - zcl + pl * sl - n * e2 * sl * cl;
+        double slope = p * cl + z * sl - n * e2 * (cl * cl - sl * sl);
+        double corrected = lat - residual / slope;
+        if (Math.abs(corrected - lat) < 1e-12 && corrected <= 0.5 * Math.PI && corrected >= 0.0) {
+            // sin and cos of lat + dl to first order: dl is below 1e-12 rad, so dl^2 is far
+            // below the rounding of the sum
+            double dl = corrected - lat;
+            double sNew = sl + cl * dl;
+            cl = cl - sl * dl;
+            sl = sNew;
+            lat = corrected;
+        }
+        double h = height(p, pl, z, sl, cl);
+        return new LatLonHeight(zs < 0 ? -lat : lat, longitude(x, y), h);
+    }
+
+    /**
+     * Low part of {@code p = sqrt(x^2 + y^2)} for p &gt; 0: {@code (x^2 + y^2 - p^2) / (2 p)} with
+     * the squares split exactly with fused multiply-add, so that p + pl carries p to about
+     * twice the double precision.
+     */
+    private static double lowPart(double x, double y, double p) {
+        double xx = x * x;
+        double xxl = Math.fma(x, x, -xx);
+        double yy = y * y;
+        double yyl = Math.fma(y, y, -yy);
+        double pp = xx + yy;
+        double ppl = Math.abs(yy) > Math.abs(xx) ? (yy - pp) + xx + xxl + yyl : (xx - pp) + yy + xxl + yyl;
+        return (Math.fma(-p, p, pp) + ppl) / (2.0 * p);
     }
 
     /**
@@ -228,25 +333,9 @@ public final class Ellipsoid implements Serializable {
      * on the normal minus the foot point's own projection. Near the surface the three terms are
      * about 6e6 m and cancel, so each is carried as an unevaluated sum of two doubles (products
      * split exactly with fused multiply-add); this keeps the height to about 0.3 nm instead of
-     * about 2 nm.
+     * about 2 nm. {@code pl} is the low part of p.
      */
-    private double height(double x, double y, double p, double z, double lat) {
-        double sLat = Math.sin(lat);
-        double cLat = Math.cos(lat);
-        // low part of p = sqrt(x^2 + y^2)
-        double xx = x * x;
-        double xxl = Math.fma(x, x, -xx);
-        double yy = y * y;
-        double yyl = Math.fma(y, y, -yy);
-        double pp = xx + yy;
-        double ppl = (xx - pp) + yy + xxl + yyl;     // |xx| >= |yy| is not needed for this bound
-        if (Math.abs(yy) > Math.abs(xx)) {
-            ppl = (yy - pp) + xx + xxl + yyl;
-        }
-        double pl = (Math.fma(-p, p, pp) + ppl) / (2.0 * p);
-        if (p == 0.0) {
-            pl = 0.0;
-        }
+    private double height(double p, double pl, double z, double sLat, double cLat) {
         // W^2 = 1 - e^2 sin^2 lat as a double-double, then W and a W
         double ss = sLat * sLat;
         double ssl = Math.fma(sLat, sLat, -ss);
