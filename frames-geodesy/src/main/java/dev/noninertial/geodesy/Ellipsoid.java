@@ -242,75 +242,61 @@ public final class Ellipsoid implements Serializable {
     }
 
     /**
-     * The fast path of {@link #toGeodetic} away from the centre: Bowring's start with its sines
-     * and cosines taken from ratios of the coordinates (no trigonometric call), Newton steps on
-     * the normal condition carried as a (sin, cos) pair, one atan2, then the same exactly split
-     * correction and height as the general path, with the sine and cosine of the corrected
-     * latitude obtained from those already at hand. Returns null where it does not converge
-     * within four steps, so that the general path decides.
+     * The fast path of {@link #toGeodetic} away from the centre: Bowring's one-step latitude,
+     * with the cube of the parametric latitude's sine and cosine taken from ratios of the
+     * coordinates (no trigonometric call), seeds Newton's method on the normal condition
+     * {@code p sin(lat) - z cos(lat) - e^2 N sin(lat) cos(lat) = 0}, whose residual is evaluated
+     * with the large products split exactly; the height is then formed as on the general path,
+     * with the sine and cosine of the corrected latitude obtained from those already at hand.
+     * Near the surface one Newton step suffices. Returns null where three steps do not
+     * converge, so that the general path decides.
      */
     private LatLonHeight toGeodeticOutside(double x, double y, double zs, double z, double pp) {
         // no overflow or underflow here (range checked by the caller), so sqrt of the sum of
         // squares replaces hypot; its last-bit error is carried by the low part pl
         double p = Math.sqrt(pp);
         double pl = lowPart(x, y, p);
-        // Bowring's start: parametric latitude beta with tan(beta) = a z / (b p), then
+        // Bowring: tan(beta) = a z / (b p) for the parametric latitude beta, then
         // tan(lat0) = (z + e'^2 b sin^3 beta) / (p - e^2 a cos^3 beta)
         double az = a * z;
         double bp = b * p;
-        double rb = 1.0 / Math.sqrt(az * az + bp * bp);
-        double sb = az * rb;
-        double cb = bp * rb;
-        double num = z + ep2 * b * sb * sb * sb;
-        double den = p - e2 * a * cb * cb * cb;
-        double rl = 1.0 / Math.sqrt(num * num + den * den);
-        double s = num * rl;
-        double c = den * rl;
-        boolean converged = false;
-        for (int k = 0; k < 4 && !converged; k++) {
-            // residual of the normal condition p sin - z cos - e^2 N sin cos and its exact derivative
-            double ss = s * s;
-            double w2 = 1.0 - e2 * ss;
-            double en = e2 * a / Math.sqrt(w2);
-            double g = p * s - z * c - en * s * c;
-            double slope = p * c + z * s - en * ((c * c - ss) + e2 * ss * c * c / w2);
-            double d = g / slope;
-            if (!(slope > 0.0) || !(Math.abs(d) < 1e-3)) {
-                return null;
-            }
-            // rotate (s, c) by -d; 1 - d^2/2 keeps the pair unit to O(d^4)
-            double half = 1.0 - 0.5 * d * d;
-            double s1 = s * half - c * d;
-            c = c * half + s * d;
-            s = s1;
-            // quadratic convergence with a second-derivative ratio of about e^2 / 2: a step below
-            // 1e-8 rad leaves an error below 1e-18 rad
-            converged = Math.abs(d) < 1e-8;
-        }
-        if (!converged || !(s >= 0.0) || !(c > 0.0)) {
-            return null;
-        }
-        double lat = Math.atan2(s, c);
-        // the same correction as polish, with the low part of p included
+        double rr = az * az + bp * bp;
+        double inv3 = 1.0 / (rr * Math.sqrt(rr));
+        double lat = seedAtan2(z + ep2 * b * (az * az * az) * inv3, p - e2 * a * (bp * bp * bp) * inv3);
         double sl = Math.sin(lat);
         double cl = Math.cos(lat);
-        double n = a / Math.sqrt(1.0 - e2 * sl * sl);
-        double zc = z * cl;
-        double zcl = Math.fma(z, cl, -zc);
-        double residual = Math.fma(p, sl, -zc) - zcl + pl * sl - n * e2 * sl * cl;
-        double slope = p * cl + z * sl - n * e2 * (cl * cl - sl * sl);
-        double corrected = lat - residual / slope;
-        if (Math.abs(corrected - lat) < 1e-12 && corrected <= 0.5 * Math.PI && corrected >= 0.0) {
-            // sin and cos of lat + dl to first order: dl is below 1e-12 rad, so dl^2 is far
-            // below the rounding of the sum
+        for (int k = 0; k < 3; k++) {
+            double ss = sl * sl;
+            double w2 = 1.0 - e2 * ss;
+            double en = e2 * a / Math.sqrt(w2);
+            double zc = z * cl;
+            double zcl = Math.fma(z, cl, -zc);
+            double residual = Math.fma(p, sl, -zc) - zcl + pl * sl - en * sl * cl;
+            // exact derivative, so that the error left is second order: about e^2/2 d^2
+            double slope = p * cl + z * sl - en * ((cl * cl - ss) + e2 * ss * cl * cl / w2);
+            if (!(slope > 0.0)) {
+                return null;
+            }
+            double corrected = lat - residual / slope;
+            if (!(corrected >= 0.0 && corrected <= 0.5 * Math.PI)) {
+                return null;
+            }
             double dl = corrected - lat;
-            double sNew = sl + cl * dl;
-            cl = cl - sl * dl;
-            sl = sNew;
+            if (Math.abs(dl) < 1e-8) {
+                // a step below 1e-8 rad leaves below 1e-18 rad; sin and cos of lat + dl to
+                // second order in dl (the third-order term is below 2e-25)
+                double keep = 1.0 - 0.5 * dl * dl;
+                double sNew = sl * keep + cl * dl;
+                cl = cl * keep - sl * dl;
+                sl = sNew;
+                double h = height(p, pl, z, sl, cl);
+                return new LatLonHeight(zs < 0 ? -corrected : corrected, longitude(x, y), h);
+            }
             lat = corrected;
+            sl = Math.sin(lat);
+            cl = Math.cos(lat);
         }
-        double h = height(p, pl, z, sl, cl);
-        return new LatLonHeight(zs < 0 ? -lat : lat, longitude(x, y), h);
+        return null;
     }
 
     /**
@@ -360,12 +346,14 @@ public final class Ellipsoid implements Serializable {
     }
 
     /**
-     * Longitude from atan2 plus one Newton correction on {@code y cos(lon) - x sin(lon) = 0}
-     * with the products split exactly: atan2 alone can be 2 ulp off, which near lon = +-pi is
-     * 3 nm on the equator.
+     * Longitude from a seed angle plus one Newton correction on {@code y cos(lon) - x sin(lon) = 0}
+     * with the products split exactly. The correction is {@code tan} of the seed's error, so a
+     * seed error e leaves about e^3 / 3: the seed needs no more than about 1e-6 rad, and even
+     * atan2 alone (up to 2 ulp off, which near lon = +-pi is 3 nm on the equator) is not enough
+     * without it.
      */
     private static double longitude(double x, double y) {
-        double lon = Math.atan2(y, x);
+        double lon = seedAtan2(y, x);
         double c = Math.cos(lon);
         double s = Math.sin(lon);
         double xs = x * s;
@@ -373,8 +361,50 @@ public final class Ellipsoid implements Serializable {
         double residual = Math.fma(y, c, -xs) - xsl;
         double correction = residual / (x * c + y * s);
         double corrected = lon + correction;
-        // keep the documented range [-pi, pi]
-        return Math.abs(corrected) <= Math.PI ? corrected : lon;
+        // keep the documented range [-pi, pi]: beyond it the exact angle lies between the
+        // double nearest pi and pi itself, whose nearest double in range is Math.PI
+        return Math.abs(corrected) <= Math.PI ? corrected : Math.copySign(Math.PI, corrected);
+    }
+
+    /** Sixteen equal parts of [0, 1]: the centres t_k = (k + 1/2) / 16, exact in binary. */
+    private static final double[] SEED_TAN = new double[16];
+
+    /** atan(t_k), from the platform's atan once at class loading. */
+    private static final double[] SEED_ATAN = new double[16];
+
+    static {
+        for (int k = 0; k < 16; k++) {
+            SEED_TAN[k] = (k + 0.5) / 16.0;
+            SEED_ATAN[k] = Math.atan(SEED_TAN[k]);
+        }
+    }
+
+    /**
+     * An angle within about 1e-15 rad of {@code atan2(y, x)} (not both zero), for seeding the
+     * Newton corrections, at a fraction of the cost of {@link Math#atan2}: octant reduction to
+     * t in [0, 1], then {@code atan(t) = atan(t_k) + atan((t - t_k) / (1 + t t_k))} with the
+     * nearest centre t_k and the Taylor series of atan to the 9th power for an argument below
+     * 1/32 (truncation below 3e-18). It does not need to be correctly rounded: every caller
+     * corrects it with an exactly split residual.
+     */
+    static double seedAtan2(double y, double x) {
+        double ax = Math.abs(x);
+        double ay = Math.abs(y);
+        boolean steep = ay > ax;
+        double t = steep ? ax / ay : ay / ax;
+        int k = Math.min(15, (int) (t * 16.0));
+        double tk = SEED_TAN[k];
+        double u = (t - tk) / (1.0 + t * tk);
+        double uu = u * u;
+        double angle = SEED_ATAN[k]
+                + u * (1.0 - uu * (1.0 / 3 - uu * (1.0 / 5 - uu * (1.0 / 7 - uu * (1.0 / 9)))));
+        if (steep) {
+            angle = 0.5 * Math.PI - angle;
+        }
+        if (x < 0.0) {
+            angle = Math.PI - angle;
+        }
+        return Math.copySign(angle, y);
     }
 
     /** Rounding error of {@code s = u + v} (Knuth's two-sum). */
