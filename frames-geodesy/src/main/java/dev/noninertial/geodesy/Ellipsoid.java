@@ -212,9 +212,11 @@ public final class Ellipsoid implements Serializable {
      * of the result): at most 1.70e-9 m for heights from -10 km to 1,000 km; at most 2.9e-16 of the
      * distance from the centre for heights from -5,000 km to 400,000 km. Cost, measured the same
      * day with the benchmark module's {@code PairedRatios} (9 rounds, shared 2-core machine, load
-     * average 0.65 to 0.78) at a point 250 m above the ellipsoid: 2.78 and 2.87 times
-     * {@link #toCartesian} in two runs, against 5.58 and 5.62 before the fast path in the same
-     * session. Allocates only the result (40 bytes per call under JMH's {@code -prof gc}).
+     * average 0.7 to 4.4) at a point 250 m above the ellipsoid: the median over nine runs was
+     * 2.11 to 3.62 times {@link #toCartesian} (one run above 3), against 4.43 to 8.38 over eight
+     * runs before the fast path; 0.41 to 0.47 times a hand-written fixed-point iteration (0.83 to
+     * 0.95 before in the same session), so less than half the former time. Allocates only the
+     * result (40 bytes per call under JMH's {@code -prof gc}).
      *
      * @param position Earth-fixed Cartesian position (m), ECEF axes, finite
      * @return geodetic position: latitude in [-pi/2, pi/2], longitude in [-pi, pi] (rad), height (m)
