@@ -35,6 +35,9 @@ public final class Ellipsoid implements Serializable {
     /** Largest accepted flattening; beyond it the shape is no longer a planet-like body. */
     public static final double MAX_FLATTENING = 0.5;
 
+    /** Largest flattening for which {@link #toGeodetic} tries its fast path (Earth: 0.00335). */
+    private static final double FAST_MAX_FLATTENING = 0.01;
+
     /** WGS84: a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., Table 3.1). */
     public static final Ellipsoid WGS84 = ofInverseFlattening(6378137.0, 298.257223563);
 
@@ -181,20 +184,39 @@ public final class Ellipsoid implements Serializable {
      * latitudes including the poles, the centre and the region inside the evolute of the
      * meridian ellipse included).
      *
-     * <p>Method: the foot point F on the ellipse satisfies {@code X - F = s grad(q)/2} with
+     * <p>Method, for flattening up to 0.01 and distances from the centre between a/2 and
+     * 1000 a (the common case): Bowring's one-step latitude, with the parametric latitude's sine
+     * and cosine taken from ratios of the coordinates, starts Newton's method on the normal
+     * condition {@code p sin(lat) - z cos(lat) - e^2 N sin(lat) cos(lat) = 0} with its exact
+     * derivative and its large products split exactly with fused multiply-add. For heights from
+     * -10 km to 1,000 km Bowring's start is within 9.0e-10 rad (measured on WGS84, 200,000
+     * points), so the first step is below 1e-8 rad and, convergence being quadratic with a ratio
+     * of about e^2/2, leaves an error below 1e-18 rad; 3,000 km below the surface the start is
+     * within 8.5e-8 rad and a second step is taken. The one
+     * inverse-trigonometric seed is a short series (within 1e-15 rad), corrected by that step.
+     * Everywhere else, and wherever three steps would not converge: the foot point F on the
+     * ellipse satisfies {@code X - F = s grad(q)/2} with
      * {@code q = p^2/a^2 + z^2/b^2 - 1}, which gives {@code F = (a^2 p/(a^2+s), b^2 z/(b^2+s))}
      * and one scalar equation in {@code s}, strictly decreasing and convex on the admissible
      * interval (the classical Lagrange-multiplier form of the nearest-point problem). It is solved
      * by Newton's method in {@code sigma = b^2 + s}, started from a Bowring-type estimate and kept
      * inside a proven bracket, so it converges monotonically from below in a few steps. The
      * latitude follows from the normal at F and the height from the projection of X on it.
+     * On both paths the height is a compensated sum of exactly split products, and the longitude
+     * is corrected by one exactly split Newton step.
      * At the centre the nearest surface points are the poles: the result is latitude +pi/2,
      * height -b. On the axis the longitude is reported as 0.
      *
-     * <p>Measured accuracy (2026-12-02, 1,000,000 points against a 50-digit Hipparchus Dfp
-     * reference, distance between the exact point and the exact image of the result): at most
-     * 1.71e-9 m for heights from -10 km to 1,000 km; at most 2.9e-16 of the distance from the
-     * centre for heights from -5,000 km to 400,000 km.
+     * <p>Measured accuracy (2026-12-02, after the fast path was added; 1,000,000 points against
+     * a 50-digit Hipparchus Dfp reference, distance between the exact point and the exact image
+     * of the result): at most 1.70e-9 m for heights from -10 km to 1,000 km; at most 2.9e-16 of the
+     * distance from the centre for heights from -5,000 km to 400,000 km. Cost, measured the same
+     * day with the benchmark module's {@code PairedRatios} (9 rounds, shared 2-core machine, load
+     * average 0.7 to 4.4) at a point 250 m above the ellipsoid: the median over nine runs was
+     * 2.11 to 3.62 times {@link #toCartesian} (one run above 3), against 4.43 to 8.38 over eight
+     * runs before the fast path; 0.41 to 0.47 times a hand-written fixed-point iteration (0.83 to
+     * 0.95 before in the same session), so less than half the former time. Allocates only the
+     * result (40 bytes per call under JMH's {@code -prof gc}).
      *
      * @param position Earth-fixed Cartesian position (m), ECEF axes, finite
      * @return geodetic position: latitude in [-pi/2, pi/2], longitude in [-pi, pi] (rad), height (m)
@@ -205,9 +227,22 @@ public final class Ellipsoid implements Serializable {
         double x = position.getX();
         double y = position.getY();
         double zs = position.getZ();
+        double z = Math.abs(zs);
+        double pp = x * x + y * y;
+        double rr = pp + z * z;
+        double aa = a * a;
+        // fast path: Earth-like flattening, from half the equatorial radius out to a thousand of
+        // them; there the squares neither overflow nor underflow (pp is a normal number with room
+        // for the exact low parts of x*x and y*y), the evolute is far and one Newton step from
+        // Bowring's start already converges
+        if (f <= FAST_MAX_FLATTENING && rr >= 0.25 * aa && rr <= 1.0e6 * aa && pp >= 0x1p-900) {
+            LatLonHeight fast = toGeodeticOutside(x, y, zs, z, pp);
+            if (fast != null) {
+                return fast;
+            }
+        }
         double p = Math.hypot(x, y);
         double lon = p == 0.0 ? 0.0 : longitude(x, y);
-        double z = Math.abs(zs);
         double lat;
         if (p == 0.0) {
             lat = 0.5 * Math.PI;
@@ -220,7 +255,92 @@ public final class Ellipsoid implements Serializable {
         } else {
             lat = footLatitude(p, z);
         }
-        return new LatLonHeight(zs < 0 ? -lat : lat, lon, height(x, y, p, z, lat));
+        double pl = p == 0.0 ? 0.0 : lowPart(x, y, p);
+        double h = height(p, pl, z, Math.sin(lat), Math.cos(lat));
+        return new LatLonHeight(zs < 0 ? -lat : lat, lon, h);
+    }
+
+    /**
+     * The fast path of {@link #toGeodetic} away from the centre: Bowring's one-step latitude,
+     * with the cube of the parametric latitude's sine and cosine taken from ratios of the
+     * coordinates (no trigonometric call), seeds Newton's method on the normal condition
+     * {@code p sin(lat) - z cos(lat) - e^2 N sin(lat) cos(lat) = 0}, whose residual is evaluated
+     * with the large products split exactly; the height is then formed as on the general path,
+     * with the sine and cosine of the corrected latitude obtained from those already at hand.
+     * Near the surface one Newton step suffices. Returns null where three steps do not
+     * converge, so that the general path decides.
+     */
+    private LatLonHeight toGeodeticOutside(double x, double y, double zs, double z, double pp) {
+        // no overflow or underflow here (range checked by the caller), so sqrt of the sum of
+        // squares replaces hypot; its last-bit error is carried by the low part pl
+        double p = Math.sqrt(pp);
+        double pl = lowPart(x, y, p);
+        // Bowring: tan(beta) = a z / (b p) for the parametric latitude beta, then
+        // tan(lat0) = (z + e'^2 b sin^3 beta) / (p - e^2 a cos^3 beta)
+        double az = a * z;
+        double bp = b * p;
+        double rr = az * az + bp * bp;
+        double inv3 = 1.0 / (rr * Math.sqrt(rr));
+        double lat = seedAtan2(z + ep2 * b * (az * az * az) * inv3, p - e2 * a * (bp * bp * bp) * inv3);
+        double sl = Math.sin(lat);
+        double cl = Math.cos(lat);
+        for (int k = 0; k < 3; k++) {
+            // W^2 = 1 - e^2 sin^2 lat as a double-double (as in height), W and 1/W
+            double ss = sl * sl;
+            double ssl = Math.fma(sl, sl, -ss);
+            double q = e2 * ss;
+            double ql = Math.fma(e2, ss, -q) + e2 * ssl;
+            double t = 1.0 - q;
+            double tl = ((1.0 - t) - q) - ql;
+            double w = Math.sqrt(t);
+            double iw = 1.0 / w;
+            double en = e2 * a * iw;
+            double zc = z * cl;
+            double zcl = Math.fma(z, cl, -zc);
+            double residual = Math.fma(p, sl, -zc) - zcl + pl * sl - en * sl * cl;
+            // exact derivative, so that the error left is second order: about e^2/2 d^2
+            double slope = p * cl + z * sl - en * ((cl * cl - ss) + e2 * ss * cl * cl * iw * iw);
+            if (!(slope > 0.0)) {
+                return null;
+            }
+            double corrected = lat - residual / slope;
+            if (!(corrected >= 0.0 && corrected <= 0.5 * Math.PI)) {
+                return null;
+            }
+            double dl = corrected - lat;
+            if (Math.abs(dl) < 1e-8) {
+                // a step below 1e-8 rad leaves below 1e-18 rad; sin and cos of lat + dl to
+                // second order in dl (the third-order term is below 2e-25), and W moved by its
+                // derivative -e^2 sin cos / W times dl (the second-order term is below 4e-19,
+                // 3e-12 m on a W), added to its low part
+                double wl = (Math.fma(-w, w, t) + tl) * (0.5 * iw) - e2 * sl * cl * iw * dl;
+                double keep = 1.0 - 0.5 * dl * dl;
+                double sNew = sl * keep + cl * dl;
+                cl = cl * keep - sl * dl;
+                sl = sNew;
+                double h = height(p, pl, z, sl, cl, w, wl);
+                return new LatLonHeight(zs < 0 ? -corrected : corrected, longitude(x, y), h);
+            }
+            lat = corrected;
+            sl = Math.sin(lat);
+            cl = Math.cos(lat);
+        }
+        return null;
+    }
+
+    /**
+     * Low part of {@code p = sqrt(x^2 + y^2)} for p &gt; 0: {@code (x^2 + y^2 - p^2) / (2 p)} with
+     * the squares split exactly with fused multiply-add, so that p + pl carries p to about
+     * twice the double precision.
+     */
+    private static double lowPart(double x, double y, double p) {
+        double xx = x * x;
+        double xxl = Math.fma(x, x, -xx);
+        double yy = y * y;
+        double yyl = Math.fma(y, y, -yy);
+        double pp = xx + yy;
+        double ppl = Math.abs(yy) > Math.abs(xx) ? (yy - pp) + xx + xxl + yyl : (xx - pp) + yy + xxl + yyl;
+        return (Math.fma(-p, p, pp) + ppl) / (2.0 * p);
     }
 
     /**
@@ -228,26 +348,10 @@ public final class Ellipsoid implements Serializable {
      * on the normal minus the foot point's own projection. Near the surface the three terms are
      * about 6e6 m and cancel, so each is carried as an unevaluated sum of two doubles (products
      * split exactly with fused multiply-add); this keeps the height to about 0.3 nm instead of
-     * about 2 nm.
+     * about 2 nm. {@code pl} is the low part of p.
      */
-    private double height(double x, double y, double p, double z, double lat) {
-        double sLat = Math.sin(lat);
-        double cLat = Math.cos(lat);
-        // low part of p = sqrt(x^2 + y^2)
-        double xx = x * x;
-        double xxl = Math.fma(x, x, -xx);
-        double yy = y * y;
-        double yyl = Math.fma(y, y, -yy);
-        double pp = xx + yy;
-        double ppl = (xx - pp) + yy + xxl + yyl;     // |xx| >= |yy| is not needed for this bound
-        if (Math.abs(yy) > Math.abs(xx)) {
-            ppl = (yy - pp) + xx + xxl + yyl;
-        }
-        double pl = (Math.fma(-p, p, pp) + ppl) / (2.0 * p);
-        if (p == 0.0) {
-            pl = 0.0;
-        }
-        // W^2 = 1 - e^2 sin^2 lat as a double-double, then W and a W
+    private double height(double p, double pl, double z, double sLat, double cLat) {
+        // W^2 = 1 - e^2 sin^2 lat as a double-double, then W
         double ss = sLat * sLat;
         double ssl = Math.fma(sLat, sLat, -ss);
         double q = e2 * ss;
@@ -256,6 +360,11 @@ public final class Ellipsoid implements Serializable {
         double tl = ((1.0 - t) - q) - ql;
         double w = Math.sqrt(t);
         double wl = (Math.fma(-w, w, t) + tl) / (2.0 * w);
+        return height(p, pl, z, sLat, cLat, w, wl);
+    }
+
+    /** The height as above, with {@code W = sqrt(1 - e^2 sin^2 lat)} given as w + wl. */
+    private double height(double p, double pl, double z, double sLat, double cLat, double w, double wl) {
         double aw = a * w;
         double awl = Math.fma(a, w, -aw) + a * wl;
         // p cos + z sin - a W with exact products and a compensated sum
@@ -271,12 +380,14 @@ public final class Ellipsoid implements Serializable {
     }
 
     /**
-     * Longitude from atan2 plus one Newton correction on {@code y cos(lon) - x sin(lon) = 0}
-     * with the products split exactly: atan2 alone can be 2 ulp off, which near lon = +-pi is
+     * Longitude from a seed angle plus one Newton correction on {@code y cos(lon) - x sin(lon) = 0}
+     * with the products split exactly. The correction is {@code tan} of the seed's error, so a
+     * seed error e leaves about e^3 / 3: any seed within 1e-6 rad would do. Without the
+     * correction even atan2 would not be enough: it can be 2 ulp off, which near lon = +-pi is
      * 3 nm on the equator.
      */
     private static double longitude(double x, double y) {
-        double lon = Math.atan2(y, x);
+        double lon = seedAtan2(y, x);
         double c = Math.cos(lon);
         double s = Math.sin(lon);
         double xs = x * s;
@@ -284,8 +395,50 @@ public final class Ellipsoid implements Serializable {
         double residual = Math.fma(y, c, -xs) - xsl;
         double correction = residual / (x * c + y * s);
         double corrected = lon + correction;
-        // keep the documented range [-pi, pi]
-        return Math.abs(corrected) <= Math.PI ? corrected : lon;
+        // keep the documented range [-pi, pi]: beyond it the exact angle lies between the
+        // double nearest pi and pi itself, whose nearest double in range is Math.PI
+        return Math.abs(corrected) <= Math.PI ? corrected : Math.copySign(Math.PI, corrected);
+    }
+
+    /** Sixteen equal parts of [0, 1]: the centres t_k = (k + 1/2) / 16, exact in binary. */
+    private static final double[] SEED_TAN = new double[16];
+
+    /** atan(t_k), from the platform's atan once at class loading. */
+    private static final double[] SEED_ATAN = new double[16];
+
+    static {
+        for (int k = 0; k < 16; k++) {
+            SEED_TAN[k] = (k + 0.5) / 16.0;
+            SEED_ATAN[k] = Math.atan(SEED_TAN[k]);
+        }
+    }
+
+    /**
+     * An angle within about 1e-15 rad of {@code atan2(y, x)} (not both zero), for seeding the
+     * Newton corrections, at a fraction of the cost of {@link Math#atan2}: octant reduction to
+     * t in [0, 1], then {@code atan(t) = atan(t_k) + atan((t - t_k) / (1 + t t_k))} with the
+     * nearest centre t_k and the Taylor series of atan to the 9th power for an argument below
+     * 1/32 (truncation below 3e-18). It does not need to be correctly rounded: every caller
+     * corrects it with an exactly split residual.
+     */
+    static double seedAtan2(double y, double x) {
+        double ax = Math.abs(x);
+        double ay = Math.abs(y);
+        boolean steep = ay > ax;
+        double t = steep ? ax / ay : ay / ax;
+        int k = Math.min(15, (int) (t * 16.0));
+        double tk = SEED_TAN[k];
+        double u = (t - tk) / (1.0 + t * tk);
+        double uu = u * u;
+        double angle = SEED_ATAN[k]
+                + u * (1.0 - uu * (1.0 / 3 - uu * (1.0 / 5 - uu * (1.0 / 7 - uu * (1.0 / 9)))));
+        if (steep) {
+            angle = 0.5 * Math.PI - angle;
+        }
+        if (x < 0.0) {
+            angle = Math.PI - angle;
+        }
+        return Math.copySign(angle, y);
     }
 
     /** Rounding error of {@code s = u + v} (Knuth's two-sum). */
