@@ -53,31 +53,55 @@ public final class Placement implements Serializable {
     static final double UNIT_TOLERANCE = 1e-9;
 
     // origin of F in B, resolved in B
+    /** Origin x of F in B axes (m). */
     final double ox;
+    /** Origin y (m). */
     final double oy;
+    /** Origin z (m). */
     final double oz;
+    /** Origin velocity x in B axes (m/s). */
     final double ovx;
+    /** Origin velocity y (m/s). */
     final double ovy;
+    /** Origin velocity z (m/s). */
     final double ovz;
+    /** Origin acceleration x in B axes (m/s^2). */
     final double oax;
+    /** Origin acceleration y (m/s^2). */
     final double oay;
+    /** Origin acceleration z (m/s^2). */
     final double oaz;
     // R, row-major, maps B components to F components
+    /** Orientation element (0, 0): v_F = R v_B. */
     final double r00;
+    /** Orientation element (0, 1): v_F = R v_B. */
     final double r01;
+    /** Orientation element (0, 2): v_F = R v_B. */
     final double r02;
+    /** Orientation element (1, 0): v_F = R v_B. */
     final double r10;
+    /** Orientation element (1, 1): v_F = R v_B. */
     final double r11;
+    /** Orientation element (1, 2): v_F = R v_B. */
     final double r12;
+    /** Orientation element (2, 0): v_F = R v_B. */
     final double r20;
+    /** Orientation element (2, 1): v_F = R v_B. */
     final double r21;
+    /** Orientation element (2, 2): v_F = R v_B. */
     final double r22;
     // angular velocity and acceleration of F relative to B, resolved in F
+    /** Angular velocity x of F relative to B, F axes (rad/s). */
     final double wx;
+    /** Angular velocity y (rad/s). */
     final double wy;
+    /** Angular velocity z (rad/s). */
     final double wz;
+    /** Angular acceleration x, F axes (rad/s^2). */
     final double alx;
+    /** Angular acceleration y (rad/s^2). */
     final double aly;
+    /** Angular acceleration z (rad/s^2). */
     final double alz;
 
     @SuppressWarnings("checkstyle:ParameterNumber")

@@ -18,9 +18,13 @@ public final class ReferenceFrame implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** Readable name given at creation. */
     private final String name;
+    /** Parent frame, null for a root. */
     private final ReferenceFrame parent;
+    /** Placement of this frame in its parent over time, null for a root. */
     private final Motion motion;
+    /** Number of links from the root. */
     private final int depth;
 
     private ReferenceFrame(String name, ReferenceFrame parent, Motion motion) {

@@ -44,10 +44,15 @@ public final class Ellipsoid implements Serializable {
     /** GRS80: a = 6378137 m, 1/f = 298.257222101 (Moritz, Geodetic Reference System 1980). */
     public static final Ellipsoid GRS80 = ofInverseFlattening(6378137.0, 298.257222101);
 
+    /** Semi-major axis a (m). */
     private final double a;
+    /** Flattening f. */
     private final double f;
+    /** Semi-minor axis b = a (1 - f) (m). */
     private final double b;
+    /** First eccentricity squared. */
     private final double e2;
+    /** Second eccentricity squared. */
     private final double ep2;
     /** a^2 - b^2, the squared linear eccentricity (m^2). */
     private final double linear2;
