@@ -30,7 +30,6 @@ class FiniteDifferenceTest {
     @Test
     void chainsOfOneToSixLinksReportConsistentRates() {
         Random rng = new Random(20261202L); // fixed seed
-        int checked = 0;
         for (int trial = 0; trial < 120; trial++) {
             ReferenceFrame root = ReferenceFrame.inertialRoot("root" + trial);
             int depth = 1 + trial % 6;
@@ -41,9 +40,7 @@ class FiniteDifferenceTest {
             checkOrigin(leaf, base, t);
             checkRotation(leaf, base, t);
             checkPointState(leaf, base, t, RandomFrames.state(rng));
-            checked++;
         }
-        assertTrue(checked == 120);
         WORST.forEach((what, worst) -> System.out.printf(java.util.Locale.ROOT,
                 "MEASURED finite differences, 120 chains of 1-6 links: %s worst relative error %.2e%n", what, worst));
     }
