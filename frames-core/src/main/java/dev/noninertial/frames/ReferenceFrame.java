@@ -149,7 +149,7 @@ public final class ReferenceFrame implements Serializable {
             // placements per link; same arithmetic as then(), hence the same bits
             double[] work = new double[2 * Placement.COMPONENTS];
             placeInAncestor(ancestor, t, work);
-            return Placement.fromArray(work, 0);
+            return Placement.wrap(java.util.Arrays.copyOf(work, Placement.COMPONENTS));
         }
         Placement local = motion.at(t);
         if (local == null) {
@@ -166,7 +166,7 @@ public final class ReferenceFrame implements Serializable {
         }
         parent.placeInAncestor(ancestor, t, work);
         writeLocal(t, work, Placement.COMPONENTS);
-        Placement.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+        Kinematics.compose(work, 0, work, Placement.COMPONENTS, work, 0);
     }
 
     /** This frame's motion on primitives; a motion that returns null is reported with the frame's path. */
