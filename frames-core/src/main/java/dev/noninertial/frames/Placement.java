@@ -77,16 +77,16 @@ public final class Placement implements Serializable {
         1, 0, 0, 0, 1, 0, 0, 0, 1,
         0, 0, 0, 0, 0, 0});
 
-    /** Tolerance on |q| - 1 for quaternions given to the factories. */
-    static final double UNIT_TOLERANCE = 1e-9;
-
     /**
-     * Largest element of {@code |R R^T - I|} that {@link #fromArray(double[], int)} accepts: a
-     * matrix made from a quaternion within {@link #UNIT_TOLERANCE} of unit deviates by at most
-     * about 8e-9 (four times |q|^2 - 1), so every array {@link #toArray(double[], int)} writes
-     * is accepted back.
+     * Largest {@code ||q|^2 - 1|} of a quaternion that {@link #ofQuaternion} uses as given; one
+     * further off (up to {@link Orientations#UNIT_QUATERNION_TOLERANCE} on {@code ||q| - 1|}) is
+     * normalised first. A quaternion computed from a sine and a cosine is within a few 1e-16, and
+     * normalising it would only move rounding around; the matrix of an accepted quaternion is
+     * orthonormal within about 4e-12, well inside {@link Orientations#MATRIX_TOLERANCE}, so every
+     * array {@link #toArray(double[], int)} writes is accepted back by
+     * {@link #fromArray(double[], int)}.
      */
-    static final double MATRIX_TOLERANCE = 1e-8;
+    static final double AS_GIVEN = 1e-12;
 
     /**
      * The components in the matrix layout of {@link #toArray(double[], int)}: o, o', o'' (B axes),
@@ -149,7 +149,9 @@ public final class Placement implements Serializable {
      * Low-level factory on primitives for motion implementations: the orientation is a unit
      * quaternion (scalar first) in the same convention as Hipparchus {@link Rotation}, so that it
      * maps B components to F components: F turned by angle {@code a} about unit axis {@code n} has
-     * {@code (cos(a/2), sin(a/2) n)}. The quaternion is used as given (not normalised).
+     * {@code (cos(a/2), sin(a/2) n)}. A quaternion whose norm differs from 1 by at most
+     * {@link Orientations#UNIT_QUATERNION_TOLERANCE} is accepted and normalised (one within 1e-12
+     * of unit, as computed ones are, is used as given).
      *
      * @param ox origin x in B (m)
      * @param oy origin y in B (m)
@@ -172,7 +174,7 @@ public final class Placement implements Serializable {
      * @param alz angular acceleration z in F (rad/s^2)
      * @return the placement
      * @throws IllegalArgumentException if a value is not finite or the quaternion is not unit
-     *         within 1e-9
+     *         within {@link Orientations#UNIT_QUATERNION_TOLERANCE}
      */
     @SuppressWarnings("checkstyle:ParameterNumber")
     public static Placement ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
@@ -214,7 +216,7 @@ public final class Placement implements Serializable {
      * @param offset index where o's x component is written
      * @throws NullPointerException if {@code target} is null
      * @throws IllegalArgumentException if the range does not fit the array, a value is not finite or the quaternion is not unit
-     *         within 1e-9
+     *         within {@link Orientations#UNIT_QUATERNION_TOLERANCE}
      */
     @SuppressWarnings("checkstyle:ParameterNumber")
     public static void ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
@@ -225,9 +227,13 @@ public final class Placement implements Serializable {
         Arguments.fromIndexSize("target", target, "offset", offset, COMPONENTS);
         double sum = ox + oy + oz + ovx + ovy + ovz + oax + oay + oaz + wx + wy + wz + alx + aly + alz;
         double n2 = q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3;
-        if (!Double.isFinite(sum) || !(Math.abs(n2 - 1.0) <= 2 * UNIT_TOLERANCE)) {
-            refuseComponents(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3,
+        if (!Double.isFinite(sum) || !(Math.abs(n2 - 1.0) <= AS_GIVEN)) {
+            double inv = 1.0 / refuseComponents(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3,
                     wx, wy, wz, alx, aly, alz);
+            q0 *= inv;
+            q1 *= inv;
+            q2 *= inv;
+            q3 *= inv;
         }
         int o = offset;
         target[o] = ox;
@@ -248,22 +254,23 @@ public final class Placement implements Serializable {
         target[o + 23] = alz;
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
-    private static void refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
-                                         double oax, double oay, double oaz,
-                                         double q0, double q1, double q2, double q3,
-                                         double wx, double wy, double wz, double alx, double aly, double alz) {
+    /** Refuses a non-finite component or a quaternion off unit; returns the quaternion's norm. */
+    private static double refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
+                                           double oax, double oay, double oaz,
+                                           double q0, double q1, double q2, double q3,
+                                           double wx, double wy, double wz, double alx, double aly, double alz) {
         Arguments.finite("origin", new Vector3D(ox, oy, oz));
         Arguments.finite("originVelocity", new Vector3D(ovx, ovy, ovz));
         Arguments.finite("originAcceleration", new Vector3D(oax, oay, oaz));
         Arguments.finite("angularVelocity", new Vector3D(wx, wy, wz));
         Arguments.finite("angularAcceleration", new Vector3D(alx, aly, alz));
         double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-        if (Math.abs(norm * norm - 1.0) <= 2 * UNIT_TOLERANCE) {
-            return; // all finite: only the quick sum overflowed
+        if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
+            throw new IllegalArgumentException("quaternion must be finite and unit (|norm - 1| <= "
+                    + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", "
+                    + q3 + ") with norm " + norm);
         }
-        throw new IllegalArgumentException("quaternion must be finite with norm 1 (within " + UNIT_TOLERANCE
-                + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3 + ") with norm " + norm);
+        return norm;
     }
 
     // ------------------------------------------------------------------ primitive layouts
@@ -294,7 +301,7 @@ public final class Placement implements Serializable {
                 throw new IllegalArgumentException(name + " component " + k + " must be finite, got " + c[k]);
             }
         }
-        Orientations.checkRotationRows(c, Kinematics.MATRIX, MATRIX_TOLERANCE, name + " orientation");
+        Orientations.checkRotationRows(c, Kinematics.MATRIX, Orientations.MATRIX_TOLERANCE, name + " orientation");
     }
 
     /**
@@ -325,7 +332,7 @@ public final class Placement implements Serializable {
      * @return the placement
      * @throws NullPointerException if {@code source} is null
      * @throws IllegalArgumentException if the range does not fit the array, a value is not finite or the quaternion is not unit
-     *         within 1e-9
+     *         within {@link Orientations#UNIT_QUATERNION_TOLERANCE}
      */
     public static Placement fromQuaternionArray(double[] source, int offset) {
         Arguments.fromIndexSize("source", source, "offset", offset, QUATERNION_COMPONENTS);

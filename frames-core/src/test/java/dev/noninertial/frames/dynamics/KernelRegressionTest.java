@@ -224,27 +224,28 @@ class KernelRegressionTest {
             rates[3 * i + 1] = w * n0.getY();
             rates[3 * i + 2] = w * n0.getZ();
         }
-        SampledMotion m = Motions.sampled(times, positions, quaternions);
+        SampledMotion m = SampledMotion.fromArrays(times, positions, quaternions);
         switch (variant) {
             case 0:
                 return m;
             case 1:
                 return m.withVelocities(velocities);
             case 2:
-                return m.withAngularRates(rates);
+                return m.withAngularVelocities(rates);
             case 3:
-                return m.withVelocities(velocities).withAngularRates(rates);
+                return m.withVelocities(velocities).withAngularVelocities(rates);
             default:
                 // a gap between samples 20 and 21 splits the record into two runs
                 double[] gapped = times.clone();
                 for (int i = 21; i < n; i++) {
                     gapped[i] += 3.0;
                 }
-                return Motions.sampled(gapped, positions, quaternions).withMaxGap(1.0);
+                return SampledMotion.fromArrays(gapped, positions, quaternions).withMaxGap(1.0);
         }
     }
 
-    /** One random time-varying link, from every kind of factory (compose and then included). */
+    /** One random time-varying link, from every kind of factory (compositions included; before the one composition API, half of them were built with the former
+     * {@code Motions.compose}, whose chain {@code p0.then(p1).then(p2)} gave the same bits). */
     private static Motion link(Random rng) {
         Motion spin = Motions.spinUp(axis(rng), rng.nextGaussian(), 2 * rng.nextGaussian(), rng.nextGaussian());
         Motion constant = Motions.spin(axis(rng), rng.nextGaussian(), 2 * rng.nextGaussian());
@@ -252,29 +253,29 @@ class KernelRegressionTest {
                 rng.nextGaussian());
         Motion heave = Motions.heave(axis(rng), 3 * rng.nextDouble(), 0.5 + rng.nextDouble(), rng.nextGaussian());
         Motion drift = Motions.translation(vector(rng, 10), vector(rng, 3), vector(rng, 1), vector(rng, 0.2));
-        Motion offset = Motions.fixed(vector(rng, 5), rotation(rng));
-        Motion still = Motions.fixed(vector(rng, 5));
+        Motion offset = Motions.stationary(vector(rng, 5), rotation(rng));
+        Motion still = Motions.stationary(vector(rng, 5));
         switch (rng.nextInt(10)) {
             case 0:
                 return spin;
             case 1:
                 return rock;
             case 2:
-                return Motions.compose(drift, spin);
+                return drift.then(spin);
             case 3:
-                return Motions.compose(offset, rock, heave);
+                return offset.then(rock).then(heave);
             case 4:
                 return drift.then(constant).then(offset);
             case 5:
                 return heave.then(spin);
             case 6:
-                return Motions.compose(still, rock);
+                return still.then(rock);
             case 7:
                 return sampled(rng, rng.nextInt(5)).then(rock);
             case 8:
-                return Motions.compose(offset, spin);
+                return offset.then(spin);
             default:
-                return Motions.compose(drift, rock, spin, still);
+                return drift.then(rock).then(spin).then(still);
         }
     }
 
@@ -323,8 +324,8 @@ class KernelRegressionTest {
             put("position and vector helpers", p.positionFromBase(u));
             put("position and vector helpers", p.vectorToBase(u));
             put("position and vector helpers", p.vectorFromBase(u));
-            put("FramedState in", f.state(t, s).in(other).state());
-            put("FramedState in", f.state(t, s).fictitious());
+            put("FramedState in", f.stateAt(t, s).in(other).state());
+            put("FramedState in", f.stateAt(t, s).fictitious());
 
             int count = 7;
             double[] source = new double[3 + count * PointState.COMPONENTS];
@@ -367,16 +368,16 @@ class KernelRegressionTest {
 
         // every factory's primitive at, one by one (the random links above reach them inside chains)
         List<Motion> factories = List.of(
-                Motions.fixed(vector(rng, 5)),
-                Motions.fixed(vector(rng, 5), rotation(rng)),
+                Motions.stationary(vector(rng, 5)),
+                Motions.stationary(vector(rng, 5), rotation(rng)),
                 Motions.spin(axis(rng), 0.3, 1.7),
                 Motions.spinUp(axis(rng), -0.2, 0.9, 0.35),
                 Motions.translation(vector(rng, 5)),
                 Motions.translation(vector(rng, 5), vector(rng, 2), vector(rng, 1), vector(rng, 0.5), vector(rng, 0.1)),
                 Motions.oscillation(axis(rng), 0.3, 1.3, 0.4),
                 Motions.heave(axis(rng), 1.5, 0.7, -0.3),
-                Motions.compose(Motions.spin(axis(rng), 0.1, 0.5), Motions.heave(axis(rng), 1.0, 0.8, 0.0)),
-                Motions.spin(axis(rng), 0.0, 0.2).then(Motions.fixed(vector(rng, 3), rotation(rng))));
+                Motions.spin(axis(rng), 0.1, 0.5).then(Motions.heave(axis(rng), 1.0, 0.8, 0.0)),
+                Motions.spin(axis(rng), 0.0, 0.2).then(Motions.stationary(vector(rng, 3), rotation(rng))));
         for (Motion m : factories) {
             for (int k = 0; k < 25; k++) {
                 double t = 20 * rng.nextDouble() - 10;
@@ -392,11 +393,11 @@ class KernelRegressionTest {
             SampledMotion m = sampled(rng, variant);
             double[] times = new double[300];
             for (int k = 0; k < times.length; k++) {
-                double t = m.start() + (m.end() - m.start()) * rng.nextDouble();
+                double t = m.startTime() + (m.endTime() - m.startTime()) * rng.nextDouble();
                 if (k < 41 && variant != 4) {
                     t = m.sampleTime(k); // at the samples themselves too
                 }
-                times[k] = m.covers(t) ? t : m.start();
+                times[k] = m.covers(t) ? t : m.startTime();
             }
             double[] c = new double[Placement.COMPONENTS + 2];
             for (double t : times) {
