@@ -1,7 +1,5 @@
 package dev.noninertial.geodesy;
 
-import java.io.Serializable;
-
 import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
@@ -36,7 +34,7 @@ public interface AttitudeProfile {
      */
     static AttitudeProfile still(double heading, double pitch, double roll) {
         AttitudeSample sample = AttitudeSample.still(heading, pitch, roll);
-        return (AttitudeProfile & Serializable) t -> sample;
+        return new SteadyAttitudes.Still(sample);
     }
 
     /**
@@ -54,8 +52,7 @@ public interface AttitudeProfile {
         Arguments.finite("headingRate", headingRate);
         Arguments.finite("pitchRate", pitchRate);
         Arguments.finite("rollRate", rollRate);
-        return (AttitudeProfile & Serializable) t -> new AttitudeSample(start.heading() + headingRate * t,
-                start.pitch() + pitchRate * t, start.roll() + rollRate * t, headingRate, pitchRate, rollRate, 0, 0, 0);
+        return new SteadyAttitudes.Turning(start, headingRate, pitchRate, rollRate);
     }
 
     /**
@@ -68,8 +65,7 @@ public interface AttitudeProfile {
      * @return the motion
      */
     default Motion toMotion() {
-        AttitudeProfile profile = this;
-        return (Motion & Serializable) t -> bodyPlacement(profile.at(t));
+        return new SteadyAttitudes.BodyMotion(this);
     }
 
     /**

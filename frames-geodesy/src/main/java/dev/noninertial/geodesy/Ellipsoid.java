@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Locale;
 
@@ -580,6 +582,49 @@ public final class Ellipsoid implements Serializable {
     @Override
     public int hashCode() {
         return 31 * Double.hashCode(a) + Double.hashCode(f);
+    }
+
+    /**
+     * Replaces this ellipsoid in a stream by its defining constants.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        return new Proxy(a, f);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy (it could hold derived constants that disagree
+     * with a and f).
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("an Ellipsoid is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form: semi-major axis and flattening; reading calls {@link #of(double, double)}.
+     *
+     * @param semiMajorAxis a (m)
+     * @param flattening f
+     */
+    private record Proxy(double semiMajorAxis, double flattening) implements Serializable {
+
+        /**
+         * Rebuilds the ellipsoid with the checks of {@link Ellipsoid#of(double, double)}.
+         *
+         * @return the ellipsoid
+         * @throws InvalidObjectException if the constants are refused
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                return of(semiMajorAxis, flattening);
+            } catch (IllegalArgumentException e) {
+                throw Arguments.refusedStream(Ellipsoid.class, e);
+            }
+        }
     }
 
     @Override
