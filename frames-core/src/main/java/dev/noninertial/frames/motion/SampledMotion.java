@@ -797,7 +797,9 @@ public final class SampledMotion implements Motion, Serializable {
                         + ", " + q3 + ") must be finite and unit (|norm - 1| <= "
                         + Orientations.QUATERNION_TOLERANCE + "), got norm " + norm);
             }
-            double sign = 1.0 / norm;
+            // a quaternion unit to rounding (within 2 ulps of 1) is kept as it is, so normalising is
+            // idempotent: a motion read back from a stream keeps the bits it was written with
+            double sign = Math.abs(norm - 1.0) <= 2 * Math.ulp(1.0) ? 1.0 : 1.0 / norm;
             if (i > 0) {
                 double dot = q0 * quaternions[4 * i - 4] + q1 * quaternions[4 * i - 3]
                         + q2 * quaternions[4 * i - 2] + q3 * quaternions[4 * i - 1];
