@@ -42,7 +42,7 @@ class DeepChainTest {
     private static ReferenceFrame[] chain() {
         ReferenceFrame[] f = new ReferenceFrame[LINKS + 1];
         f[0] = ReferenceFrame.inertialRoot("r");
-        Motion step = Motions.fixed(new Vector3D(1e-3, 0, 0));
+        Motion step = Motions.stationary(new Vector3D(1e-3, 0, 0));
         for (int i = 1; i <= LINKS; i++) {
             f[i] = f[i - 1].attach("f" + i, step);
         }
@@ -60,7 +60,7 @@ class DeepChainTest {
             assertEquals(-50.0, f[LINKS / 2].placementIn(leaf, 0.0).origin().getX(), 1e-9);
             String path = leaf.path();
             assertTrue(path.startsWith("r/f1/f2/") && path.endsWith("/f99999/f100000"), path.substring(0, 20));
-            FramedState s = leaf.state(0.0, PointState.atRest(Vector3D.ZERO));
+            FramedState s = leaf.stateAt(0.0, PointState.stationary(Vector3D.ZERO));
             assertEquals(100.0, s.in(f[0]).state().position().getX(), 1e-9);
             assertEquals(0.0, s.fictitious().total().getNorm(), 0.0);
         });
@@ -85,14 +85,14 @@ class DeepChainTest {
         ReferenceFrame[] f = new ReferenceFrame[10_001];
         f[0] = ReferenceFrame.inertialRoot("r");
         for (int i = 1; i < f.length; i++) {
-            f[i] = f[i - 1].attach("f" + i, Motions.fixed(new Vector3D(0, 1e-3, 0)));
+            f[i] = f[i - 1].attach("f" + i, Motions.stationary(new Vector3D(0, 1e-3, 0)));
         }
         onSmallStack(() -> {
-            Trajectory tr = TrajectorySolver.in(f[f.length - 1]).solve(
+            Trajectory tr = TrajectorySolver.of(f[f.length - 1]).solve(
                     PointState.of(Vector3D.ZERO, new Vector3D(1, 0, 0)), 0.0, 2.0);
             // free particle, no force, fixed frames: x = v t exactly up to the integrator tolerance
-            assertEquals(2.0, tr.end().state().position().getX(), 1e-6);
-            assertEquals(10.0 + 0.0, tr.end().in(f[0]).state().position().getY(), 1e-9);
+            assertEquals(2.0, tr.finalState().state().position().getX(), 1e-6);
+            assertEquals(10.0 + 0.0, tr.finalState().in(f[0]).state().position().getY(), 1e-9);
         });
     }
 
@@ -101,7 +101,7 @@ class DeepChainTest {
         ReferenceFrame[] f = chain();
         onSmallStack(() -> {
             try {
-                FramedState s = f[LINKS].state(1.0, PointState.atRest(Vector3D.ZERO));
+                FramedState s = f[LINKS].stateAt(1.0, PointState.stationary(Vector3D.ZERO));
                 FramedState back = (FramedState) StreamPatch.roundTrip(s);
                 assertEquals(LINKS, back.frame().depth());
                 assertEquals(f[LINKS].path(), back.frame().path());

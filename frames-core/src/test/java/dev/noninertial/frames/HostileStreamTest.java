@@ -38,7 +38,7 @@ class HostileStreamTest {
 
     @Test
     void aNonOrthogonalPlacementIsRefused() {
-        Placement p = Placement.fixed(new Vector3D(1, 2, 3), TURN);
+        Placement p = Placement.stationary(new Vector3D(1, 2, 3), TURN);
         double r00 = p.orientationMatrix()[0][0];
         byte[] bad = StreamPatch.replaceDouble(StreamPatch.bytes(p), r00, 1.5 * r00);
         InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> StreamPatch.read(bad));
@@ -48,7 +48,7 @@ class HostileStreamTest {
     @Test
     void aReflectingPlacementIsRefused() {
         // negating one row of R keeps R R^T = I exactly but makes det R = -1: a mirror
-        Placement p = Placement.fixed(new Vector3D(1, 2, 3), TURN);
+        Placement p = Placement.stationary(new Vector3D(1, 2, 3), TURN);
         byte[] bad = StreamPatch.bytes(p);
         for (double r : p.orientationMatrix()[2]) {
             bad = StreamPatch.replaceDouble(bad, r, -r);
@@ -68,7 +68,7 @@ class HostileStreamTest {
     @Test
     void aFrameWhoseParentIsItselfIsRefused() throws Exception {
         ReferenceFrame root = ReferenceFrame.inertialRoot("root");
-        ReferenceFrame child = root.attach("child", Motions.fixed(new Vector3D(1, 0, 0)));
+        ReferenceFrame child = root.attach("child", Motions.stationary(new Vector3D(1, 0, 0)));
         // proxy-class trick: while writing the child, every later object that stands for a frame
         // (the frame itself or its serialized form) is replaced by the first one written, so the
         // child's parent in the stream is the child itself
@@ -117,8 +117,8 @@ class HostileStreamTest {
     void framesSharedInAStreamStaySharedAndKeepTheirTree() throws Exception {
         ReferenceFrame root = ReferenceFrame.inertialRoot("root");
         ReferenceFrame a = root.attach("a", Motions.spin(Vector3D.PLUS_K, 0.1, 0.2));
-        ReferenceFrame b = a.attach("b", Motions.fixed(new Vector3D(1, 0, 0)));
-        ReferenceFrame c = b.attach("c", Motions.fixed(new Vector3D(0, 1, 0)));
+        ReferenceFrame b = a.attach("b", Motions.stationary(new Vector3D(1, 0, 0)));
+        ReferenceFrame c = b.attach("c", Motions.stationary(new Vector3D(0, 1, 0)));
         @SuppressWarnings("unchecked")
         List<ReferenceFrame> back = (List<ReferenceFrame>) StreamPatch.roundTrip(List.of(c, a, root, b));
         assertSame(back.get(2), back.get(0).root());
@@ -160,7 +160,7 @@ class HostileStreamTest {
     @Test
     void aNegativeVarianceIsRefused() {
         ReferenceFrame root = ReferenceFrame.inertialRoot("root");
-        UncertainState u = UncertainState.of(root.state(0, PointState.atRest(new Vector3D(1, 2, 3))),
+        UncertainState u = UncertainState.of(root.stateAt(0, PointState.stationary(new Vector3D(1, 2, 3))),
                 MatrixUtils.createRealDiagonalMatrix(new double[] {0.0123, 1, 1, 1, 1, 1}));
         byte[] bad = StreamPatch.replaceDouble(StreamPatch.bytes(u), 0.0123, -0.0123);
         InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> StreamPatch.read(bad));

@@ -38,30 +38,28 @@ final class SteadyAttitudes {
     }
 
     /**
-     * Angles changing at constant rates from given values at t = 0.
+     * Angles changing at the constant rates of the start sample from its angles at t = 0.
      *
-     * @param start angles at t = 0 (rad)
-     * @param headingRate d(heading)/dt (rad/s)
-     * @param pitchRate d(pitch)/dt (rad/s)
-     * @param rollRate d(roll)/dt (rad/s)
+     * @param start angles (rad) and rates (rad/s) at t = 0, angular accelerations zero
      */
-    record Turning(AttitudeSample start, double headingRate, double pitchRate, double rollRate)
-            implements AttitudeProfile, Serializable {
+    record Turning(AttitudeSample start) implements AttitudeProfile, Serializable {
         private static final long serialVersionUID = 1L;
 
         /** Re-runs the checks of {@link AttitudeProfile#constantRates}. */
         Turning {
             Arguments.nonNull("start", start);
-            Arguments.finite("headingRate", headingRate);
-            Arguments.finite("pitchRate", pitchRate);
-            Arguments.finite("rollRate", rollRate);
+            if (start.headingAcceleration() != 0 || start.pitchAcceleration() != 0
+                    || start.rollAcceleration() != 0) {
+                throw new IllegalArgumentException("start must have zero angular accelerations for constant rates");
+            }
         }
 
         @Override
         public AttitudeSample at(double t) {
             Arguments.finite("t", t);
-            return new AttitudeSample(start.heading() + headingRate * t, start.pitch() + pitchRate * t,
-                    start.roll() + rollRate * t, headingRate, pitchRate, rollRate, 0, 0, 0);
+            return new AttitudeSample(start.heading() + start.headingRate() * t,
+                    start.pitch() + start.pitchRate() * t, start.roll() + start.rollRate() * t,
+                    start.headingRate(), start.pitchRate(), start.rollRate(), 0, 0, 0);
         }
     }
 
