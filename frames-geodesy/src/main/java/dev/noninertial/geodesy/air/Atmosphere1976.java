@@ -191,7 +191,11 @@ public final class Atmosphere1976 implements Serializable {
         return BASE_PRESSURE[i] * Math.pow(tb / (tb + l * (h - BASE_HEIGHT[i])), GMR / l);
     }
 
-    /** Keeps the one shared instance on deserialization. */
+    /**
+     * Keeps the one shared instance on deserialization.
+     *
+     * @return the shared instance
+     */
     private Object readResolve() {
         return STANDARD;
     }
