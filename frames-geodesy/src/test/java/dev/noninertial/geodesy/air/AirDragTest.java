@@ -42,7 +42,7 @@ class AirDragTest {
         AirDrag drag = EARTH.dragIn(eci, AIR, SPHERE, A_OVER_M, WindProfile.calm());
         Vector3D ground = EARTH.model().ellipsoid().toCartesian(SITE.withHeight(100.0));
         for (double t : new double[] {0.0, 1234.5, 86400.0}) {
-            PointState inInertial = ecef.state(t, PointState.atRest(ground)).in(eci).state();
+            PointState inInertial = ecef.stateAt(t, PointState.stationary(ground)).in(eci).state();
             // it moves at w x r, about 285 m/s here, yet is at rest in the air: the residual is the
             // round-off of converting ~6.4e6 m positions (ulp ~1e-9 m, times w: ~1e-13 m/s), giving
             // a drag of order 1e-28 m/s^2; 1e-15 m/s^2 is a bound well above that
@@ -63,7 +63,7 @@ class AirDragTest {
         Vector3D rEcef = EARTH.model().ellipsoid().toCartesian(equator);
         Vector3D r = EARTH.earthFixed().placementIn(eci, t).positionToBase(rEcef);
         AirDrag drag = EARTH.dragIn(eci, AIR, SPHERE, A_OVER_M, WindProfile.calm());
-        Vector3D f = drag.at(t, PointState.atRest(r));
+        Vector3D f = drag.at(t, PointState.stationary(r));
         double v = 7.292115e-5 * 6378137.0;                    // w a (REFERENCES.md, Earth models)
         double rho0 = 101325.0 * 0.0289644 / (8.31432 * 288.15);
         double expected = 0.5 * rho0 * 0.47 * A_OVER_M * v * v;
@@ -72,7 +72,7 @@ class AirDragTest {
         Vector3D east = Vector3D.PLUS_K.crossProduct(r).normalize();   // w x r direction
         assertEquals(1.0, f.normalize().dotProduct(east), 1e-12);
         // Mach of the turning air: w a / sqrt(gamma R* T0 / M0) (REFERENCES.md, Air)
-        assertEquals(v / Math.sqrt(1.4 * 8.31432 * 288.15 / 0.0289644), drag.machAt(t, PointState.atRest(r)), 1e-12);
+        assertEquals(v / Math.sqrt(1.4 * 8.31432 * 288.15 / 0.0289644), drag.machAt(t, PointState.stationary(r)), 1e-12);
     }
 
     @Test
@@ -87,8 +87,8 @@ class AirDragTest {
         assertTrue(f < 1e-15, () -> "drag " + f);
         // at rest in the level frame: the wind pushes it downwind with (1/2) rho Cd (A/m) |w|^2; the
         // point is 500 m above the ellipsoid only approximately (level plane), so use its own height
-        PointState still = PointState.atRest(r);
-        double h = EARTH.geodeticOf(enu.state(10.0, still)).height();
+        PointState still = PointState.stationary(r);
+        double h = EARTH.geodeticOf(enu.stateAt(10.0, still)).height();
         Vector3D g = drag.at(10.0, still);
         double speed2 = 6.0 * 6.0 + 2.5 * 2.5;
         double expected = 0.5 * AIR.density(h) * 0.47 * A_OVER_M * speed2;
@@ -105,7 +105,7 @@ class AirDragTest {
         WindProfile wind = WindProfile.layered(new double[] {-1000.0, 0.0, 3000.0, 10000.0},
                 new double[] {2.0, 2.0, 8.0, 15.0}, new double[] {0.0, 0.0, -3.0, -4.0});
         // released at rest relative to the ground 3 km above the site, with a small push north-east
-        FramedState release = enu.state(0.0, PointState.of(new Vector3D(0, 0, 3000.0), new Vector3D(3.0, 4.0, 0.0)));
+        FramedState release = enu.stateAt(0.0, PointState.of(new Vector3D(0, 0, 3000.0), new Vector3D(3.0, 4.0, 0.0)));
         FramedState inEnu = land(enu, release, wind);
         FramedState inEcef = land(ecef, release, wind);
         FramedState inEci = land(eci, release, wind);
@@ -127,12 +127,12 @@ class AirDragTest {
     }
 
     private static FramedState land(ReferenceFrame frame, FramedState release, WindProfile wind) {
-        Trajectory tr = TrajectorySolver.in(frame).withForce(EARTH.gravitationIn(frame))
-                .withForce(EARTH.dragIn(frame, AIR, SPHERE, A_OVER_M, wind))
-                .withEvent(EARTH.groundImpactIn(frame, 0.0)).withTolerance(1e-12).withMaxStep(5.0)
+        Trajectory tr = TrajectorySolver.of(frame).plusForce(EARTH.gravitationIn(frame))
+                .plusForce(EARTH.dragIn(frame, AIR, SPHERE, A_OVER_M, wind))
+                .plusEvent(EARTH.groundImpactIn(frame, 0.0)).withTolerance(1e-12).withMaxStep(5.0)
                 .solve(release, 600.0);
         assertTrue(tr.stopEvent().isPresent(), "landed");
-        return tr.end();
+        return tr.finalState();
     }
 
     @Test
@@ -154,14 +154,14 @@ class AirDragTest {
                 () -> drag.at(0.0, PointState.of(Vector3D.ZERO, new Vector3D(400.0, 0, 0))));
         assertTrue(fast.getMessage().contains("machNumber must be in [0.0, 0.8]"), fast.getMessage());
         IllegalArgumentException high = assertThrows(IllegalArgumentException.class,
-                () -> drag.at(0.0, PointState.atRest(new Vector3D(0, 0, 90e3))));
+                () -> drag.at(0.0, PointState.stationary(new Vector3D(0, 0, 90e3))));
         assertTrue(high.getMessage().contains("height must be in"), high.getMessage());
         assertThrows(IllegalArgumentException.class, () -> EARTH.dragIn(enu, AIR, subsonic, 0.0, WindProfile.calm()));
         EarthFrames other = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-09-14T06:00:00Z"));
         assertThrows(IllegalArgumentException.class,
                 () -> other.dragIn(enu, AIR, subsonic, A_OVER_M, WindProfile.calm()));
         // the solver reports a refusal with time and state
-        TrajectorySolver solver = TrajectorySolver.in(enu).withForce(EARTH.gravitationIn(enu)).withForce(drag);
+        TrajectorySolver solver = TrajectorySolver.of(enu).plusForce(EARTH.gravitationIn(enu)).plusForce(drag);
         assertThrows(TrajectoryFailure.class,
                 () -> solver.solve(PointState.of(Vector3D.ZERO, new Vector3D(0, 0, 400.0)), 0.0, 10.0));
     }

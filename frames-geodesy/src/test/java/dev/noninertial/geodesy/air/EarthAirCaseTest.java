@@ -38,7 +38,7 @@ class EarthAirCaseTest {
         ReferenceFrame eci = EARTH.inertial();
         ReferenceFrame ned = EARTH.localLevel(LatLonHeight.ofDegrees(50.0, 1.0, 10.0), LocalAxes.NED);
         for (double t : new double[] {0.0, 777.7, 40000.0}) {
-            FramedState inEcef = EARTH.earthFixed().state(t, PointState.atRest(x));
+            FramedState inEcef = EARTH.earthFixed().stateAt(t, PointState.stationary(x));
             for (FramedState s : new FramedState[] {inEcef, inEcef.in(eci), inEcef.in(ned)}) {
                 LatLonHeight g = EARTH.geodeticOf(s);
                 // the example is given to 0.001" (3e-8 rad half unit ~ 1.5 mm) and 1 mm in height;
@@ -50,7 +50,7 @@ class EarthAirCaseTest {
         }
         EarthFrames other = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-04-02T18:30:00Z"));
         assertThrows(IllegalArgumentException.class,
-                () -> other.geodeticOf(EARTH.earthFixed().state(0.0, PointState.atRest(x))));
+                () -> other.geodeticOf(EARTH.earthFixed().stateAt(0.0, PointState.stationary(x))));
     }
 
     @Test
@@ -76,9 +76,9 @@ class EarthAirCaseTest {
 
     private static LatLonHeight landing(EarthFrames earth, LatLonHeight site, double h) {
         ReferenceFrame enu = earth.localLevel(site, LocalAxes.ENU);
-        FramedState end = TrajectorySolver.in(enu).withForce(earth.gravitationIn(enu))
-                .withEvent(earth.groundImpactIn(enu, 0.0)).withTolerance(1e-12)
-                .solve(PointState.atRest(new Vector3D(0, 0, h)), 0.0, 100.0).end();
+        FramedState end = TrajectorySolver.of(enu).plusForce(earth.gravitationIn(enu))
+                .plusEvent(earth.groundImpactIn(enu, 0.0)).withTolerance(1e-12)
+                .solve(PointState.stationary(new Vector3D(0, 0, h)), 0.0, 100.0).finalState();
         LatLonHeight g = earth.geodeticOf(end);
         assertTrue(Math.abs(g.height()) < 1e-6, "on the ground");
         return g;
