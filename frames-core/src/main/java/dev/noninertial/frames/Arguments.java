@@ -1,5 +1,6 @@
 package dev.noninertial.frames;
 
+import java.io.InvalidObjectException;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -155,7 +156,6 @@ public final class Arguments {
      * @throws IllegalArgumentException if the count is negative or too large for the array, or the
      *         range does not fit from the offset
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     public static void fromIndexSize(String arrayName, double[] array, String offsetName, int offset,
                                      String countName, int count, int stride) {
         nonNull(arrayName, array);
@@ -166,6 +166,25 @@ public final class Arguments {
                     + " per item, from " + offsetName + " " + offset + "), got " + count);
         }
         fromIndexSize(arrayName, array, offsetName, offset, (int) span);
+    }
+
+    /**
+     * The exception a {@code readObject} or {@code readResolve} throws when the value read from a
+     * stream fails the checks its factory makes: every serializable type of the library re-runs
+     * those checks on reading, since a stream is untrusted input.
+     *
+     * @param type the type being read, named in the message
+     * @param cause the refusal of the factory checks
+     * @return an {@link InvalidObjectException} naming the type, with the refusal's message and
+     *         the refusal as its cause
+     */
+    public static InvalidObjectException refusedStream(Class<?> type, RuntimeException cause) {
+        nonNull("type", type);
+        nonNull("cause", cause);
+        InvalidObjectException failure = new InvalidObjectException(
+                "corrupt " + type.getSimpleName() + " in the stream: " + cause.getMessage());
+        failure.initCause(cause);
+        return failure;
     }
 
     private static String vector(Vector3D v) {

@@ -85,7 +85,6 @@ final class Kinematics {
      * Both state conversions in one loop: the placement is read once into locals, and the
      * direction test is the same for every state (the compiler moves it out of the loop).
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void convert(double[] p, int po, double[] source, int sourceOffset, double[] target,
                                 int targetOffset, int count, boolean toBase) {
         double ox = p[po];
@@ -202,7 +201,6 @@ final class Kinematics {
     }
 
     /** Throws {@link #notFinite()} unless all nine values are finite (their sum alone overflowed). */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void refuseUnlessFinite(double a, double b, double c, double d, double e, double f,
                                            double g, double h, double k) {
         if (!(Double.isFinite(a) && Double.isFinite(b) && Double.isFinite(c) && Double.isFinite(d)

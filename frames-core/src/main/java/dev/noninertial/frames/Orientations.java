@@ -217,8 +217,8 @@ public final class Orientations {
             }
         }
         if (!(worst <= tolerance)) {
-            throw new IllegalArgumentException(name + " must be orthonormal (|M M^T - I| <= " + tolerance
-                    + " elementwise), worst deviation " + worst);
+            throw new IllegalArgumentException(name + " must be an orthonormal rotation matrix (|M M^T - I| <= "
+                    + tolerance + " elementwise), worst deviation " + worst);
         }
         int o = offset;
         double det = m[o] * (m[o + 4] * m[o + 8] - m[o + 5] * m[o + 7])
@@ -250,7 +250,6 @@ public final class Orientations {
     }
 
     /** Shepperd's method on matrix rows, written at {@code out[oo]}, scalar first. */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void matrixToQuaternion(double m00, double m01, double m02, double m10, double m11, double m12,
                                            double m20, double m21, double m22, double[] out, int oo) {
         // Hipparchus matrix of quaternion q: m01 = 2(q1q2 + q0q3), m10 = 2(q1q2 - q0q3), ...

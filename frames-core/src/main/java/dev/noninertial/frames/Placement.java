@@ -1,7 +1,6 @@
 package dev.noninertial.frames;
 
 import java.io.IOException;
-import java.io.InvalidObjectException;
 import java.io.ObjectInputStream;
 import java.io.Serializable;
 
@@ -176,7 +175,6 @@ public final class Placement implements Serializable {
      * @throws IllegalArgumentException if a value is not finite or the quaternion is not unit
      *         within {@link Orientations#UNIT_QUATERNION_TOLERANCE}
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     public static Placement ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
                                          double oax, double oay, double oaz,
                                          double q0, double q1, double q2, double q3,
@@ -218,7 +216,6 @@ public final class Placement implements Serializable {
      * @throws IllegalArgumentException if the range does not fit the array, a value is not finite or the quaternion is not unit
      *         within {@link Orientations#UNIT_QUATERNION_TOLERANCE}
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     public static void ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
                                     double oax, double oay, double oaz,
                                     double q0, double q1, double q2, double q3,
@@ -676,9 +673,7 @@ public final class Placement implements Serializable {
             }
             checkLayout(c, "serialized placement");
         } catch (IllegalArgumentException e) {
-            InvalidObjectException failure = new InvalidObjectException("corrupt placement: " + e.getMessage());
-            failure.initCause(e);
-            throw failure;
+            throw Arguments.refusedStream(Placement.class, e);
         }
     }
 

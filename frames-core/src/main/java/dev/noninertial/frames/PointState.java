@@ -1,7 +1,6 @@
 package dev.noninertial.frames;
 
 import java.io.IOException;
-import java.io.InvalidObjectException;
 import java.io.ObjectInputStream;
 import java.io.Serializable;
 
@@ -183,12 +182,16 @@ public final class PointState implements Serializable {
      */
     private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
         in.defaultReadObject();
-        boolean ok = c != null && c.length == COMPONENTS;
-        for (int k = 0; ok && k < COMPONENTS; k++) {
-            ok = Double.isFinite(c[k]);
-        }
-        if (!ok) {
-            throw new InvalidObjectException("corrupt point state: " + COMPONENTS + " finite components expected");
+        try {
+            if (c == null || c.length != COMPONENTS) {
+                throw new IllegalArgumentException("components must hold " + COMPONENTS + " doubles, got "
+                        + (c == null ? "none" : c.length));
+            }
+            for (int k = 0; k < COMPONENTS; k++) {
+                Arguments.finite("component " + k, c[k]);
+            }
+        } catch (IllegalArgumentException e) {
+            throw Arguments.refusedStream(PointState.class, e);
         }
     }
 
