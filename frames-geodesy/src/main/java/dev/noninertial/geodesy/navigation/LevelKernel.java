@@ -202,6 +202,19 @@ final class LevelKernel implements Serializable {
         double nx = bx + q0 * tx + (q2 * tz - q3 * ty);
         double ny = by + q0 * ty + (q3 * tx - q1 * tz);
         double nz = bz + q0 * tz + (q1 * ty - q2 * tx);
+        // the raw increment m = C dv and k = C (da x dv) in level axes, for the level-frame turn
+        tx = 2.0 * (q2 * dvz - q3 * dvy);
+        ty = 2.0 * (q3 * dvx - q1 * dvz);
+        tz = 2.0 * (q1 * dvy - q2 * dvx);
+        double mx = dvx + q0 * tx + (q2 * tz - q3 * ty);
+        double my = dvy + q0 * ty + (q3 * tx - q1 * tz);
+        double mz = dvz + q0 * tz + (q1 * ty - q2 * tx);
+        tx = 2.0 * (q2 * uz - q3 * uy);
+        ty = 2.0 * (q3 * ux - q1 * uz);
+        tz = 2.0 * (q1 * uy - q2 * ux);
+        double kx = ux + q0 * tx + (q2 * tz - q3 * ty);
+        double ky = uy + q0 * ty + (q3 * tx - q1 * tz);
+        double kz = uz + q0 * tz + (q1 * ty - q2 * tx);
 
         // ---- predictor for the midpoint of the step: rates at the start, gravity of the last step
         double lat0 = w[LAT];
@@ -251,10 +264,15 @@ final class LevelKernel implements Serializable {
         double zy = ke * ey + kr * ry;
         double zz = ke * ez + kr * rz;
         // velocity increment of the specific force in the level frame at the end of the step:
-        // [I - 1/2 (zeta x)] C_b^n(t0) dv_b  (Savage 1998 part 1, frame rotation over the step)
-        double fx = nx - 0.5 * (zy * nz - zz * ny);
-        double fy = ny - 0.5 * (zz * nx - zx * nz);
-        double fz = nz - 0.5 * (zx * ny - zy * nx);
+        // C dv_b - 1/2 zeta x m (Savage 1998 part 1, frame rotation over the step), with the
+        // second-order terms of the same integral for constant rates, -1/3 zeta x k + 1/6 zeta x (zeta x m)
+        // (m = C dv, k = C (da x dv)); they make the terms cancel exactly at rest
+        double zmx = zy * mz - zz * my;
+        double zmy = zz * mx - zx * mz;
+        double zmz = zx * my - zy * mx;
+        double fx = nx - 0.5 * zmx - (zy * kz - zz * ky) / 3.0 + (zy * zmz - zz * zmy) / 6.0;
+        double fy = ny - 0.5 * zmy - (zz * kx - zx * kz) / 3.0 + (zz * zmx - zx * zmz) / 6.0;
+        double fz = nz - 0.5 * zmz - (zx * ky - zy * kx) / 3.0 + (zx * zmy - zy * zmx) / 6.0;
         // Coriolis -2 w_ie x v and transport-rate term -w_en x v at the midpoint
         // (Titterton & Weston Eq. 3.71; Groves Eq. 5.54)
         double ccx = 0.0;

@@ -42,7 +42,10 @@ import dev.noninertial.geodesy.LocalAxes;
  *   <li><b>Level-frame rotation</b> over the step, {@code zeta = (w_ie + w_en) h} at the
  *       midpoint, Earth rate {@code w_ie} from {@link EarthModel#earthRateIn} and transport
  *       rate {@code w_en} from {@link EarthModel#transportRate}; the specific-force increment in
- *       level axes is {@code [I - 1/2 (zeta x)] C_b^n(t0) dv_b} (Savage 1998 part 1).</li>
+ *       level axes is {@code C dv_b - 1/2 zeta x C dv} (Savage 1998 part 1) plus the
+ *       second-order terms of the same integral for constant rates,
+ *       {@code -1/3 zeta x C (da x dv) + 1/6 zeta x (zeta x C dv)}, with {@code C = C_b^n(t0)}:
+ *       with them the terms cancel exactly for a body at rest.</li>
  *   <li><b>Velocity</b> (Titterton and Weston, 2nd ed., Eq. 3.71; Groves, 2nd ed., Eq. 5.54):
  *       {@code v1 = v0 + dv_n + (g - 2 w_ie x v - w_en x v) h}, the bracket at the midpoint
  *       predicted from the start rates; {@code g} the exact normal gravity of
@@ -387,6 +390,11 @@ public final class LevelNavigator implements Serializable {
             LevelKernel.nedToEnu(w[LevelKernel.Q0], w[LevelKernel.Q0 + 1], w[LevelKernel.Q0 + 2],
                     w[LevelKernel.Q0 + 3], trace, o + 7);
         }
+    }
+
+    /** @return the gravity reference, or null if none is set */
+    LatLonHeight gravityReference() {
+        return gravityReference;
     }
 
     /** The kernel, for the error budget. */
