@@ -14,7 +14,7 @@ import dev.noninertial.geodesy.LocalAxes;
  * <p>Work array layout ({@link #LENGTH} doubles): time; latitude, longitude, height; vN, vE, vD;
  * quaternion of the body in the NED level frame (scalar first, {@code v_n = q v_b q*});
  * history flag; previous delta-angle (3), previous delta-velocity at the centre (3), previous
- * step length; step count; gravity of the last step (3, NED); scratch (6).
+ * step length; step count; gravity of the last step (3, NED); scratch (9).
  */
 final class LevelKernel implements Serializable {
 
@@ -36,7 +36,8 @@ final class LevelKernel implements Serializable {
     static final int GRAVITY = 20;
     static final int EARTH = 23;
     static final int TRANSPORT = 26;
-    static final int LENGTH = 29;
+    static final int VELOCITY = 29;
+    static final int LENGTH = 32;
 
     /** Number of values written by a step into a terms array. */
     static final int TERMS = 30;
@@ -223,7 +224,7 @@ final class LevelKernel implements Serializable {
         double ve0 = w[VE];
         double vd0 = w[VD];
         model.earthRateIn(lat0, LocalAxes.NED, w, EARTH);
-        model.transportRate(lat0, h0, vn0, ve0, LocalAxes.NED, w, TRANSPORT);
+        model.transportRate(lat0, h0, w, VN, LocalAxes.NED, w, TRANSPORT);
         if (!hist) {
             gravity(lat0, h0, w);
         }
@@ -251,7 +252,10 @@ final class LevelKernel implements Serializable {
         // ---- terms at the midpoint
         gravity(latm, hm, w);
         model.earthRateIn(latm, LocalAxes.NED, w, EARTH);
-        model.transportRate(latm, hm, vnm, vem, LocalAxes.NED, w, TRANSPORT);
+        w[VELOCITY] = vnm;
+        w[VELOCITY + 1] = vem;
+        w[VELOCITY + 2] = vdm;
+        model.transportRate(latm, hm, w, VELOCITY, LocalAxes.NED, w, TRANSPORT);
         double ex = w[EARTH];
         double ey = w[EARTH + 1];
         double ez = w[EARTH + 2];

@@ -26,7 +26,7 @@ class ClosureTest {
     void maneuveringVehicleClosesOnTheTruth() {
         EarthFrames earth = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-06-01T09:00:00Z"));
         ReferenceFrame level = earth.carriedLevel("level", ManeuverTrack.path(), LocalAxes.NED);
-        ReferenceFrame body = earth.body(level, "vehicle", ManeuverTrack.attitude());
+        ReferenceFrame body = earth.body("vehicle", level, ManeuverTrack.attitude(), LocalAxes.NED);
         int fine = (int) Math.round(DURATION * 200);
         FrameIncrements at200 = FrameIncrements.of(earth, body, 0.0, 1.0 / 200, fine);
         LevelNavigator nav = LevelNavigator.of(EarthModel.WGS84, LocalAxes.NED);

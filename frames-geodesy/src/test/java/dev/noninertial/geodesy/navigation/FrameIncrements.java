@@ -37,7 +37,7 @@ final class FrameIncrements {
     static FrameIncrements of(EarthFrames earth, ReferenceFrame body, double t0, double h, int n) {
         FrameIncrements r = new FrameIncrements(n);
         SpecificForce gravitation = earth.gravitationIn(body);
-        PointState origin = PointState.atRest(Vector3D.ZERO);
+        PointState origin = PointState.stationary(Vector3D.ZERO);
         ReferenceFrame inertial = earth.inertial();
         for (int k = 0; k < n; k++) {
             double a = t0 + k * h;
