@@ -14,7 +14,7 @@ import dev.noninertial.geodesy.LocalAxes;
  * <p>Work array layout ({@link #LENGTH} doubles): time; latitude, longitude, height; vN, vE, vD;
  * quaternion of the body in the NED level frame (scalar first, {@code v_n = q v_b q*});
  * history flag; previous delta-angle (3), previous delta-velocity at the centre (3), previous
- * step length; step count; gravity of the last step (3, NED); scratch (9).
+ * step length, gravity of the last step (3, NED) (together the history); step count; scratch (9).
  */
 final class LevelKernel implements Serializable {
 
@@ -32,8 +32,10 @@ final class LevelKernel implements Serializable {
     static final int PREV_ANGLE = 12;
     static final int PREV_VELOCITY = 15;
     static final int PREV_STEP = 18;
-    static final int STEP = 19;
-    static final int GRAVITY = 20;
+    static final int GRAVITY = 19;
+    static final int STEP = 22;
+    /** Values of the history carried by a {@link NavigationState}: from PREV_ANGLE to GRAVITY + 2. */
+    static final int HISTORY = 10;
     static final int EARTH = 23;
     static final int TRANSPORT = 26;
     static final int VELOCITY = 29;

@@ -57,7 +57,7 @@ public final class NavigationState implements Serializable {
     private final double q3;
     /** Steps taken since the state made by {@link #of}. */
     private final long step;
-    /** Previous step's increments: deltaAngle (3, rad), deltaVelocity (3, m/s), step length (s); null if none. */
+    /** Previous step's increments: deltaAngle (3, rad), deltaVelocity (3, m/s), step length (s), gravity (3, NED m/s^2); null if none. */
     private final double[] history;
 
     NavigationState(double time, LatLonHeight position, LocalAxes axes, double v1, double v2, double v3,
@@ -210,7 +210,7 @@ public final class NavigationState implements Serializable {
             w[LevelKernel.HIST] = 0.0;
         } else {
             w[LevelKernel.HIST] = 1.0;
-            System.arraycopy(history, 0, w, LevelKernel.PREV_ANGLE, 7);
+            System.arraycopy(history, 0, w, LevelKernel.PREV_ANGLE, LevelKernel.HISTORY);
         }
     }
 
@@ -219,8 +219,8 @@ public final class NavigationState implements Serializable {
         LatLonHeight p = new LatLonHeight(w[LevelKernel.LAT], w[LevelKernel.LON], w[LevelKernel.H]);
         double[] history = null;
         if (w[LevelKernel.HIST] != 0.0) {
-            history = new double[7];
-            System.arraycopy(w, LevelKernel.PREV_ANGLE, history, 0, 7);
+            history = new double[LevelKernel.HISTORY];
+            System.arraycopy(w, LevelKernel.PREV_ANGLE, history, 0, LevelKernel.HISTORY);
         }
         long step = (long) w[LevelKernel.STEP];
         double a = w[LevelKernel.Q0];
