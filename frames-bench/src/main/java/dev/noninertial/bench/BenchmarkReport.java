@@ -77,6 +77,10 @@ public final class BenchmarkReport {
         r.add(new Ratio("bulk F to B through a motion at one time per state / (b)", b + "motionToBaseLibrary", b + "motionToBasePrimitives", "at most 1.2", 1.2));
         r.add(new Ratio("bulk F to B through a motion at one time per state / (a)", b + "motionToBaseLibrary", b + "motionToBaseObjects", "", Double.NaN));
         r.add(new Ratio("object API in a loop over the same states / (b) (for reference)", b + "motionToBaseLibraryObjects", b + "motionToBasePrimitives", "", Double.NaN));
+        String m = "SampledMotionBenchmark.";
+        r.add(new Ratio("sampled motion query, object API / analytic spin-up at(t)", m + "query", m + "baselineAnalytic", "", Double.NaN));
+        r.add(new Ratio("sampled motion query, primitive at(t, target, offset) / object at(t)", m + "queryPrimitive", m + "query", "", Double.NaN));
+        r.add(new Ratio("sampled motion query / hand-written linear interpolation (no rates)", m + "query", m + "baselineLinear", "", Double.NaN));
         String g = "GeodesyBenchmark.";
         r.add(new Ratio("geodetic to Cartesian, library / (a) objects", g + "toCartesianLibrary", g + "toCartesianObjects", "", Double.NaN));
         r.add(new Ratio("geodetic to Cartesian, library / (b) primitives", g + "toCartesianLibrary", g + "toCartesianPrimitives", "", Double.NaN));

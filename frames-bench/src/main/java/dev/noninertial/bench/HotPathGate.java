@@ -10,6 +10,7 @@ import java.util.Random;
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
+import dev.noninertial.frames.motion.SampledMotion;
 
 /**
  * The quick allocation and speed check that CI runs (through {@code HotPathGateTest} in
@@ -100,8 +101,25 @@ public final class HotPathGate {
         final double[] times = new double[STATES];
         final double[] source = new double[STATES * PointState.COMPONENTS];
         final double[] target = new double[STATES * PointState.COMPONENTS];
+        final double[] placementSlot = new double[Placement.COMPONENTS];
+        /** The spin-up sampled at 1001 instants over the 60 s of the query times, with a drifting origin. */
+        final SampledMotion sampled;
 
         Inputs() {
+            int n = 1001;
+            double[] st = new double[n];
+            double[] sp = new double[3 * n];
+            double[] sq = new double[4 * n];
+            for (int k = 0; k < n; k++) {
+                double t = 0.06 * k;
+                st[k] = t;
+                sp[3 * k] = 0.5 * t;
+                sp[3 * k + 1] = Math.sin(0.2 * t);
+                double[] c = new double[Placement.QUATERNION_COMPONENTS];
+                spin.at(t).toQuaternionArray(c, 0);
+                System.arraycopy(c, 9, sq, 4 * k, 4);
+            }
+            sampled = SampledMotion.fromArrays(st, sp, sq);
             Motion built = spin;
             lambda = t -> built.at(t);
             Random random = new Random(42L);
@@ -136,6 +154,13 @@ public final class HotPathGate {
                 () -> in.spin.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
         rows.add(new Allocation("Motion.fromBase(times, ...) spin-up", bytes(mx,
                 () -> in.spin.fromBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
+        rows.add(new Allocation("Motion.toBase(times, ...) sampled motion", bytes(mx,
+                () -> in.sampled.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
+        rows.add(new Allocation("SampledMotion.at(t, target, offset) x STATES", bytes(mx, () -> {
+            for (int k = 0; k < STATES; k++) {
+                in.sampled.at(in.times[k], in.placementSlot, 0);
+            }
+        }), STATES, 0));
         rows.add(new Allocation("Motion.toBase(times, ...) user lambda (info: default at(t))", bytes(mx,
                 () -> in.lambda.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, -1));
         rows.add(new Allocation("Placement.toBase(PointState) x STATES (info: one result each)", bytes(mx, () -> {

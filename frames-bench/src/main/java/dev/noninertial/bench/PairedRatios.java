@@ -65,6 +65,13 @@ public final class PairedRatios {
         ops.put(k + "motionToBaseLibraryObjects", () -> sinkObject = b.motionToBaseLibraryObjects());
         ops.put(k + "motionToBasePrimitives", () -> sinkObject = b.motionToBasePrimitives());
         ops.put(k + "motionToBaseObjects", () -> sinkObject = b.motionToBaseObjects());
+        SampledMotionBenchmark m = new SampledMotionBenchmark();
+        m.setUp();
+        k = "SampledMotionBenchmark.";
+        ops.put(k + "query", () -> sinkObject = m.query());
+        ops.put(k + "queryPrimitive", () -> sinkObject = m.queryPrimitive());
+        ops.put(k + "baselineAnalytic", () -> sinkObject = m.baselineAnalytic());
+        ops.put(k + "baselineLinear", () -> sinkObject = m.baselineLinear());
         GeodesyBenchmark g = new GeodesyBenchmark();
         k = "GeodesyBenchmark.";
         ops.put(k + "toCartesianLibrary", () -> sinkObject = g.toCartesianLibrary());

@@ -178,6 +178,18 @@ public class SampledMotionBenchmark {
         return motion.at(nextTime());
     }
 
+    /** Destination of the primitive queries. */
+    private final double[] slot = new double[Placement.COMPONENTS];
+
+    /** @return the same query through the primitive {@code at(t, target, offset)}, which allocates nothing */
+    @Benchmark
+    @BenchmarkMode(Mode.AverageTime)
+    @OutputTimeUnit(TimeUnit.NANOSECONDS)
+    public double[] queryPrimitive() {
+        motion.at(nextTime(), slot, 0);
+        return slot;
+    }
+
     /** @return the analytic placement the samples were taken from, at the same kind of times */
     @Benchmark
     @BenchmarkMode(Mode.AverageTime)

@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 /**
  * The one kinematics kernel of the library, on the primitive placement layout of
  * {@link Placement#toArray(double[], int)} (24 doubles: o, o', o'' in B axes; R row by row with
@@ -212,11 +214,11 @@ final class Kinematics {
 
     /**
      * The four fictitious accelerations felt in F by a point at {@code r} with velocity {@code v}
-     * seen in F (the state at {@code s}, its acceleration unused), written as 12 doubles: frame
-     * {@code -R o''}, Euler {@code -al x r}, Coriolis {@code -2 w x v}, centrifugal
-     * {@code -w x (w x r)}.
+     * seen in F (the state at {@code s}, its acceleration unused): frame {@code -R o''}, Euler
+     * {@code -al x r}, Coriolis {@code -2 w x v}, centrifugal {@code -w x (w x r)}. Built here,
+     * with no scratch array, since every caller wants the four named terms.
      */
-    static void fictitious(double[] p, int po, double[] s, int so, double[] out, int oo) {
+    static FictitiousAccelerations fictitious(double[] p, int po, double[] s, int so) {
         double wx = p[po + RATE];
         double wy = p[po + RATE + 1];
         double wz = p[po + RATE + 2];
@@ -235,19 +237,24 @@ final class Kinematics {
         double oax = p[po + 6];
         double oay = p[po + 7];
         double oaz = p[po + 8];
-        out[oo] = -(p[po + 9] * oax + p[po + 10] * oay + p[po + 11] * oaz);
-        out[oo + 1] = -(p[po + 12] * oax + p[po + 13] * oay + p[po + 14] * oaz);
-        out[oo + 2] = -(p[po + 15] * oax + p[po + 16] * oay + p[po + 17] * oaz);
-        out[oo + 3] = -(aly * z - alz * y);
-        out[oo + 4] = -(alz * x - alx * z);
-        out[oo + 5] = -(alx * y - aly * x);
-        out[oo + 6] = -2 * (wy * vz - wz * vy);
-        out[oo + 7] = -2 * (wz * vx - wx * vz);
-        out[oo + 8] = -2 * (wx * vy - wy * vx);
-        out[oo + 9] = -(wy * cz - wz * cy);
-        out[oo + 10] = -(wz * cx - wx * cz);
-        out[oo + 11] = -(wx * cy - wy * cx);
-        checkFinite(out, oo, 12);
+        double fx = -(p[po + 9] * oax + p[po + 10] * oay + p[po + 11] * oaz);
+        double fy = -(p[po + 12] * oax + p[po + 13] * oay + p[po + 14] * oaz);
+        double fz = -(p[po + 15] * oax + p[po + 16] * oay + p[po + 17] * oaz);
+        double ex = -(aly * z - alz * y);
+        double ey = -(alz * x - alx * z);
+        double ez = -(alx * y - aly * x);
+        double kx = -2 * (wy * vz - wz * vy);
+        double ky = -2 * (wz * vx - wx * vz);
+        double kz = -2 * (wx * vy - wy * vx);
+        double gx = -(wy * cz - wz * cy);
+        double gy = -(wz * cx - wx * cz);
+        double gz = -(wx * cy - wy * cx);
+        if (!(Double.isFinite(fx + fy + fz + ex + ey + ez) && Double.isFinite(kx + ky + kz + gx + gy + gz))) {
+            refuseUnlessFinite(fx, fy, fz, ex, ey, ez, 0, 0, 0);
+            refuseUnlessFinite(kx, ky, kz, gx, gy, gz, 0, 0, 0);
+        }
+        return new FictitiousAccelerations(new Vector3D(fx, fy, fz), new Vector3D(ex, ey, ez),
+                new Vector3D(kx, ky, kz), new Vector3D(gx, gy, gz));
     }
 
     /**

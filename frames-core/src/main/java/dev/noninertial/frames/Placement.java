@@ -581,10 +581,7 @@ public final class Placement implements Serializable {
      */
     public FictitiousAccelerations fictitious(PointState stateInFrame) {
         Arguments.nonNull("stateInFrame", stateInFrame);
-        double[] f = new double[12];
-        Kinematics.fictitious(c, 0, stateInFrame.components(), 0, f, 0);
-        return new FictitiousAccelerations(new Vector3D(f[0], f[1], f[2]), new Vector3D(f[3], f[4], f[5]),
-                new Vector3D(f[6], f[7], f[8]), new Vector3D(f[9], f[10], f[11]));
+        return Kinematics.fictitious(c, 0, stateInFrame.components(), 0);
     }
 
     /**

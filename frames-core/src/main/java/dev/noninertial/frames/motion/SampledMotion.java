@@ -78,14 +78,14 @@ import dev.noninertial.frames.Placement;
  * record would have (then galloping and bisection, O(log n) at worst) and costs a few hundred
  * floating-point operations: one Hermite routine runs over the seven channels (three position
  * axes, four quaternion components) with the stencil weights computed once per query.
- * {@link #at(double)} allocates its {@link Placement} and one scratch array of 21 doubles;
+ * {@link #at(double)} allocates its {@link Placement} and one scratch array of 24 doubles;
  * {@link #at(double, double[], int)} allocates nothing, so the bulk conversions of
  * {@link Motion} allocate nothing per state.
  */
 public final class SampledMotion implements Motion, Serializable {
 
-    /** Doubles of the scratch of one query: 19 of the quaternion layout and 2 more while evaluating. */
-    private static final int SCRATCH = 21;
+    /** Doubles of the scratch of one query: the 24 of the matrix layout (evaluate uses them all). */
+    private static final int SCRATCH = Placement.COMPONENTS;
 
     /** Largest turn of the attitude between consecutive samples, in radians (90 degrees). */
     public static final double MAX_TURN_BETWEEN_SAMPLES = 0.5 * Math.PI;
@@ -490,120 +490,73 @@ public final class SampledMotion implements Motion, Serializable {
     // ------------------------------------------------------------------ interpolation
 
     private void evaluate(int i, double t, double[] out, int o) {
-        int j = i + 1;
         double tI = times[i];
-        double tJ = times[j];
-        double h = tJ - tI;
-        double hh = h * h;
-        double invH = 1.0 / h;
-        double invHH = invH * invH;
-        double s = (t - tI) * invH;
+        double h = times[i + 1] - tI;
+        double s = (t - tI) * (1.0 / h);
 
-        // Derivative stencils of both knots: the knot itself (index iK / jK) and up to four other
-        // samples of its run; absent ones point at the knot with weight 0. The first derivative
-        // at a knot is sum(a * y), the second sum(b * y) (c and e at knot j): the derivatives there
-        // of the Lagrange polynomial through the stencil.
-        int iK = i;
-        int jK = j;
-        int loI = stencilStart(i);
-        int rI = stencilSize(i, loI) - 1;
-        int kI = i - loI;
-        int i1 = 0 < rI ? loI + 0 + (0 >= kI ? 1 : 0) : i;
-        int i2 = 1 < rI ? loI + 1 + (1 >= kI ? 1 : 0) : i;
-        int i3 = 2 < rI ? loI + 2 + (2 >= kI ? 1 : 0) : i;
-        int i4 = 3 < rI ? loI + 3 + (3 >= kI ? 1 : 0) : i;
-        double u1 = times[i1] - tI;
-        double u2 = times[i2] - tI;
-        double u3 = times[i3] - tI;
-        double u4 = times[i4] - tI;
-        double ui1 = 0 < rI ? 1.0 / u1 : 0.0;
-        double ui2 = 1 < rI ? 1.0 / u2 : 0.0;
-        double ui3 = 2 < rI ? 1.0 / u3 : 0.0;
-        double ui4 = 3 < rI ? 1.0 / u4 : 0.0;
-        double uS = ui1 + ui2 + ui3 + ui4;
-        double uQ = ui1 * ui1 + ui2 * ui2 + ui3 * ui3 + ui4 * ui4;
-        double aK = -uS;
-        double bK = uS * uS - uQ;
-        double a1 = basis(u1, u2, u3, u4, 1 < rI, 2 < rI, 3 < rI);
-        double a2 = 1 < rI ? basis(u2, u1, u3, u4, true, 2 < rI, 3 < rI) : 0.0;
-        double a3 = 2 < rI ? basis(u3, u1, u2, u4, true, true, 3 < rI) : 0.0;
-        double a4 = 3 < rI ? basis(u4, u1, u2, u3, true, true, true) : 0.0;
-        double b1 = -2.0 * a1 * (uS - ui1);
-        double b2 = -2.0 * a2 * (uS - ui2);
-        double b3 = -2.0 * a3 * (uS - ui3);
-        double b4 = -2.0 * a4 * (uS - ui4);
-        int loJ = stencilStart(j);
-        int rJ = stencilSize(j, loJ) - 1;
-        int kJ = j - loJ;
-        int j1 = 0 < rJ ? loJ + 0 + (0 >= kJ ? 1 : 0) : j;
-        int j2 = 1 < rJ ? loJ + 1 + (1 >= kJ ? 1 : 0) : j;
-        int j3 = 2 < rJ ? loJ + 2 + (2 >= kJ ? 1 : 0) : j;
-        int j4 = 3 < rJ ? loJ + 3 + (3 >= kJ ? 1 : 0) : j;
-        double x1 = times[j1] - tJ;
-        double x2 = times[j2] - tJ;
-        double x3 = times[j3] - tJ;
-        double x4 = times[j4] - tJ;
-        double xi1 = 0 < rJ ? 1.0 / x1 : 0.0;
-        double xi2 = 1 < rJ ? 1.0 / x2 : 0.0;
-        double xi3 = 2 < rJ ? 1.0 / x3 : 0.0;
-        double xi4 = 3 < rJ ? 1.0 / x4 : 0.0;
-        double xS = xi1 + xi2 + xi3 + xi4;
-        double xQ = xi1 * xi1 + xi2 * xi2 + xi3 * xi3 + xi4 * xi4;
-        double cK = -xS;
-        double eK = xS * xS - xQ;
-        double c1 = basis(x1, x2, x3, x4, 1 < rJ, 2 < rJ, 3 < rJ);
-        double c2 = 1 < rJ ? basis(x2, x1, x3, x4, true, 2 < rJ, 3 < rJ) : 0.0;
-        double c3 = 2 < rJ ? basis(x3, x1, x2, x4, true, true, 3 < rJ) : 0.0;
-        double c4 = 3 < rJ ? basis(x4, x1, x2, x3, true, true, true) : 0.0;
-        double e1 = -2.0 * c1 * (xS - xi1);
-        double e2 = -2.0 * c2 * (xS - xi2);
-        double e3 = -2.0 * c3 * (xS - xi3);
-        double e4 = -2.0 * c4 * (xS - xi4);
-
-        // ---- one quintic Hermite per channel on s in [0, 1], matching value, first and second
-        // derivative at both ends: y0 + a1 s + a2 s^2 + k3 s^3 + k4 s^4 + k5 s^5. Channels 0 to 2
-        // are the position axes (value, rate and acceleration go to out[o + c], [o + 3 + c],
-        // [o + 6 + c]); channels 3 to 6 the quaternion components p, p', p'' (to out[o + 9 + k],
-        // [o + 13 + k], [o + 17 + k]). The stencil weights above serve every channel.
-        for (int ch = 0; ch < 7; ch++) {
-            boolean position = ch < 3;
-            int comp = position ? ch : ch - 3;
-            double[] y = position ? positions : attitudes;
-            int stride = position ? 3 : 4;
-            double f0;
-            double f1;
-            double g0;
-            double g1;
-            if (position ? velocities == null : rates == null) {
-                f0 = weigh(y, stride, comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-                f1 = weigh(y, stride, comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-                g0 = weigh(y, stride, comp, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
-                g1 = weigh(y, stride, comp, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
-            } else if (position) {
-                f0 = velocities[3 * i + comp];
-                f1 = velocities[3 * j + comp];
-                g0 = weigh(velocities, 3, comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-                g1 = weigh(velocities, 3, comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-            } else {
-                f0 = quaternionRate(comp, i);
-                f1 = quaternionRate(comp, j);
-                g0 = weighRates(comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-                g1 = weighRates(comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+        // Derivative stencil of each knot k (i, then j): the knot itself and up to four other
+        // samples of its run (k1 to k4); absent ones point at the knot with weight 0. The first
+        // derivative at the knot is sum(a * y), the second sum(b * y): the derivatives there of the
+        // Lagrange polynomial through the stencil. The weights are computed once per knot and
+        // serve the seven channels: the three position axes (0 to 2) and the four quaternion
+        // components (3 to 6). At knot i the first and second derivative of channel c are kept in
+        // out[o + 10 + 2c] and out[o + 11 + 2c]; at knot j each channel's quintic is evaluated at
+        // once (its writes reach only slots already read).
+        for (int end = 0; end < 2; end++) {
+            int k = i + end;
+            double tK = times[k];
+            int lo = stencilStart(k);
+            int r = stencilSize(k, lo) - 1;
+            int kk = k - lo;
+            int k1 = 0 < r ? lo + 0 + (0 >= kk ? 1 : 0) : k;
+            int k2 = 1 < r ? lo + 1 + (1 >= kk ? 1 : 0) : k;
+            int k3 = 2 < r ? lo + 2 + (2 >= kk ? 1 : 0) : k;
+            int k4 = 3 < r ? lo + 3 + (3 >= kk ? 1 : 0) : k;
+            double u1 = times[k1] - tK;
+            double u2 = times[k2] - tK;
+            double u3 = times[k3] - tK;
+            double u4 = times[k4] - tK;
+            double ui1 = 0 < r ? 1.0 / u1 : 0.0;
+            double ui2 = 1 < r ? 1.0 / u2 : 0.0;
+            double ui3 = 2 < r ? 1.0 / u3 : 0.0;
+            double ui4 = 3 < r ? 1.0 / u4 : 0.0;
+            double uS = ui1 + ui2 + ui3 + ui4;
+            double uQ = ui1 * ui1 + ui2 * ui2 + ui3 * ui3 + ui4 * ui4;
+            double aK = -uS;
+            double bK = uS * uS - uQ;
+            double a1 = basis(u1, u2, u3, u4, 1 < r, 2 < r, 3 < r);
+            double a2 = 1 < r ? basis(u2, u1, u3, u4, true, 2 < r, 3 < r) : 0.0;
+            double a3 = 2 < r ? basis(u3, u1, u2, u4, true, true, 3 < r) : 0.0;
+            double a4 = 3 < r ? basis(u4, u1, u2, u3, true, true, true) : 0.0;
+            double b1 = -2.0 * a1 * (uS - ui1);
+            double b2 = -2.0 * a2 * (uS - ui2);
+            double b3 = -2.0 * a3 * (uS - ui3);
+            double b4 = -2.0 * a4 * (uS - ui4);
+            for (int ch = 0; ch < 7; ch++) {
+                boolean position = ch < 3;
+                int comp = position ? ch : ch - 3;
+                double[] y = position ? positions : attitudes;
+                int stride = position ? 3 : 4;
+                double f;
+                double g;
+                if (position ? velocities == null : rates == null) {
+                    f = weigh(y, stride, comp, k, k1, k2, k3, k4, aK, a1, a2, a3, a4);
+                    g = weigh(y, stride, comp, k, k1, k2, k3, k4, bK, b1, b2, b3, b4);
+                } else if (position) {
+                    f = velocities[3 * k + comp];
+                    g = weigh(velocities, 3, comp, k, k1, k2, k3, k4, aK, a1, a2, a3, a4);
+                } else {
+                    f = quaternionRate(comp, k);
+                    g = weighRates(comp, k, k1, k2, k3, k4, aK, a1, a2, a3, a4);
+                }
+                if (end == 0) {
+                    out[o + 10 + 2 * ch] = f;
+                    out[o + 11 + 2 * ch] = g;
+                } else {
+                    hermite(y, stride, comp, i, out[o + 10 + 2 * ch], out[o + 11 + 2 * ch], f, g, h, s,
+                            out, position ? o + ch : o + 9 + comp, position ? 3 : 4);
+                }
             }
-            double y0 = y[stride * i + comp];
-            double ha1 = h * f0;
-            double ha2 = 0.5 * hh * g0;
-            double dv = y[stride * j + comp] - y0 - ha1 - ha2;
-            double ds = h * f1 - ha1 - 2 * ha2;
-            double dc = hh * g1 - 2 * ha2;
-            double k3 = 10 * dv - 4 * ds + 0.5 * dc;
-            double k4 = -15 * dv + 7 * ds - dc;
-            double k5 = 6 * dv - 3 * ds + 0.5 * dc;
-            int at = position ? o + ch : o + 9 + comp;
-            int step = position ? 3 : 4;
-            out[at] = y0 + s * (ha1 + s * (ha2 + s * (k3 + s * (k4 + s * k5))));
-            out[at + step] = (ha1 + s * (2 * ha2 + s * (3 * k3 + s * (4 * k4 + s * 5 * k5)))) * invH;
-            out[at + 2 * step] = (2 * ha2 + s * (6 * k3 + s * (12 * k4 + s * 20 * k5))) * invHH;
         }
 
         // q = p / |p|; w = 2 vec(p* p') / |p|^2; al = 2 vec(p* p'') / |p|^2 - 2 (p . p') w / |p|^2,
@@ -637,6 +590,31 @@ public final class SampledMotion implements Motion, Serializable {
         out[o + 16] = inv2 * (r0 * dd1 - dd0 * r1 - (r2 * dd3 - r3 * dd2)) - dot * wx;
         out[o + 17] = inv2 * (r0 * dd2 - dd0 * r2 - (r3 * dd1 - r1 * dd3)) - dot * wy;
         out[o + 18] = inv2 * (r0 * dd3 - dd0 * r3 - (r1 * dd2 - r2 * dd1)) - dot * wz;
+    }
+
+    /**
+     * The quintic Hermite of one channel on s in [0, 1], matching value, first and second
+     * derivative at both ends of segment i: {@code y0 + a1 s + a2 s^2 + k3 s^3 + k4 s^4 + k5 s^5}.
+     * Writes value, rate and acceleration at {@code out[at]}, {@code out[at + step]},
+     * {@code out[at + 2 step]}.
+     */
+    private static void hermite(double[] y, int stride, int comp, int i, double f0, double g0, double f1,
+                                double g1, double h, double s, double[] out, int at, int step) {
+        double hh = h * h;
+        double invH = 1.0 / h;
+        double invHH = invH * invH;
+        double y0 = y[stride * i + comp];
+        double ha1 = h * f0;
+        double ha2 = 0.5 * hh * g0;
+        double dv = y[stride * (i + 1) + comp] - y0 - ha1 - ha2;
+        double ds = h * f1 - ha1 - 2 * ha2;
+        double dc = hh * g1 - 2 * ha2;
+        double k3 = 10 * dv - 4 * ds + 0.5 * dc;
+        double k4 = -15 * dv + 7 * ds - dc;
+        double k5 = 6 * dv - 3 * ds + 0.5 * dc;
+        out[at] = y0 + s * (ha1 + s * (ha2 + s * (k3 + s * (k4 + s * k5))));
+        out[at + step] = (ha1 + s * (2 * ha2 + s * (3 * k3 + s * (4 * k4 + s * 5 * k5)))) * invH;
+        out[at + 2 * step] = (2 * ha2 + s * (6 * k3 + s * (12 * k4 + s * 20 * k5))) * invHH;
     }
 
     /** Weight of the node at offset ua in the first derivative at offset 0 (Lagrange basis). */
