@@ -1,6 +1,8 @@
 package dev.noninertial.frames.dynamics;
 
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -22,11 +24,20 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
     private final ReferenceFrame frame;
     private final ReferenceFrame root;
     private final SpecificForce[] forces;
+    /** Inertial terms left out (budget runs only; empty for physical runs). */
+    private final Set<InertialTerm> omitted;
 
     MotionEquations(ReferenceFrame frame, List<SpecificForce> forces) {
+        this(frame, forces, EnumSet.allOf(InertialTerm.class));
+    }
+
+    MotionEquations(ReferenceFrame frame, List<SpecificForce> forces, Set<InertialTerm> included) {
         this.frame = frame;
         this.root = frame.root();
         this.forces = forces.toArray(new SpecificForce[0]);
+        EnumSet<InertialTerm> out = EnumSet.allOf(InertialTerm.class);
+        out.removeAll(included);
+        this.omitted = out;
     }
 
     ReferenceFrame frame() {
@@ -65,7 +76,50 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
                 - (wz * cx - wx * cz);
         double az = f.getZ() - ro.getZ() - (al.getX() * yy - al.getY() * x) - 2 * (wx * vy - wy * vx)
                 - (wx * cy - wy * cx);
-        return new double[] {vx, vy, vz, ax, ay, az};
+        double[] derivatives = {vx, vy, vz, ax, ay, az};
+        if (!omitted.isEmpty()) {
+            // budget run: take the left-out terms back out of the sum above
+            Vector3D back = omittedSum(placement(t, y).fictitious(PointState.of(new Vector3D(x, yy, z),
+                    new Vector3D(vx, vy, vz))));
+            derivatives[3] -= back.getX();
+            derivatives[4] -= back.getY();
+            derivatives[5] -= back.getZ();
+        }
+        return derivatives;
+    }
+
+    /** Sum of the left-out terms. */
+    private Vector3D omittedSum(FictitiousAccelerations f) {
+        Vector3D sum = Vector3D.ZERO;
+        for (InertialTerm term : omitted) {
+            sum = sum.add(term(f, term));
+        }
+        return sum;
+    }
+
+    private static Vector3D term(FictitiousAccelerations f, InertialTerm term) {
+        switch (term) {
+            case FRAME_ACCELERATION:
+                return f.frameAcceleration();
+            case EULER:
+                return f.euler();
+            case CORIOLIS:
+                return f.coriolis();
+            default:
+                return f.centrifugal();
+        }
+    }
+
+    /** The four terms with the left-out ones set to zero. */
+    private FictitiousAccelerations kept(FictitiousAccelerations f) {
+        if (omitted.isEmpty()) {
+            return f;
+        }
+        return new FictitiousAccelerations(
+                omitted.contains(InertialTerm.FRAME_ACCELERATION) ? Vector3D.ZERO : f.frameAcceleration(),
+                omitted.contains(InertialTerm.EULER) ? Vector3D.ZERO : f.euler(),
+                omitted.contains(InertialTerm.CORIOLIS) ? Vector3D.ZERO : f.coriolis(),
+                omitted.contains(InertialTerm.CENTRIFUGAL) ? Vector3D.ZERO : f.centrifugal());
     }
 
     /** The point with its acceleration from the equations of motion, tagged with F and t. */
@@ -79,7 +133,7 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
         checkState(t, y);
         Vector3D f = realForce(t, y);
         PointState bare = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
-        FictitiousAccelerations fict = placement(t, y).fictitious(bare);
+        FictitiousAccelerations fict = kept(placement(t, y).fictitious(bare));
         PointState full = bare.withAcceleration(f.add(fict.total()));
         return new TrajectorySample(FramedState.of(frame, t, full), f, fict);
     }
