@@ -14,7 +14,8 @@ import dev.noninertial.geodesy.LocalAxes;
  * <p>Work array layout ({@link #LENGTH} doubles): time; latitude, longitude, height; vN, vE, vD;
  * quaternion of the body in the NED level frame (scalar first, {@code v_n = q v_b q*});
  * history flag; previous delta-angle (3), previous delta-velocity at the centre (3), previous
- * step length, gravity of the last step (3, NED) (together the history); step count; scratch (9).
+ * step length, gravity, Earth rate and transport rate of the last step's midpoint (3 each, NED),
+ * radii of curvature RM, RN there (together the history); scratch (3); step count.
  */
 final class LevelKernel implements Serializable {
 
@@ -33,13 +34,14 @@ final class LevelKernel implements Serializable {
     static final int PREV_VELOCITY = 15;
     static final int PREV_STEP = 18;
     static final int GRAVITY = 19;
-    static final int STEP = 22;
-    /** Values of the history carried by a {@link NavigationState}: from PREV_ANGLE to GRAVITY + 2. */
-    static final int HISTORY = 10;
-    static final int EARTH = 23;
-    static final int TRANSPORT = 26;
-    static final int VELOCITY = 29;
-    static final int LENGTH = 32;
+    static final int EARTH = 22;
+    static final int TRANSPORT = 25;
+    static final int RADII = 28;
+    /** Values of the history carried by a {@link NavigationState}: from PREV_ANGLE to RADII + 1. */
+    static final int HISTORY = 18;
+    static final int VELOCITY = 30;
+    static final int STEP = 33;
+    static final int LENGTH = 34;
 
     /** Number of values written by a step into a terms array. */
     static final int TERMS = 30;
@@ -219,16 +221,19 @@ final class LevelKernel implements Serializable {
         double ky = uy + q0 * ty + (q3 * tx - q1 * tz);
         double kz = uz + q0 * tz + (q1 * ty - q2 * tx);
 
-        // ---- predictor for the midpoint of the step: rates at the start, gravity of the last step
+        // ---- predictor for the midpoint of the step: gravity and rates of the last step's
+        // midpoint (at the start of a run: evaluated at the start); their O(h) lag moves the
+        // predicted midpoint velocity by O(h^2) only
         double lat0 = w[LAT];
         double h0 = w[H];
         double vn0 = w[VN];
         double ve0 = w[VE];
         double vd0 = w[VD];
-        model.earthRateIn(lat0, LocalAxes.NED, w, EARTH);
-        model.transportRate(lat0, h0, w, VN, LocalAxes.NED, w, TRANSPORT);
         if (!hist) {
+            model.earthRateIn(lat0, LocalAxes.NED, w, EARTH);
+            model.transportRate(lat0, h0, w, VN, LocalAxes.NED, w, TRANSPORT);
             gravity(lat0, h0, w);
+            ellipsoid.radiiOfCurvature(lat0, w, RADII);
         }
         double ax = w[GRAVITY];
         double ay = w[GRAVITY + 1];
@@ -244,8 +249,7 @@ final class LevelKernel implements Serializable {
         double vnm = vn0 + 0.5 * (nx + ax * h);
         double vem = ve0 + 0.5 * (ny + ay * h);
         double vdm = vd0 + 0.5 * (nz + az * h);
-        double rm0 = ellipsoid.meridianRadius(lat0) + h0;
-        double latm = lat0 + 0.25 * h * (vn0 + vnm) / rm0;
+        double latm = lat0 + 0.25 * h * (vn0 + vnm) / (w[RADII] + h0);
         double hm = h0 - 0.25 * h * (vd0 + vdm);
         if (!(Math.abs(latm) < maxLatitude)) {
             throw poleRefusal(step, t0, end, latm);
@@ -305,8 +309,9 @@ final class LevelKernel implements Serializable {
         double vd1 = vd0 + fz + (gz + ccz + ttz) * h;
 
         // ---- position from the mean velocity with the radii of curvature at the midpoint
-        double rm = ellipsoid.meridianRadius(latm) + hm;
-        double rn = ellipsoid.primeVerticalRadius(latm) + hm;
+        ellipsoid.radiiOfCurvature(latm, w, RADII);
+        double rm = w[RADII] + hm;
+        double rn = w[RADII + 1] + hm;
         double lat1 = lat0 + 0.5 * h * (vn0 + vn1) / rm;
         double lon1 = w[LON] + 0.5 * h * (ve0 + ve1) / (rn * Math.cos(latm));
         double h1 = h0 - 0.5 * h * (vd0 + vd1);
