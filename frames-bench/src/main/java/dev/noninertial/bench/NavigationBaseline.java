@@ -8,12 +8,12 @@ package dev.noninertial.bench;
  * quaternion attitude) with every formula written inline, no checks, no calls, NED only. Its
  * state array: time, lat, lon, h, vN, vE, vD, q0..q3, previous delta-angle (3), previous
  * delta-velocity (3), previous gravity (3), history flag, previous rate sum 2 w_ie + w_en (3),
- * previous RM: {@link #LENGTH} doubles.
+ * previous RM, previous w_ie + w_en (3): {@link #LENGTH} doubles.
  */
 public final class NavigationBaseline {
 
     /** Length of the state array. */
-    public static final int LENGTH = 25;
+    public static final int LENGTH = 28;
 
     // WGS84 (NIMA TR8350.2, Table 3.1)
     private static final double A = 6378137.0;
@@ -144,18 +144,25 @@ public final class NavigationBaseline {
             s[21] = 2 * W * cl + ve0 / rn0;
             s[22] = -vn0 / (s[24] + h0);
             s[23] = -2 * W * sl - ve0 * Math.tan(lat0) / rn0;
+            s[25] = s[21] - W * cl;
+            s[26] = s[22];
+            s[27] = s[23] + W * sl;
             gravity(lat0, h0, s);
         }
         double ox = s[21];
         double oy = s[22];
         double oz = s[23];
         double rm0 = s[24] + h0;
+        // first-order level turn from the lagged rates (w_ie + w_en) h / 2
+        double yx = 0.5 * h * s[25];
+        double yy = 0.5 * h * s[26];
+        double yz = 0.5 * h * s[27];
         double ax = s[17] - (oy * vd0 - oz * ve0);
         double ay = s[18] - (oz * vn0 - ox * vd0);
         double az = s[19] - (ox * ve0 - oy * vn0);
-        double vnm = vn0 + 0.5 * (nx + ax * h);
-        double vem = ve0 + 0.5 * (ny + ay * h);
-        double vdm = vd0 + 0.5 * (nz + az * h);
+        double vnm = vn0 + 0.5 * (nx - (yy * mz - yz * my) + ax * h);
+        double vem = ve0 + 0.5 * (ny - (yz * mx - yx * mz) + ay * h);
+        double vdm = vd0 + 0.5 * (nz - (yx * my - yy * mx) + az * h);
         double latm = lat0 + 0.25 * h * (vn0 + vnm) / rm0;
         double hm = h0 - 0.25 * h * (vd0 + vdm);
 
@@ -186,6 +193,9 @@ public final class NavigationBaseline {
         s[22] = py;
         s[23] = pz;
         s[24] = rm - hm;
+        s[25] = ex + rx;
+        s[26] = ry;
+        s[27] = ez + rz;
         double vn1 = vn0 + fx + (s[17] - (py * vdm - pz * vem)) * h;
         double ve1 = ve0 + fy + (s[18] - (pz * vnm - px * vdm)) * h;
         double vd1 = vd0 + fz + (s[19] - (px * vem - py * vnm)) * h;

@@ -83,6 +83,12 @@ public final class PairedRatios {
         ops.put(k + "trajectoryLibrary", () -> sinkObject = d.trajectoryLibrary());
         ops.put(k + "trajectoryObjects", () -> sinkObject = d.trajectoryObjects());
         ops.put(k + "trajectoryPrimitives", () -> sinkObject = d.trajectoryPrimitives());
+        NavigationBenchmark nb = new NavigationBenchmark();
+        nb.reset();
+        k = "NavigationBenchmark.";
+        ops.put(k + "stepLibrary", () -> sinkObject = nb.stepLibrary());
+        ops.put(k + "stepPrimitives", () -> sinkObject = nb.stepPrimitives());
+        ops.put(k + "stepObjects", () -> sinkObject = nb.stepObjects());
         return ops;
     }
 

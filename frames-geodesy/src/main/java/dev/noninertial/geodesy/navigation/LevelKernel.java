@@ -246,9 +246,16 @@ final class LevelKernel implements Serializable {
         ax -= oy * vd0 - oz * ve0;
         ay -= oz * vn0 - ox * vd0;
         az -= ox * ve0 - oy * vn0;
-        double vnm = vn0 + 0.5 * (nx + ax * h);
-        double vem = ve0 + 0.5 * (ny + ay * h);
-        double vdm = vd0 + 0.5 * (nz + az * h);
+        // the level frame's turn to first order, from the same lagged rates, so that the
+        // predicted velocity of a body at rest stays zero (else a 1e-12 m/s^2 Coriolis bias)
+        double ke0 = earthRate ? 0.5 * h : 0.0;
+        double kr0 = transportRate ? 0.5 * h : 0.0;
+        double yx = ke0 * w[EARTH] + kr0 * w[TRANSPORT];
+        double yy = ke0 * w[EARTH + 1] + kr0 * w[TRANSPORT + 1];
+        double yz = ke0 * w[EARTH + 2] + kr0 * w[TRANSPORT + 2];
+        double vnm = vn0 + 0.5 * (nx - (yy * mz - yz * my) + ax * h);
+        double vem = ve0 + 0.5 * (ny - (yz * mx - yx * mz) + ay * h);
+        double vdm = vd0 + 0.5 * (nz - (yx * my - yy * mx) + az * h);
         double latm = lat0 + 0.25 * h * (vn0 + vnm) / (w[RADII] + h0);
         double hm = h0 - 0.25 * h * (vd0 + vdm);
         if (!(Math.abs(latm) < maxLatitude)) {
