@@ -15,7 +15,8 @@ import dev.noninertial.geodesy.LocalAxes;
  * quaternion of the body in the NED level frame (scalar first, {@code v_n = q v_b q*});
  * history flag; previous delta-angle (3), previous delta-velocity at the centre (3), previous
  * step length, gravity, Earth rate and transport rate of the last step's midpoint (3 each, NED),
- * radii of curvature RM, RN there (together the history); scratch (3); step count.
+ * radii of curvature RM, RN there, body rate estimated at the end of the last step (3) (together
+ * the history); scratch (3); step count.
  */
 final class LevelKernel implements Serializable {
 
@@ -37,11 +38,15 @@ final class LevelKernel implements Serializable {
     static final int EARTH = 22;
     static final int TRANSPORT = 25;
     static final int RADII = 28;
-    /** Values of the history carried by a {@link NavigationState}: from PREV_ANGLE to RADII + 1. */
-    static final int HISTORY = 18;
-    static final int VELOCITY = 30;
-    static final int STEP = 33;
-    static final int LENGTH = 34;
+    static final int RATE = 30;
+    /**
+     * Values of the history carried by a {@link NavigationState}: from HIST (1 after a step with
+     * history, 2 after a first step) to RATE + 2.
+     */
+    static final int HISTORY = 22;
+    static final int VELOCITY = 33;
+    static final int STEP = 36;
+    static final int LENGTH = 37;
 
     /** Number of values written by a step into a terms array. */
     static final int TERMS = 30;
@@ -119,23 +124,45 @@ final class LevelKernel implements Serializable {
         double paz = w[PREV_ANGLE + 2];
 
         // ---- size effect: specific force carried from each accelerometer to the centre
-        // (Savage 1998 part 1, size effect): f_i(r_i) = e_i . (f + dw/dt x r_i + w x (w x r_i)),
-        // with the integral of dw/dt from a rate linear over the previous and this step and the
-        // integral of w x (w x r) from the mean rate of this step
+        // (Savage 1998 part 1, size effect): f_i(r_i) = e_i . (f + dw/dt x r_i + w x (w x r_i)).
+        // The integral of dw/dt over the step is w(t1) - w(t0) with w at the step ends estimated
+        // from a rate linear over the previous and this step, and w(t0) the estimate kept from the
+        // previous step, so that the corrections telescope over a run (no drift from the
+        // estimates); the integral of w x (w x r) from the mean rate of this step. A state
+        // without history has no w(t0): its first step takes no dw/dt term.
         double sex = 0.0;
         double sey = 0.0;
         double sez = 0.0;
         if (sizeEffect) {
+            double ex1 = dax / h;
+            double ey1 = day / h;
+            double ez1 = daz / h;
             double ddx = 0.0;
             double ddy = 0.0;
             double ddz = 0.0;
             if (hist) {
                 double ph = w[PREV_STEP];
-                double k = h / (0.5 * (ph + h));
-                ddx = (dax / h - pax / ph) * k;
-                ddy = (day / h - pay / ph) * k;
-                ddz = (daz / h - paz / ph) * k;
+                double sx = (dax / h - pax / ph) / (0.5 * (ph + h));
+                double sy = (day / h - pay / ph) / (0.5 * (ph + h));
+                double sz = (daz / h - paz / ph) / (0.5 * (ph + h));
+                ex1 += 0.5 * h * sx;
+                ey1 += 0.5 * h * sy;
+                ez1 += 0.5 * h * sz;
+                if (w[HIST] == 2.0) {
+                    // the previous step was the first of the run and took no dw/dt term: start
+                    // from the rate extrapolated back to its start, which covers both steps
+                    ddx = ex1 - (pax / ph - 0.5 * ph * sx);
+                    ddy = ey1 - (pay / ph - 0.5 * ph * sy);
+                    ddz = ez1 - (paz / ph - 0.5 * ph * sz);
+                } else {
+                    ddx = ex1 - w[RATE];
+                    ddy = ey1 - w[RATE + 1];
+                    ddz = ez1 - w[RATE + 2];
+                }
             }
+            w[RATE] = ex1;
+            w[RATE + 1] = ey1;
+            w[RATE + 2] = ez1;
             sex = -sizeTerm(0, 0, ddx, ddy, ddz, dax, day, daz, h);
             sey = -sizeTerm(3, 1, ddx, ddy, ddz, dax, day, daz, h);
             sez = -sizeTerm(6, 2, ddx, ddy, ddz, dax, day, daz, h);
@@ -391,7 +418,7 @@ final class LevelKernel implements Serializable {
         w[VN] = vn1;
         w[VE] = ve1;
         w[VD] = vd1;
-        w[HIST] = 1.0;
+        w[HIST] = hist ? 1.0 : 2.0;
         w[PREV_ANGLE] = dax;
         w[PREV_ANGLE + 1] = day;
         w[PREV_ANGLE + 2] = daz;
@@ -402,29 +429,41 @@ final class LevelKernel implements Serializable {
         w[STEP] = step + 1;
     }
 
-    /** Component {@code axis} of dw x r + da x (da x r) / h for the accelerometer at offsets[base..]. */
+    /**
+     * Component {@code axis} of {@code Dw x r + da x (da x r) / h + (h / 12) Dw x (Dw x r)} for the
+     * accelerometer at offsets[base..]: the integrals of {@code dw/dt x r} and of
+     * {@code w x (w x r)} over the step for a rate linear in time ({@code Dw} its change, {@code da}
+     * its integral).
+     */
     private double sizeTerm(int base, int axis, double ddx, double ddy, double ddz, double dax, double day,
                             double daz, double h) {
         double ox = offsets[base];
         double oy = offsets[base + 1];
         double oz = offsets[base + 2];
-        // da x r
+        // da x r and Dw x r
         double ux = day * oz - daz * oy;
         double uy = daz * ox - dax * oz;
         double uz = dax * oy - day * ox;
+        double dx = ddy * oz - ddz * oy;
+        double dy = ddz * ox - ddx * oz;
+        double dz = ddx * oy - ddy * ox;
         double v;
+        double c;
         double d;
         if (axis == 0) {
             v = day * uz - daz * uy;
-            d = ddy * oz - ddz * oy;
+            c = ddy * dz - ddz * dy;
+            d = dx;
         } else if (axis == 1) {
             v = daz * ux - dax * uz;
-            d = ddz * ox - ddx * oz;
+            c = ddz * dx - ddx * dz;
+            d = dy;
         } else {
             v = dax * uy - day * ux;
-            d = ddx * oy - ddy * ox;
+            c = ddx * dy - ddy * dx;
+            d = dz;
         }
-        return d + v / h;
+        return d + v / h + h * c / 12.0;
     }
 
     /** Normal gravity (exact field, NED) into w[GRAVITY..], with the left-out dependences frozen. */
