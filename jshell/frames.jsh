@@ -12,4 +12,5 @@ import dev.noninertial.frames.dynamics.*;
 import dev.noninertial.frames.uncertainty.*;
 import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;
+import dev.noninertial.geodesy.air.*;
 import dev.noninertial.geodesy.navigation.*;
