@@ -202,7 +202,7 @@ public final class ReferenceFrame implements Serializable {
         links[0].writeLocal(t, work, 0);
         for (int i = 1; i < links.length; i++) {
             links[i].writeLocal(t, work, Placement.COMPONENTS);
-            Kinematics.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+            Kinematics.compose(work, work, Placement.COMPONENTS, work);
         }
     }
 
