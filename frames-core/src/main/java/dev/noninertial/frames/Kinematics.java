@@ -50,13 +50,24 @@ final class Kinematics {
      * non-finite sum of finite values (an overflow of the sum only) is told apart by a second pass.
      */
     static void checkFinite(double[] v, int from, int n) {
-        double sum = 0;
-        for (int k = from; k < from + n; k++) {
-            sum += v[k];
+        // four independent partial sums: the additions overlap instead of waiting on each other
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int k = from;
+        for (int end = from + n - 3; k < end; k += 4) {
+            s0 += v[k];
+            s1 += v[k + 1];
+            s2 += v[k + 2];
+            s3 += v[k + 3];
         }
-        if (!Double.isFinite(sum)) {
-            for (int k = from; k < from + n; k++) {
-                if (!Double.isFinite(v[k])) {
+        for (; k < from + n; k++) {
+            s0 += v[k];
+        }
+        if (!Double.isFinite(s0 + s1 + s2 + s3)) {
+            for (int i = from; i < from + n; i++) {
+                if (!Double.isFinite(v[i])) {
                     throw notFinite();
                 }
             }
@@ -129,18 +140,7 @@ final class Kinematics {
             double nax = oax + r00 * afx + r10 * afy + r20 * afz;
             double nay = oay + r01 * afx + r11 * afy + r21 * afz;
             double naz = oaz + r02 * afx + r12 * afy + r22 * afz;
-            if (!Double.isFinite(nx + ny + nz + nvx + nvy + nvz + nax + nay + naz)) {
-                refuseUnlessFinite(nx, ny, nz, nvx, nvy, nvz, nax, nay, naz);
-            }
-            target[j] = nx;
-            target[j + 1] = ny;
-            target[j + 2] = nz;
-            target[j + 3] = nvx;
-            target[j + 4] = nvy;
-            target[j + 5] = nvz;
-            target[j + 6] = nax;
-            target[j + 7] = nay;
-            target[j + 8] = naz;
+            store(target, j, nx, ny, nz, nvx, nvy, nvz, nax, nay, naz);
         }
     }
 
@@ -209,21 +209,27 @@ final class Kinematics {
                     - (wz * cx - wx * cz);
             double naz = r20 * ex + r21 * ey + r22 * ez - (alx * ny - aly * nx) - 2 * (wx * nvy - wy * nvx)
                     - (wx * cy - wy * cx);
-            if (!Double.isFinite(nx + ny + nz + nvx + nvy + nvz + nax + nay + naz)) {
-                refuseUnlessFinite(nx, ny, nz, nvx, nvy, nvz, nax, nay, naz);
-            }
-            target[j] = nx;
-            target[j + 1] = ny;
-            target[j + 2] = nz;
-            target[j + 3] = nvx;
-            target[j + 4] = nvy;
-            target[j + 5] = nvz;
-            target[j + 6] = nax;
-            target[j + 7] = nay;
-            target[j + 8] = naz;
+            store(target, j, nx, ny, nz, nvx, nvy, nvz, nax, nay, naz);
         }
     }
 
+
+    /** Writes one converted state, refusing it unless all nine values are finite. */
+    private static void store(double[] target, int j, double x, double y, double z, double vx, double vy,
+                              double vz, double ax, double ay, double az) {
+        if (!Double.isFinite((x + y + z) + (vx + vy + vz) + (ax + ay + az))) {
+            refuseUnlessFinite(x, y, z, vx, vy, vz, ax, ay, az);
+        }
+        target[j] = x;
+        target[j + 1] = y;
+        target[j + 2] = z;
+        target[j + 3] = vx;
+        target[j + 4] = vy;
+        target[j + 5] = vz;
+        target[j + 6] = ax;
+        target[j + 7] = ay;
+        target[j + 8] = az;
+    }
 
     /** Throws {@link #notFinite()} unless all nine values are finite (their sum alone overflowed). */
     private static void refuseUnlessFinite(double a, double b, double c, double d, double e, double f,
@@ -293,14 +299,12 @@ final class Kinematics {
         // F's origin: G's origin is F's) and one that only moves its origin (identity orientation,
         // no rates: G's axes and rates are F's). Their terms that are exactly zero are skipped;
         // the results agree with the general formulas except possibly in the sign of a zero.
-        boolean turnOnly = true;
-        for (int k = 0; k < MATRIX; k++) {
-            turnOnly &= b[bo + k] == 0;
-        }
-        boolean moveOnly = b[bo + 9] == 1 && b[bo + 13] == 1 && b[bo + 17] == 1;
-        for (int k : OFF_IDENTITY) {
-            moveOnly &= b[bo + k] == 0;
-        }
+        boolean turnOnly = b[bo] == 0 && b[bo + 1] == 0 && b[bo + 2] == 0 && b[bo + 3] == 0 && b[bo + 4] == 0
+                && b[bo + 5] == 0 && b[bo + 6] == 0 && b[bo + 7] == 0 && b[bo + 8] == 0;
+        boolean moveOnly = b[bo + 9] == 1 && b[bo + 13] == 1 && b[bo + 17] == 1 && b[bo + 10] == 0
+                && b[bo + 11] == 0 && b[bo + 12] == 0 && b[bo + 14] == 0 && b[bo + 15] == 0 && b[bo + 16] == 0
+                && b[bo + 18] == 0 && b[bo + 19] == 0 && b[bo + 20] == 0 && b[bo + 21] == 0 && b[bo + 22] == 0
+                && b[bo + 23] == 0;
         // the orientation part reads both inputs before the origin part may overwrite a range
         double r00 = a[9];
         double r01 = a[10];
@@ -382,9 +386,6 @@ final class Kinematics {
         out[23] = ialz + taz - (iwx * twy - iwy * twx);
         checkFinite(out, 0, Placement.COMPONENTS);
     }
-
-    /** Indices of the inner placement that are zero for a move-only link. */
-    private static final int[] OFF_IDENTITY = {10, 11, 12, 14, 15, 16, 18, 19, 20, 21, 22, 23};
 
     /**
      * The inverse placement: {@code p} is F in B, {@code out} receives B in F: B's origin is the
