@@ -215,11 +215,34 @@ public final class EarthModel implements Serializable {
      * {@code W = GM/E atan(E/u) + w^2 a^2 q(u)/(2 q0) (sin^2 beta - 1/3) + w^2 (u^2 + E^2) cos^2 beta / 2}.
      * On the ellipsoid it equals the constant {@code U0 = GM/E atan(E/b) + w^2 a^2 / 3}.
      *
+     * <p>Beyond {@value #POINT_MASS_DISTANCE} m from the centre the gravitational part is the point
+     * mass's (its flattening term is below rounding there); positions so far from the axis that
+     * the centrifugal part overflows (about 1.9e158 m) are refused.
+     *
      * @param position Earth-fixed position (m), ECEF axes, not deeper than about 20 km below the ellipsoid
      * @return potential (m^2/s^2), positive
-     * @throws IllegalArgumentException if the position is not finite or too deep
+     * @throws IllegalArgumentException if the position is not finite, too deep or too far
      */
     public double normalPotential(Vector3D position) {
+        Arguments.finite("position", position);
+        double px = position.getX();
+        double py = position.getY();
+        double pz = position.getZ();
+        double big = Math.max(Math.abs(px), Math.max(Math.abs(py), Math.abs(pz)));
+        if (big > POINT_MASS_DISTANCE) {
+            // point mass plus centrifugal potential (flattening term below rounding, see field)
+            double scale = Math.scalb(1.0, Math.getExponent(big));
+            double sx = px / scale;
+            double sy = py / scale;
+            double sz = pz / scale;
+            double r = Math.sqrt(sx * sx + sy * sy + sz * sz) * scale;
+            double w = gm / r + 0.5 * omega * omega * (sx * sx + sy * sy) * scale * scale;
+            if (!Double.isFinite(w)) {
+                throw new IllegalArgumentException("position " + position + " m is too far from the axis: the"
+                        + " centrifugal potential w^2 p^2 / 2 exceeds the largest double");
+            }
+            return w;
+        }
         double[] c = ellipsoidal(position);
         double u = c[0];
         double sb2 = c[1];
@@ -242,20 +265,49 @@ public final class EarthModel implements Serializable {
      * @throws IllegalArgumentException if the position is not finite or too deep
      */
     public Vector3D normalGravityVector(Vector3D position) {
+        return field(position, true);
+    }
+
+    /** Beyond this distance from the centre (m) the field is the point mass's (see {@link #gravitation}). */
+    static final double POINT_MASS_DISTANCE = 1e100;
+
+    /**
+     * Gradient of the normal potential, with or without its centrifugal part. Without it, the
+     * gravitational part alone is differentiated, so gravitation far from the Earth is not the
+     * small difference of two large numbers (at 1e13 m the centrifugal term is 5e4 m/s^2 and
+     * gravitation 4e-12 m/s^2).
+     */
+    private Vector3D field(Vector3D position, boolean withCentrifugal) {
+        Arguments.finite("position", position);
+        double px = position.getX();
+        double py = position.getY();
+        double pz = position.getZ();
+        double big = Math.max(Math.abs(px), Math.max(Math.abs(py), Math.abs(pz)));
+        if (big > POINT_MASS_DISTANCE) {
+            // the flattening term falls off as (a/r)^2 relative to the point mass: below 1e-186
+            // here, far below rounding; the point mass is computed on scaled components
+            double scale = Math.scalb(1.0, Math.getExponent(big));
+            double sx = px / scale;
+            double sy = py / scale;
+            double sz = pz / scale;
+            double sr = Math.sqrt(sx * sx + sy * sy + sz * sz);
+            double r = sr * scale;
+            double pull = gm / r / r / sr; // multiplies the scaled components: GM r_vec / r^3
+            double w2 = withCentrifugal ? omega * omega : 0.0;
+            return new Vector3D(-pull * sx + w2 * px, -pull * sy + w2 * py, -pull * sz);
+        }
         double[] c = ellipsoidal(position);
         double u = c[0];
         double sb2 = c[1];
         double cb2 = c[2];
-        double px = position.getX();
-        double py = position.getY();
-        double pz = position.getZ();
         double x = linear / u;
         double u2e2 = u * u + linear2;
         double w2 = omega * omega;
+        double spin = withCentrifugal ? w2 : 0.0;
         // dq/du = Q'(x) dx/du with x = E/u
         double dqdu = -qDerivative(x) * linear / (u * u);
-        double dUdu = -gm / u2e2 + 0.5 * w2 * a * a * dqdu / q0 * (sb2 - 1.0 / 3.0) + w2 * u * cb2;
-        double kb = w2 * a * a * q(x) / q0 - w2 * u2e2;   // dU/dbeta = sin(beta) cos(beta) kb
+        double dUdu = -gm / u2e2 + 0.5 * w2 * a * a * dqdu / q0 * (sb2 - 1.0 / 3.0) + spin * u * cb2;
+        double kb = w2 * a * a * q(x) / q0 - spin * u2e2;   // dU/dbeta = sin(beta) cos(beta) kb
         double metric = u * u + linear2 * sb2;             // |dr/dbeta|^2 = (u^2 + E^2) |dr/du|^2
         double ca = dUdu * u2e2 / metric;                  // multiplies dr/du
         double cb = kb / metric;                           // multiplies dr/dbeta / (sin cos)
@@ -273,14 +325,18 @@ public final class EarthModel implements Serializable {
      * re-resolving the vector in inertial axes). Passing {@link #normalGravityVector(Vector3D)}
      * in an Earth-fixed frame would count the centrifugal term twice.
      *
+     * <p>The gravitational potential alone is differentiated (no centrifugal part is added and
+     * then taken away), so the field stays accurate at any distance: it tends to the point
+     * mass's {@code -GM r / |r|^3}, and beyond {@value #POINT_MASS_DISTANCE} m, where the
+     * flattening term is below rounding, it is computed as that point mass (underflowing to zero
+     * beyond about 1e161 m).
+     *
      * @param position Earth-fixed position (m), ECEF axes, height above about -20 km
      * @return gravitation (m/s^2), resolved in ECEF axes
      * @throws IllegalArgumentException if the position is not finite or too deep
      */
     public Vector3D gravitation(Vector3D position) {
-        Vector3D g = normalGravityVector(position);
-        double w2 = omega * omega;
-        return new Vector3D(g.getX() - w2 * position.getX(), g.getY() - w2 * position.getY(), g.getZ());
+        return field(position, false);
     }
 
     /**
@@ -451,7 +507,8 @@ public final class EarthModel implements Serializable {
         double z = position.getZ();
         double p2 = x * x + y * y;
         double d = p2 + z * z - linear2;
-        double u2 = 0.5 * (d + Math.sqrt(d * d + 4.0 * linear2 * z * z));
+        // hypot: d * d would overflow beyond about 1e77 m
+        double u2 = 0.5 * (d + Math.hypot(d, 2.0 * linear * z));
         double u = Math.sqrt(u2);
         if (!(u >= b + MIN_HEIGHT)) {
             throw new IllegalArgumentException("position " + position + " m is deeper than " + (-MIN_HEIGHT)
