@@ -413,6 +413,9 @@ public final class EarthModel implements Serializable {
      */
     public void normalGravityIn(double latitude, double height, LocalAxes axes, double[] out, int offset) {
         Ellipsoid.checkLatitude(latitude);
+        Arguments.finite("height", height);
+        Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         ellipsoid.toCartesian(latitude, 0.0, height, out, offset);
         fieldAt(out[offset], 0.0, out[offset + 2], true, out, offset);
         double gx = out[offset];
@@ -473,6 +476,7 @@ public final class EarthModel implements Serializable {
     public void earthRateIn(double latitude, LocalAxes axes, double[] out, int offset) {
         Ellipsoid.checkLatitude(latitude);
         Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double c = omega * Math.cos(latitude);
         double s = omega * Math.sin(latitude);
         if (axes == LocalAxes.ENU) {
@@ -529,7 +533,11 @@ public final class EarthModel implements Serializable {
      */
     public void transportRate(double latitude, double height, double[] groundVelocity, int velocityOffset,
                               LocalAxes axes, double[] out, int offset) {
+        Ellipsoid.checkLatitude(latitude);
+        Arguments.finite("height", height);
         Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("groundVelocity", groundVelocity, "velocityOffset", velocityOffset, 3);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double north = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 1 : 0)];
         double east = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 0 : 1)];
         Arguments.finite("groundVelocity north component (m/s)", north);

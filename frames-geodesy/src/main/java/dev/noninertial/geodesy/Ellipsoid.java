@@ -197,6 +197,10 @@ public final class Ellipsoid implements Serializable {
      * @param offset index of x in {@code out}
      */
     public void toCartesian(double latitude, double longitude, double height, double[] out, int offset) {
+        checkLatitude(latitude);
+        Arguments.finite("longitude", longitude);
+        Arguments.finite("height", height);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double sLat = Math.sin(latitude);
         double cLat = Math.cos(latitude);
         double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);

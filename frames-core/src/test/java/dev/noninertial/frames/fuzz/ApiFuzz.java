@@ -103,6 +103,8 @@ public final class ApiFuzz {
         public final Map<String, String> newClassFailures = new LinkedHashMap<>();
         /** Encapsulation findings (internal arrays reachable from outside). */
         public final Map<String, String> exposures = new LinkedHashMap<>();
+        /** Package-private accessors handing out internal arrays (covered by package sealing). */
+        public final Map<String, String> packageInternal = new LinkedHashMap<>();
         /** Internal array accessors checked for copies. */
         public int arrayAccessorsChecked;
 
@@ -122,6 +124,7 @@ public final class ApiFuzz {
             section(b, "failing in classes not yet in fuzz/enforced.txt (reported only)", newClassFailures);
             section(b, "allowed by fuzz/allowed.txt", allowedFailures);
             section(b, "internal arrays reachable", exposures);
+            section(b, "internal arrays shared inside a package (sealed jars keep other code out)", packageInternal);
             section(b, "skipped (no valid call found)", skipped);
             return b.toString();
         }
@@ -539,7 +542,13 @@ public final class ApiFuzz {
                 Object first = m.invoke(receiver);
                 Object second = m.invoke(receiver);
                 if (first != null && first == second) {
-                    report.exposures.put(c.getName() + "." + m.getName() + "()", "returns its internal array");
+                    if (Modifier.isPublic(m.getModifiers()) || Modifier.isProtected(m.getModifiers())) {
+                        report.exposures.put(c.getName() + "." + m.getName() + "()", "returns its internal array");
+                    } else {
+                        report.packageInternal.put(c.getName() + "." + m.getName() + "()",
+                                "package-private, returns its internal array: reachable only from the package,"
+                                + " which the release jars seal");
+                    }
                 }
             } catch (ReflectiveOperationException | RuntimeException x) {
                 // not callable on the sample: nothing learned
