@@ -118,6 +118,10 @@ public final class Arguments {
             throw new IllegalArgumentException(
                     name + " must be a non-zero axis (length > 0), got " + vector(axis));
         }
+        if (largest >= 0x1p-450 && largest <= 0x1p450) {
+            // the squares neither overflow nor underflow: the plain formula (bits as before)
+            return axis.scalarMultiply(1.0 / axis.getNorm());
+        }
         // scale by a power of two (exact) so that the largest component is in [1, 2): the squares
         // can then neither overflow (huge axes) nor lose bits to underflow (tiny axes)
         double scale = Math.scalb(1.0, -Math.getExponent(largest));
