@@ -168,6 +168,7 @@ public final class Ellipsoid implements Serializable {
      */
     public void radiiOfCurvature(double latitude, double[] out, int offset) {
         checkLatitude(latitude);
+        Arguments.fromIndexSize("out", out, "offset", offset, 2);
         double s = Math.sin(latitude);
         double w2 = 1.0 - e2 * s * s;
         out[offset] = meridianRadiusOf(w2);
