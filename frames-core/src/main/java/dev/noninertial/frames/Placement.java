@@ -104,7 +104,6 @@ public final class Placement implements Serializable {
     /** Angular acceleration z (rad/s^2). */
     final double alz;
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     Placement(double ox, double oy, double oz, double ovx, double ovy, double ovz,
               double oax, double oay, double oaz,
               double r00, double r01, double r02, double r10, double r11, double r12,
@@ -208,7 +207,6 @@ public final class Placement implements Serializable {
      * @throws IllegalArgumentException if a value is not finite or the quaternion is not unit
      *         within 1e-9
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     public static Placement ofQuaternion(double ox, double oy, double oz, double ovx, double ovy, double ovz,
                                          double oax, double oay, double oaz,
                                          double q0, double q1, double q2, double q3,
@@ -237,7 +235,6 @@ public final class Placement implements Serializable {
                 wx, wy, wz, alx, aly, alz);
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
                                          double oax, double oay, double oaz,
                                          double q0, double q1, double q2, double q3,
@@ -814,7 +811,6 @@ public final class Placement implements Serializable {
      * arithmetic of {@link #then(Placement)}: {@code a} is F in B, {@code b} is G in F, {@code out}
      * receives G in B. {@code out} may be the same range as {@code a} or {@code b}. No checks.
      */
-    @SuppressWarnings("checkstyle:MethodLength")
     static void compose(double[] a, int ao, double[] b, int bo, double[] out, int oo) {
         double ox = a[ao + 0];
         double oy = a[ao + 1];

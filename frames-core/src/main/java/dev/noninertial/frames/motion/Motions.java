@@ -154,7 +154,6 @@ public final class Motions {
      * {@link Placement#toArray(double[], int)}, with exactly the arithmetic of {@link Placement#ofQuaternion} so that
      * both paths give identical bits. No checks.
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void writeTurn(double nx, double ny, double nz, double th, double th1, double th2,
                           double[] target, int o) {
         double half = 0.5 * th;
@@ -197,7 +196,6 @@ public final class Motions {
      * Writes a pure translation (identity orientation, no rotation rates) in the layout of
      * {@link Placement#toArray(double[], int)}. No checks.
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void writeTranslation(double px, double py, double pz, double vx, double vy, double vz,
                                  double ax, double ay, double az, double[] target, int o) {
         target[o] = px;
@@ -226,7 +224,6 @@ public final class Motions {
     }
 
     /** Range checks of the bulk conversions, with the messages of {@link Motion#toBase}. */
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static void checkBulk(double[] times, int timeOffset, double[] source, int sourceOffset,
                                   double[] target, int targetOffset, int count) {
         Arguments.nonNull("source", source);

@@ -452,7 +452,6 @@ public final class SampledMotion implements Motion, Serializable {
 
     // ------------------------------------------------------------------ interpolation
 
-    @SuppressWarnings("checkstyle:MethodLength")
     private Placement evaluate(int i, double t) {
         int j = i + 1;
         double tI = times[i];
@@ -700,7 +699,6 @@ public final class SampledMotion implements Motion, Serializable {
         return hi - lo + 1;
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static double weigh(double[] data, int stride, int comp, int k0, int k1, int k2, int k3, int k4,
                                 double w0, double w1, double w2, double w3, double w4) {
         return w0 * data[stride * k0 + comp] + w1 * data[stride * k1 + comp] + w2 * data[stride * k2 + comp]
@@ -724,7 +722,6 @@ public final class SampledMotion implements Motion, Serializable {
         }
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private double weighRates(int comp, int k0, int k1, int k2, int k3, int k4,
                               double w0, double w1, double w2, double w3, double w4) {
         return w0 * quaternionRate(comp, k0) + w1 * quaternionRate(comp, k1) + w2 * quaternionRate(comp, k2)
