@@ -1,5 +1,6 @@
 package dev.noninertial.frames;
 
+import java.io.InvalidObjectException;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -114,6 +115,25 @@ public final class Arguments {
                     name + " must be a non-zero axis (length > 0), got " + vector(axis));
         }
         return axis.scalarMultiply(1.0 / norm);
+    }
+
+    /**
+     * The exception a {@code readObject} or {@code readResolve} throws when the value read from a
+     * stream fails the checks its factory makes: every serializable type of the library re-runs
+     * those checks on reading, since a stream is untrusted input.
+     *
+     * @param type the type being read, named in the message
+     * @param cause the refusal of the factory checks
+     * @return an {@link InvalidObjectException} naming the type, with the refusal's message and
+     *         the refusal as its cause
+     */
+    public static InvalidObjectException refusedStream(Class<?> type, RuntimeException cause) {
+        nonNull("type", type);
+        nonNull("cause", cause);
+        InvalidObjectException failure = new InvalidObjectException(
+                "corrupt " + type.getSimpleName() + " in the stream: " + cause.getMessage());
+        failure.initCause(cause);
+        return failure;
     }
 
     private static String vector(Vector3D v) {

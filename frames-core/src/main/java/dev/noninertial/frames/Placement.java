@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
@@ -1004,6 +1006,45 @@ public final class Placement implements Serializable {
         return new Placement(c[o], c[o + 1], c[o + 2], c[o + 3], c[o + 4], c[o + 5], c[o + 6], c[o + 7], c[o + 8],
                 c[o + 9], c[o + 10], c[o + 11], c[o + 12], c[o + 13], c[o + 14], c[o + 15], c[o + 16], c[o + 17],
                 c[o + 18], c[o + 19], c[o + 20], c[o + 21], c[o + 22], c[o + 23]);
+    }
+
+    /** Largest deviation of an entry of {@code R R^T} from the identity accepted from a stream. */
+    private static final double ORTHOGONALITY_TOLERANCE = 1e-8;
+
+    /**
+     * Reads the fields and re-checks them as the factories do: every component finite, the
+     * orientation a proper rotation ({@code R R^T = I} within {@value #ORTHOGONALITY_TOLERANCE} per
+     * entry, determinant positive, so no reflection).
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds a placement the factories refuse
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            double[] c = components();
+            for (int i = 0; i < COMPONENTS; i++) {
+                Arguments.finite("component " + i, c[i]);
+            }
+            double worst = 0;
+            for (int i = 0; i < 3; i++) {
+                for (int j = 0; j < 3; j++) {
+                    double dot = c[9 + 3 * i] * c[9 + 3 * j] + c[10 + 3 * i] * c[10 + 3 * j]
+                            + c[11 + 3 * i] * c[11 + 3 * j];
+                    worst = Math.max(worst, Math.abs(dot - (i == j ? 1.0 : 0.0)));
+                }
+            }
+            double det = r00 * (r11 * r22 - r12 * r21) - r01 * (r10 * r22 - r12 * r20)
+                    + r02 * (r10 * r21 - r11 * r20);
+            if (!(worst <= ORTHOGONALITY_TOLERANCE) || !(det > 0)) {
+                throw new IllegalArgumentException("orientation must be a rotation (R R^T = I within "
+                        + ORTHOGONALITY_TOLERANCE + ", determinant +1), got largest deviation " + worst
+                        + " and determinant " + det);
+            }
+        } catch (IllegalArgumentException e) {
+            throw Arguments.refusedStream(Placement.class, e);
+        }
     }
 
     // ------------------------------------------------------------------ object methods

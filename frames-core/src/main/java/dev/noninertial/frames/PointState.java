@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -180,6 +182,24 @@ public final class PointState implements Serializable {
     public PointState withPosition(Vector3D position) {
         Arguments.finite("position", position);
         return new PointState(position.getX(), position.getY(), position.getZ(), vx, vy, vz, ax, ay, az);
+    }
+
+    /**
+     * Reads the fields and re-checks them as {@link #of(Vector3D, Vector3D, Vector3D)} does.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds a non-finite component
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.finite("position", new Vector3D(x, y, z));
+            Arguments.finite("velocity", new Vector3D(vx, vy, vz));
+            Arguments.finite("acceleration", new Vector3D(ax, ay, az));
+        } catch (IllegalArgumentException e) {
+            throw Arguments.refusedStream(PointState.class, e);
+        }
     }
 
     @Override

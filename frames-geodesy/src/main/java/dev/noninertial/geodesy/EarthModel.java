@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Locale;
 
@@ -517,6 +519,51 @@ public final class EarthModel implements Serializable {
     @Override
     public int hashCode() {
         return (ellipsoid.hashCode() * 31 + Double.hashCode(gm)) * 31 + Double.hashCode(omega);
+    }
+
+    /**
+     * Replaces this model in a stream by its defining constants.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        return new Proxy(ellipsoid, gm, omega);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy (it could hold derived constants that disagree
+     * with the defining ones).
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("an EarthModel is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form: the defining constants; reading calls
+     * {@link #of(Ellipsoid, double, double)}.
+     *
+     * @param ellipsoid the level ellipsoid
+     * @param gm GM (m^3/s^2)
+     * @param rotationRate w (rad/s)
+     */
+    private record Proxy(Ellipsoid ellipsoid, double gm, double rotationRate) implements Serializable {
+
+        /**
+         * Rebuilds the model with the checks of {@link EarthModel#of(Ellipsoid, double, double)}.
+         *
+         * @return the model
+         * @throws InvalidObjectException if the constants are refused
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                return of(ellipsoid, gm, rotationRate);
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(EarthModel.class, e);
+            }
+        }
     }
 
     @Override

@@ -258,7 +258,24 @@ public final class Motions {
         }
     }
 
+    /**
+     * Re-checks the parameters of a motion record: records of this class are also built by
+     * deserialization, through their canonical constructor, so a stream meets the checks of the
+     * factories.
+     */
+    private static void checkUnitAxis(String name, Vector3D axis) {
+        Arguments.finite(name, axis);
+        double norm = axis.getNorm();
+        if (!(Math.abs(norm - 1.0) <= 1e-12)) {
+            throw new IllegalArgumentException(name + " must be a unit vector (within 1e-12), got norm " + norm);
+        }
+    }
+
     private record Fixed(Placement placement) implements Motion, Serializable {
+        Fixed {
+            Arguments.nonNull("placement", placement);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -279,6 +296,13 @@ public final class Motions {
 
     private record Spin(Vector3D axis, double angleAtZero, double rateAtZero, double angularAcceleration)
             implements Motion, Serializable {
+        Spin {
+            checkUnitAxis("axis", axis);
+            Arguments.finite("angleAtZero", angleAtZero);
+            Arguments.finite("rateAtZero", rateAtZero);
+            Arguments.finite("angularAcceleration", angularAcceleration);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -380,6 +404,13 @@ public final class Motions {
 
     private record AngleOscillation(Vector3D axis, double amplitude, double angularFrequency, double phase)
             implements Motion, Serializable {
+        AngleOscillation {
+            checkUnitAxis("axis", axis);
+            Arguments.finite("amplitude", amplitude);
+            Arguments.finite("angularFrequency", angularFrequency);
+            Arguments.finite("phase", phase);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -411,6 +442,13 @@ public final class Motions {
 
     private record Heave(Vector3D direction, double amplitude, double angularFrequency, double phase)
             implements Motion, Serializable {
+        Heave {
+            checkUnitAxis("direction", direction);
+            Arguments.finite("amplitude", amplitude);
+            Arguments.finite("angularFrequency", angularFrequency);
+            Arguments.finite("phase", phase);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -454,6 +492,29 @@ public final class Motions {
 
         Polynomial(double[] c) {
             this.c = c;
+        }
+
+        /**
+         * Re-checks the coefficients read from a stream as {@link Motions#translation} does.
+         *
+         * @param in the stream
+         * @throws java.io.IOException if the stream fails or the coefficients are refused
+         * @throws ClassNotFoundException if a class of the stream is missing
+         */
+        private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+            in.defaultReadObject();
+            try {
+                Arguments.nonNull("coefficients", c);
+                if (c.length == 0 || c.length % 3 != 0) {
+                    throw new IllegalArgumentException("coefficients must hold whole vectors, got " + c.length
+                            + " values");
+                }
+                for (int k = 0; k < c.length; k++) {
+                    Arguments.finite("coefficients[" + k / 3 + "]", c[k]);
+                }
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(Polynomial.class, e);
+            }
         }
 
         @Override

@@ -794,7 +794,9 @@ public final class SampledMotion implements Motion, Serializable {
                         + ", " + q3 + ") must be finite and unit (|norm - 1| <= "
                         + Orientations.UNIT_QUATERNION_TOLERANCE + "), got norm " + norm);
             }
-            double sign = 1.0 / norm;
+            // a quaternion unit to rounding (within 2 ulps of 1) is kept as it is, so normalising is
+            // idempotent: a motion read back from a stream keeps the bits it was written with
+            double sign = Math.abs(norm - 1.0) <= 2 * Math.ulp(1.0) ? 1.0 : 1.0 / norm;
             if (i > 0) {
                 double dot = q0 * quaternions[4 * i - 4] + q1 * quaternions[4 * i - 3]
                         + q2 * quaternions[4 * i - 2] + q3 * quaternions[4 * i - 1];
@@ -833,36 +835,87 @@ public final class SampledMotion implements Motion, Serializable {
     }
 
     /**
-     * Re-checks a deserialized motion like any other source of samples.
+     * Replaces this motion in a stream by its proxy.
+     *
+     * @return the proxy holding the sample arrays
+     */
+    private Object writeReplace() {
+        return new Proxy(times, positions, attitudes, velocities, rates, maxGap);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy.
      *
      * @param in the stream
-     * @throws IOException if the stream fails
-     * @throws ClassNotFoundException if a class of the stream is missing
+     * @throws InvalidObjectException always
      */
-    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
-        in.defaultReadObject();
-        // a stream is untrusted input: check it like any other source of samples
-        try {
-            if (times == null || positions == null || attitudes == null) {
-                throw new IllegalArgumentException("missing sample arrays");
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("a SampledMotion is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form of a sampled motion: its sample arrays and max gap. Reading rebuilds the
+     * motion through the same checks as the factories, and the motion keeps the arrays those
+     * checks normalised and sign-aligned (a stream is untrusted input like any other source of
+     * samples).
+     */
+    private static final class Proxy implements Serializable {
+
+        private static final long serialVersionUID = 1L;
+
+        /** Sample times (s). */
+        private final double[] times;
+        /** Positions, x, y, z per sample (m). */
+        private final double[] positions;
+        /** Quaternions, q0..q3 per sample. */
+        private final double[] attitudes;
+        /** Measured origin velocities (m/s), or null. */
+        private final double[] velocities;
+        /** Measured angular rates (rad/s), or null. */
+        private final double[] rates;
+        /** Longest interpolated interval (s). */
+        private final double maxGap;
+
+        Proxy(double[] times, double[] positions, double[] attitudes, double[] velocities, double[] rates,
+              double maxGap) {
+            this.times = times;
+            this.positions = positions;
+            this.attitudes = attitudes;
+            this.velocities = velocities;
+            this.rates = rates;
+            this.maxGap = maxGap;
+        }
+
+        /**
+         * Rebuilds the motion with the checks of the factories.
+         *
+         * @return the motion, holding the arrays it validated
+         * @throws InvalidObjectException if a check refuses the samples
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                Arguments.nonNull("times", times);
+                Arguments.nonNull("positions", positions);
+                Arguments.nonNull("quaternions", attitudes);
+                checkLength("positions", positions.length, 3, times.length);
+                checkLength("quaternions", attitudes.length, 4, times.length);
+                if (velocities != null) {
+                    checkLength("originVelocities", velocities.length, 3, times.length);
+                }
+                if (rates != null) {
+                    checkLength("angularVelocities", rates.length, 3, times.length);
+                }
+                if (!(maxGap > 0)) {
+                    throw new IllegalArgumentException("seconds (max gap) must be positive, got " + maxGap);
+                }
+                // copies, since a crafted stream may share one array between fields or objects; build
+                // checks, normalises and sign-aligns the copies and the motion keeps exactly those
+                return build(times.clone(), positions.clone(), attitudes.clone(),
+                        velocities == null ? null : velocities.clone(), rates == null ? null : rates.clone(),
+                        maxGap, SampledMotion::sampleLabel);
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(SampledMotion.class, e);
             }
-            checkLength("positions", positions.length, 3, times.length);
-            checkLength("attitudes", attitudes.length, 4, times.length);
-            if (velocities != null) {
-                checkLength("velocities", velocities.length, 3, times.length);
-            }
-            if (rates != null) {
-                checkLength("rates", rates.length, 3, times.length);
-            }
-            if (!(maxGap > 0)) {
-                throw new IllegalArgumentException("max gap must be positive, got " + maxGap);
-            }
-            build(times.clone(), positions.clone(), attitudes.clone(), velocities, rates, maxGap,
-                    SampledMotion::sampleLabel);
-        } catch (IllegalArgumentException e) {
-            InvalidObjectException failure = new InvalidObjectException("corrupt sampled motion: " + e.getMessage());
-            failure.initCause(e);
-            throw failure;
         }
     }
 
