@@ -179,7 +179,7 @@ public final class ReferenceFrame implements Serializable {
             // placements per link; same arithmetic as then(), hence the same bits
             double[] work = new double[2 * Placement.COMPONENTS];
             placeInAncestor(ancestor, t, work);
-            return Placement.fromArray(work, 0);
+            return Placement.wrap(java.util.Arrays.copyOf(work, Placement.COMPONENTS));
         }
         Placement local = motion.at(t);
         if (local == null) {
@@ -202,7 +202,7 @@ public final class ReferenceFrame implements Serializable {
         links[0].writeLocal(t, work, 0);
         for (int i = 1; i < links.length; i++) {
             links[i].writeLocal(t, work, Placement.COMPONENTS);
-            Placement.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+            Kinematics.compose(work, 0, work, Placement.COMPONENTS, work, 0);
         }
     }
 
