@@ -288,6 +288,10 @@ public final class ApiFuzz {
 
     private void fuzz(Class<?> c, Executable e, Report report) {
         Parameter[] params = e.getParameters();
+        if (params.length > 0 && !params[0].isNamePresent()) {
+            throw new IllegalStateException(signature(e) + " has no parameter names in its class file: compile "
+                    + module + " with javac -parameters (see the parent pom)");
+        }
         boolean instance = e instanceof Method && !Modifier.isStatic(e.getModifiers());
         List<Supplier<Object>> receivers = instance ? samples.candidates(c, 0) : List.of(() -> null);
         if (receivers.isEmpty()) {
