@@ -100,11 +100,17 @@ public final class SiteBuilder {
                         + " generator" + (name.equals("accuracy.html") ? " from the fragments in accuracy/" : ""));
             }
             String fragment = Files.readString(f, StandardCharsets.UTF_8);
+            if (fragment.contains(SourceList.MARKER)) {
+                Path list = source.getParent().resolve("REFERENCES.md");
+                fragment = fragment.replace(SourceList.MARKER,
+                        SourceList.toHtml(Files.readString(list, StandardCharsets.UTF_8)));
+                sources.put(name, "src-site/pages/" + name + " and REFERENCES.md");
+            }
             if (name.equals("benchmarks.html")) {
                 fragment = BenchmarkPage.fill(fragment, root, source.resolve("data").resolve("jmh"));
             }
             pages.add(Page.fromFragment(name, fragment));
-            sources.put(name, "src-site/pages/" + name);
+            sources.putIfAbsent(name, "src-site/pages/" + name);
         }
         pages.add(accuracyPage(source.resolve("accuracy")));
         sources.put("accuracy.html", "src-site/accuracy/*.html");
