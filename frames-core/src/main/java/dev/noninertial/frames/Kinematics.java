@@ -19,7 +19,8 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  *
  * <p>One rule for results: every method checks what it writes and throws
  * {@link #notFinite()} (always the same message) if a value is NaN or infinite, whatever the
- * path that called it. Ranges are not checked here: callers validate them with
+ * path that called it; {@link #compose} leaves the check of the finished placement to its
+ * callers ({@link #checkFinite}), so that a chain is checked once, after its last link. Ranges are not checked here: callers validate them with
  * {@link Arguments#fromIndexSize}. Stateless.
  */
 final class Kinematics {
@@ -295,6 +296,7 @@ final class Kinematics {
      * the same array as {@code a} (or as {@code b} when {@code bo} is 0).
      */
     static void compose(double[] a, double[] b, int bo, double[] out) {
+        // the caller checks the finished result once (checkFinite), after the last link of a chain
         // Two kinds of link are common and cheap to compose: one that only turns (origin at rest at
         // F's origin: G's origin is F's) and one that only moves its origin (identity orientation,
         // no rates: G's axes and rates are F's). Their terms that are exactly zero are skipped;
@@ -358,7 +360,6 @@ final class Kinematics {
             out[21] = alx;
             out[22] = aly;
             out[23] = alz;
-            checkFinite(out, 0, Placement.COMPONENTS);
             return;
         }
         // R_GF w and R_GF al
@@ -384,7 +385,6 @@ final class Kinematics {
         out[21] = ialx + tax - (iwy * twz - iwz * twy);
         out[22] = ialy + tay - (iwz * twx - iwx * twz);
         out[23] = ialz + taz - (iwx * twy - iwy * twx);
-        checkFinite(out, 0, Placement.COMPONENTS);
     }
 
     /**

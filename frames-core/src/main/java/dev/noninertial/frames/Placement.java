@@ -474,6 +474,7 @@ public final class Placement implements Serializable {
         Arguments.nonNull("inner", inner);
         double[] out = new double[COMPONENTS];
         Kinematics.compose(c, inner.c, 0, out);
+        Kinematics.checkFinite(out, 0, COMPONENTS);
         return new Placement(out);
     }
 

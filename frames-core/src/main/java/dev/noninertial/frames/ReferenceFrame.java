@@ -204,6 +204,8 @@ public final class ReferenceFrame implements Serializable {
             links[i].writeLocal(t, work, Placement.COMPONENTS);
             Kinematics.compose(work, work, Placement.COMPONENTS, work);
         }
+        // one check of the finished chain: a link's own primitive at may have written any value
+        Kinematics.checkFinite(work, 0, Placement.COMPONENTS);
     }
 
     /** This frame's motion on primitives; a motion that returns null is reported with the frame's path. */
