@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Locale;
 
@@ -175,13 +177,30 @@ public final class Ellipsoid implements Serializable {
      */
     public Vector3D toCartesian(LatLonHeight position) {
         Arguments.nonNull("position", position);
-        double sLat = Math.sin(position.latitude());
-        double cLat = Math.cos(position.latitude());
+        double[] x = new double[3];
+        toCartesian(position.latitude(), position.longitude(), position.height(), x, 0);
+        return new Vector3D(x[0], x[1], x[2]);
+    }
+
+    /**
+     * Geodetic to Earth-fixed Cartesian, written into an array without allocating: the primitive
+     * form of {@link #toCartesian(LatLonHeight)} (same formula) for hot paths. The arguments are
+     * not checked.
+     *
+     * @param latitude geodetic latitude (rad)
+     * @param longitude longitude (rad)
+     * @param height ellipsoidal height (m)
+     * @param out receives x, y, z (m), ECEF axes
+     * @param offset index of x in {@code out}
+     */
+    public void toCartesian(double latitude, double longitude, double height, double[] out, int offset) {
+        double sLat = Math.sin(latitude);
+        double cLat = Math.cos(latitude);
         double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);
-        double h = position.height();
-        double rp = (n + h) * cLat;
-        return new Vector3D(rp * Math.cos(position.longitude()), rp * Math.sin(position.longitude()),
-                (n * (1.0 - e2) + h) * sLat);
+        double rp = (n + height) * cLat;
+        out[offset] = rp * Math.cos(longitude);
+        out[offset + 1] = rp * Math.sin(longitude);
+        out[offset + 2] = (n * (1.0 - e2) + height) * sLat;
     }
 
     /**
@@ -554,6 +573,28 @@ public final class Ellipsoid implements Serializable {
         return Orientations.fromMatrix(localRows(position.latitude(), position.longitude(), axes));
     }
 
+    /**
+     * Re-resolves a free vector (a wind, a force) given in local-level axes at a geodetic position
+     * in ECEF axes: {@code R^T u}, with R of {@link #localOrientation(LatLonHeight, LocalAxes)}
+     * ({@code v_local = R v_ECEF}). No origin term is involved.
+     *
+     * @param position geodetic position (rad); the height plays no part
+     * @param axes axis order of {@code local}
+     * @param local components in the local-level axes
+     * @return components in ECEF axes
+     * @throws IllegalArgumentException if a component of {@code local} is not finite
+     */
+    public Vector3D localToEarthFixed(LatLonHeight position, LocalAxes axes, Vector3D local) {
+        Arguments.nonNull("position", position);
+        Arguments.finite("local", local);
+        double[][] r = localRows(position.latitude(), position.longitude(), axes);
+        double x = local.getX();
+        double y = local.getY();
+        double z = local.getZ();
+        return new Vector3D(r[0][0] * x + r[1][0] * y + r[2][0] * z, r[0][1] * x + r[1][1] * y + r[2][1] * z,
+                r[0][2] * x + r[1][2] * y + r[2][2] * z);
+    }
+
     /** Rows of the ECEF-to-local matrix at (lat, lon). */
     static double[][] localRows(double lat, double lon, LocalAxes axes) {
         Arguments.nonNull("axes", axes);
@@ -580,6 +621,49 @@ public final class Ellipsoid implements Serializable {
     @Override
     public int hashCode() {
         return 31 * Double.hashCode(a) + Double.hashCode(f);
+    }
+
+    /**
+     * Replaces this ellipsoid in a stream by its defining constants.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        return new Proxy(a, f);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy (it could hold derived constants that disagree
+     * with a and f).
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("an Ellipsoid is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form: semi-major axis and flattening; reading calls {@link #of(double, double)}.
+     *
+     * @param semiMajorAxis a (m)
+     * @param flattening f
+     */
+    private record Proxy(double semiMajorAxis, double flattening) implements Serializable {
+
+        /**
+         * Rebuilds the ellipsoid with the checks of {@link Ellipsoid#of(double, double)}.
+         *
+         * @return the ellipsoid
+         * @throws InvalidObjectException if the constants are refused
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                return of(semiMajorAxis, flattening);
+            } catch (IllegalArgumentException e) {
+                throw Arguments.refusedStream(Ellipsoid.class, e);
+            }
+        }
     }
 
     @Override

@@ -26,9 +26,9 @@ class IdealSensorTest {
 
     /** A body on a rocking, heaving, slewing platform: every rate and acceleration non-zero. */
     private static ReferenceFrame body(ReferenceFrame lab) {
-        ReferenceFrame deck = lab.attach("deck", Motions.compose(
-                Motions.translation(new Vector3D(3, -2, 1), new Vector3D(1.5, 0.4, 0), new Vector3D(0.1, -0.05, 0.02)),
-                Motions.heave(Vector3D.PLUS_K, 0.8, 0.9, 0.3)));
+        ReferenceFrame deck = lab.attach("deck", 
+                Motions.translation(new Vector3D(3, -2, 1), new Vector3D(1.5, 0.4, 0), new Vector3D(0.1, -0.05, 0.02))
+                        .then(Motions.heave(Vector3D.PLUS_K, 0.8, 0.9, 0.3)));
         ReferenceFrame slew = deck.attach("slew", Motions.spinUp(new Vector3D(0.1, 0.2, 1), 0.4, 0.3, 0.05));
         return slew.attach("boom", Motions.oscillation(new Vector3D(1, -0.3, 0.2), 0.25, 1.3, 0.7));
     }
@@ -37,7 +37,7 @@ class IdealSensorTest {
     void atRestInTheLaboratoryTheAccelerometerReadsMinusTheField() {
         // definition f = a - g with a = 0 (at rest in an inertial root): f = -g exactly, w = 0
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        ReferenceFrame s = lab.attach("bench", Motions.fixed(new Vector3D(1, 2, 3),
+        ReferenceFrame s = lab.attach("bench", Motions.stationary(new Vector3D(1, 2, 3),
                 Orientations.aboutAxis(Vector3D.PLUS_I, Math.PI)));
         // the field is uniform in the lab's axes, re-resolved in the bench's
         InertialReading r = IdealSensor.of(s, SpecificForce.fixedInAxesOf(lab, G, s)).readingAt(5.0);
@@ -52,9 +52,9 @@ class IdealSensorTest {
     void inFreeFallTheAccelerometerReadsZero() {
         // physical invariant (equivalence principle): a frame falling with the field reads f = 0
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        ReferenceFrame s = lab.attach("capsule", Motions.compose(
-                Motions.translation(new Vector3D(0, 0, 100), new Vector3D(2, 0, 5), G.scalarMultiply(0.5)),
-                Motions.spin(new Vector3D(1, 1, 0), 0.2, 0.7)));
+        ReferenceFrame s = lab.attach("capsule", 
+                Motions.translation(new Vector3D(0, 0, 100), new Vector3D(2, 0, 5), G.scalarMultiply(0.5))
+                        .then(Motions.spin(new Vector3D(1, 1, 0), 0.2, 0.7)));
         InertialReading r = IdealSensor.of(s, SpecificForce.fixedInAxesOf(lab, G, s)).readingAt(1.7);
         // 1e-14 m/s^2: rounding of the rotation applied to terms of 10 m/s^2
         assertEquals(0.0, r.specificForce().getNorm(), 1e-14);
@@ -72,7 +72,7 @@ class IdealSensorTest {
         ReferenceFrame body = body(lab);
         Vector3D r = new Vector3D(12.0, -3.5, 7.25);
         Rotation mounting = new Rotation(new Vector3D(0.3, -1, 0.5), 0.9, RotationConvention.FRAME_TRANSFORM);
-        ReferenceFrame sensor = body.attach("hook", Motions.fixed(r, mounting));
+        ReferenceFrame sensor = body.attach("hook", Motions.stationary(r, mounting));
         SpecificForce field = SpecificForce.uniform(G);
         // the field is uniform in the lab: re-resolved into each frame's axes
         IdealSensor atCentre = IdealSensor.of(body, SpecificForce.fixedInAxesOf(lab, G, body));
@@ -101,7 +101,7 @@ class IdealSensorTest {
     @Test
     void bulkReadingsAreTheObjectReadings() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        ReferenceFrame sensor = body(lab).attach("imu", Motions.fixed(new Vector3D(0.4, 0.1, -0.2)));
+        ReferenceFrame sensor = body(lab).attach("imu", Motions.stationary(new Vector3D(0.4, 0.1, -0.2)));
         IdealSensor imu = IdealSensor.of(sensor, SpecificForce.fixedInAxesOf(lab, G, sensor));
         double[] times = {0.5, 1.0, 2.25, 9.0, -3.0};
         double[] out = new double[2 + 6 * 4];

@@ -26,12 +26,12 @@ class SensorIncrementsTest {
     /** A sensor on a rocking, slewing, accelerating platform with a lever arm. */
     private static IdealSensor platformSensor() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        ReferenceFrame deck = lab.attach("deck", Motions.compose(
-                Motions.translation(new Vector3D(3, -2, 1), new Vector3D(1.5, 0.4, 0), new Vector3D(0.1, -0.05, 0.02)),
-                Motions.heave(Vector3D.PLUS_K, 0.8, 0.9, 0.3)));
+        ReferenceFrame deck = lab.attach("deck", 
+                Motions.translation(new Vector3D(3, -2, 1), new Vector3D(1.5, 0.4, 0), new Vector3D(0.1, -0.05, 0.02))
+                        .then(Motions.heave(Vector3D.PLUS_K, 0.8, 0.9, 0.3)));
         ReferenceFrame slew = deck.attach("slew", Motions.spinUp(new Vector3D(0.1, 0.2, 1), 0.4, 0.3, 0.05));
         ReferenceFrame boom = slew.attach("boom", Motions.oscillation(new Vector3D(1, -0.3, 0.2), 0.25, 1.3, 0.7));
-        ReferenceFrame imu = boom.attach("imu", Motions.fixed(new Vector3D(8, 1, -2)));
+        ReferenceFrame imu = boom.attach("imu", Motions.stationary(new Vector3D(8, 1, -2)));
         return IdealSensor.of(imu, SpecificForce.fixedInAxesOf(lab, G, imu));
     }
 
