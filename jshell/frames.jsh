@@ -12,3 +12,4 @@ import dev.noninertial.frames.dynamics.*;
 import dev.noninertial.frames.uncertainty.*;
 import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;
+import dev.noninertial.geodesy.air.*;
