@@ -84,7 +84,13 @@ public final class SiteBuilder {
                 throw new IllegalStateException("pages/accuracy.html must not exist: accuracy.html is assembled"
                         + " from the fragments in accuracy/");
             }
-            pages.add(Page.fromFragment(name, Files.readString(f, StandardCharsets.UTF_8)));
+            String fragment = Files.readString(f, StandardCharsets.UTF_8);
+            if (fragment.contains(SourceList.MARKER)) {
+                Path list = source.getParent().resolve("REFERENCES.md");
+                fragment = fragment.replace(SourceList.MARKER,
+                        SourceList.toHtml(Files.readString(list, StandardCharsets.UTF_8)));
+            }
+            pages.add(Page.fromFragment(name, fragment));
         }
         pages.add(accuracyPage(source.resolve("accuracy")));
         if (pages.stream().noneMatch(p -> p.fileName().equals("benchmarks.html"))) {
