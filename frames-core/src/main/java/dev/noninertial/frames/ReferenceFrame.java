@@ -50,7 +50,7 @@ public final class ReferenceFrame implements Serializable {
      * @return the root
      */
     public static ReferenceFrame inertialRoot(String name) {
-        return new ReferenceFrame(checkName(name), null, null);
+        return new ReferenceFrame(checkName("name", name), null, null);
     }
 
     /**
@@ -62,13 +62,13 @@ public final class ReferenceFrame implements Serializable {
      */
     public ReferenceFrame attach(String childName, Motion childMotion) {
         Arguments.nonNull("childMotion", childMotion);
-        return new ReferenceFrame(checkName(childName), this, childMotion);
+        return new ReferenceFrame(checkName("childName", childName), this, childMotion);
     }
 
-    private static String checkName(String name) {
-        Arguments.nonNull("name", name);
+    private static String checkName(String argument, String name) {
+        Arguments.nonNull(argument, name);
         if (name.isBlank()) {
-            throw new IllegalArgumentException("name must not be blank");
+            throw new IllegalArgumentException(argument + " must not be blank");
         }
         return name;
     }
@@ -291,6 +291,8 @@ public final class ReferenceFrame implements Serializable {
      * @return the framed state
      */
     public FramedState stateAt(double t, PointState stateInThisFrame) {
+        Arguments.finite("t", t);
+        Arguments.nonNull("stateInThisFrame", stateInThisFrame);
         return new FramedState(this, t, stateInThisFrame);
     }
 

@@ -38,6 +38,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion stationary(Vector3D offset) {
+        Arguments.finite("offset", offset);
         return stationary(offset, Rotation.IDENTITY);
     }
 
@@ -49,6 +50,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion stationary(Vector3D offset, Rotation orientation) {
+        Arguments.finite("offset", offset);
         return new Fixed(Placement.stationary(offset, orientation));
     }
 
@@ -61,6 +63,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion spin(Vector3D axis, double angleAtZero, double rate) {
+        Arguments.finite("rate", rate);
         return spinUp(axis, angleAtZero, rate, 0.0);
     }
 
