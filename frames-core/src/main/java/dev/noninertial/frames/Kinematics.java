@@ -78,34 +78,34 @@ final class Kinematics {
     /**
      * States seen in F to B: {@code r_B = o + R^T r}, {@code v_B = o' + R^T (v + w x r)},
      * {@code a_B = o'' + R^T (a + al x r + 2 w x v + w x (w x r))}, for {@code count} states,
-     * the placement at {@code p[0, 24)}. Source and target may be the same range.
+     * the placement at {@code p[po, po + 24)}. Source and target may be the same range.
      */
-    static void toBase(double[] p, double[] source, int sourceOffset, double[] target, int targetOffset,
+    static void toBase(double[] p, int po, double[] source, int sourceOffset, double[] target, int targetOffset,
                        int count) {
-        double ox = p[0];
-        double oy = p[1];
-        double oz = p[2];
-        double ovx = p[3];
-        double ovy = p[4];
-        double ovz = p[5];
-        double oax = p[6];
-        double oay = p[7];
-        double oaz = p[8];
-        double r00 = p[9];
-        double r01 = p[10];
-        double r02 = p[11];
-        double r10 = p[12];
-        double r11 = p[13];
-        double r12 = p[14];
-        double r20 = p[15];
-        double r21 = p[16];
-        double r22 = p[17];
-        double wx = p[18];
-        double wy = p[19];
-        double wz = p[20];
-        double alx = p[21];
-        double aly = p[22];
-        double alz = p[23];
+        double ox = p[po];
+        double oy = p[po + 1];
+        double oz = p[po + 2];
+        double ovx = p[po + 3];
+        double ovy = p[po + 4];
+        double ovz = p[po + 5];
+        double oax = p[po + 6];
+        double oay = p[po + 7];
+        double oaz = p[po + 8];
+        double r00 = p[po + 9];
+        double r01 = p[po + 10];
+        double r02 = p[po + 11];
+        double r10 = p[po + 12];
+        double r11 = p[po + 13];
+        double r12 = p[po + 14];
+        double r20 = p[po + 15];
+        double r21 = p[po + 16];
+        double r22 = p[po + 17];
+        double wx = p[po + 18];
+        double wy = p[po + 19];
+        double wz = p[po + 20];
+        double alx = p[po + 21];
+        double aly = p[po + 22];
+        double alz = p[po + 23];
         // both indices advance by a stride instead of being recomputed as offset + k * 9: with
         // the recomputed pair the bulk loop measured 1.28x the hand-inlined primitive loop, with
         // strides 0.91x to 1.00x (frames-bench PairedRatios, 2026-12-02)
@@ -149,38 +149,38 @@ final class Kinematics {
     /**
      * States seen in B to F: {@code r = R (r_B - o)}, {@code v = R (v_B - o') - w x r},
      * {@code a = R (a_B - o'') - al x r - 2 w x v - w x (w x r)}, for {@code count} states, the
-     * placement at {@code p[0, 24)}. Source and target may be the same range. A loop of its own,
+     * placement at {@code p[po, po + 24)}. Source and target may be the same range. A loop of its own,
      * not a branch of {@link #toBase}'s: one method for both directions measured 1.8x to 4.2x the
      * primitive baseline on the single-state object path, against 1.4x to 1.7x apart
      * (frames-bench PairedRatios, 9 rounds, 2026-12-02 16:56-17:00 UTC, 1-minute load 9 to 17).
      */
-    static void fromBase(double[] p, double[] source, int sourceOffset, double[] target,
+    static void fromBase(double[] p, int po, double[] source, int sourceOffset, double[] target,
                          int targetOffset, int count) {
         // the same 24 reads as toBase: the placement into registers, once per call
-        double ox = p[0];
-        double oy = p[1];
-        double oz = p[2];
-        double ovx = p[3];
-        double ovy = p[4];
-        double ovz = p[5];
-        double oax = p[6];
-        double oay = p[7];
-        double oaz = p[8];
-        double r00 = p[9];
-        double r01 = p[10];
-        double r02 = p[11];
-        double r10 = p[12];
-        double r11 = p[13];
-        double r12 = p[14];
-        double r20 = p[15];
-        double r21 = p[16];
-        double r22 = p[17];
-        double wx = p[18];
-        double wy = p[19];
-        double wz = p[20];
-        double alx = p[21];
-        double aly = p[22];
-        double alz = p[23];
+        double ox = p[po];
+        double oy = p[po + 1];
+        double oz = p[po + 2];
+        double ovx = p[po + 3];
+        double ovy = p[po + 4];
+        double ovz = p[po + 5];
+        double oax = p[po + 6];
+        double oay = p[po + 7];
+        double oaz = p[po + 8];
+        double r00 = p[po + 9];
+        double r01 = p[po + 10];
+        double r02 = p[po + 11];
+        double r10 = p[po + 12];
+        double r11 = p[po + 13];
+        double r12 = p[po + 14];
+        double r20 = p[po + 15];
+        double r21 = p[po + 16];
+        double r22 = p[po + 17];
+        double wx = p[po + 18];
+        double wy = p[po + 19];
+        double wz = p[po + 20];
+        double alx = p[po + 21];
+        double aly = p[po + 22];
+        double alz = p[po + 23];
         int end = sourceOffset + count * PointState.COMPONENTS;
         for (int i = sourceOffset, j = targetOffset; i < end; i += PointState.COMPONENTS,
                 j += PointState.COMPONENTS) {
@@ -288,14 +288,14 @@ final class Kinematics {
     }
 
     /**
-     * Composition: {@code a[0, 24)} is F in B, {@code b[bo, bo + 24)} is G in F, {@code out[0, 24)}
-     * receives G in B:
+     * Composition: {@code a[ao, ao + 24)} is F in B, {@code b[bo, bo + 24)} is G in F,
+     * {@code out[oo, oo + 24)} receives G in B:
      * {@code R_GB = R_GF R_FB}, {@code w_GB = w_GF + R_GF w_FB},
      * {@code al_GB = al_GF + R_GF al_FB - w_GF x (R_GF w_FB)}, and G's origin is the point
      * (o, o', o'') of {@code b}, seen in F, converted to B by {@link #toBase}. {@code out} may be
-     * the same array as {@code a} (or as {@code b} when {@code bo} is 0).
+     * the same range as {@code a} or {@code b}.
      */
-    static void compose(double[] a, double[] b, int bo, double[] out) {
+    static void compose(double[] a, int ao, double[] b, int bo, double[] out, int oo) {
         // the caller checks the finished result once (checkFinite), after the last link of a chain
         // Two kinds of link are common and cheap to compose: one that only turns (origin at rest at
         // F's origin: G's origin is F's) and one that only moves its origin (identity orientation,
@@ -308,21 +308,21 @@ final class Kinematics {
                 && b[bo + 18] == 0 && b[bo + 19] == 0 && b[bo + 20] == 0 && b[bo + 21] == 0 && b[bo + 22] == 0
                 && b[bo + 23] == 0;
         // the orientation part reads both inputs before the origin part may overwrite a range
-        double r00 = a[9];
-        double r01 = a[10];
-        double r02 = a[11];
-        double r10 = a[12];
-        double r11 = a[13];
-        double r12 = a[14];
-        double r20 = a[15];
-        double r21 = a[16];
-        double r22 = a[17];
-        double wx = a[18];
-        double wy = a[19];
-        double wz = a[20];
-        double alx = a[21];
-        double aly = a[22];
-        double alz = a[23];
+        double r00 = a[ao + 9];
+        double r01 = a[ao + 10];
+        double r02 = a[ao + 11];
+        double r10 = a[ao + 12];
+        double r11 = a[ao + 13];
+        double r12 = a[ao + 14];
+        double r20 = a[ao + 15];
+        double r21 = a[ao + 16];
+        double r22 = a[ao + 17];
+        double wx = a[ao + 18];
+        double wy = a[ao + 19];
+        double wz = a[ao + 20];
+        double alx = a[ao + 21];
+        double aly = a[ao + 22];
+        double alz = a[ao + 23];
         double ir00 = b[bo + 9];
         double ir01 = b[bo + 10];
         double ir02 = b[bo + 11];
@@ -339,27 +339,27 @@ final class Kinematics {
         double ialy = b[bo + 22];
         double ialz = b[bo + 23];
         if (turnOnly) {
-            System.arraycopy(a, 0, out, 0, MATRIX);
+            System.arraycopy(a, ao, out, oo, MATRIX);
         } else {
             // the inner origin's (o, o', o'') has the layout of a point state seen in F
-            toBase(a, b, bo, out, 0, 1);
+            toBase(a, ao, b, bo, out, oo, 1);
         }
         if (moveOnly) {
-            out[9] = r00;
-            out[10] = r01;
-            out[11] = r02;
-            out[12] = r10;
-            out[13] = r11;
-            out[14] = r12;
-            out[15] = r20;
-            out[16] = r21;
-            out[17] = r22;
-            out[18] = wx;
-            out[19] = wy;
-            out[20] = wz;
-            out[21] = alx;
-            out[22] = aly;
-            out[23] = alz;
+            out[oo + 9] = r00;
+            out[oo + 10] = r01;
+            out[oo + 11] = r02;
+            out[oo + 12] = r10;
+            out[oo + 13] = r11;
+            out[oo + 14] = r12;
+            out[oo + 15] = r20;
+            out[oo + 16] = r21;
+            out[oo + 17] = r22;
+            out[oo + 18] = wx;
+            out[oo + 19] = wy;
+            out[oo + 20] = wz;
+            out[oo + 21] = alx;
+            out[oo + 22] = aly;
+            out[oo + 23] = alz;
             return;
         }
         // R_GF w and R_GF al
@@ -370,21 +370,21 @@ final class Kinematics {
         double tay = ir10 * alx + ir11 * aly + ir12 * alz;
         double taz = ir20 * alx + ir21 * aly + ir22 * alz;
         // R_GB = R_GF R_FB
-        out[9] = ir00 * r00 + ir01 * r10 + ir02 * r20;
-        out[10] = ir00 * r01 + ir01 * r11 + ir02 * r21;
-        out[11] = ir00 * r02 + ir01 * r12 + ir02 * r22;
-        out[12] = ir10 * r00 + ir11 * r10 + ir12 * r20;
-        out[13] = ir10 * r01 + ir11 * r11 + ir12 * r21;
-        out[14] = ir10 * r02 + ir11 * r12 + ir12 * r22;
-        out[15] = ir20 * r00 + ir21 * r10 + ir22 * r20;
-        out[16] = ir20 * r01 + ir21 * r11 + ir22 * r21;
-        out[17] = ir20 * r02 + ir21 * r12 + ir22 * r22;
-        out[18] = iwx + twx;
-        out[19] = iwy + twy;
-        out[20] = iwz + twz;
-        out[21] = ialx + tax - (iwy * twz - iwz * twy);
-        out[22] = ialy + tay - (iwz * twx - iwx * twz);
-        out[23] = ialz + taz - (iwx * twy - iwy * twx);
+        out[oo + 9] = ir00 * r00 + ir01 * r10 + ir02 * r20;
+        out[oo + 10] = ir00 * r01 + ir01 * r11 + ir02 * r21;
+        out[oo + 11] = ir00 * r02 + ir01 * r12 + ir02 * r22;
+        out[oo + 12] = ir10 * r00 + ir11 * r10 + ir12 * r20;
+        out[oo + 13] = ir10 * r01 + ir11 * r11 + ir12 * r21;
+        out[oo + 14] = ir10 * r02 + ir11 * r12 + ir12 * r22;
+        out[oo + 15] = ir20 * r00 + ir21 * r10 + ir22 * r20;
+        out[oo + 16] = ir20 * r01 + ir21 * r11 + ir22 * r21;
+        out[oo + 17] = ir20 * r02 + ir21 * r12 + ir22 * r22;
+        out[oo + 18] = iwx + twx;
+        out[oo + 19] = iwy + twy;
+        out[oo + 20] = iwz + twz;
+        out[oo + 21] = ialx + tax - (iwy * twz - iwz * twy);
+        out[oo + 22] = ialy + tay - (iwz * twx - iwx * twz);
+        out[oo + 23] = ialz + taz - (iwx * twy - iwy * twx);
     }
 
     /**
@@ -395,7 +395,7 @@ final class Kinematics {
     static void invert(double[] p, double[] out, int oo) {
         // a zero state: B's origin at rest, in B (out's first 9 doubles serve as the source)
         java.util.Arrays.fill(out, oo, oo + MATRIX, 0.0);
-        fromBase(p, out, oo, out, oo, 1);
+        fromBase(p, 0, out, oo, out, oo, 1);
         // R' = R^T; w' = -R^T w and al' = -R^T al: column i of R dotted with the rate
         for (int i = 0; i < 3; i++) {
             for (int j = 0; j < 3; j++) {

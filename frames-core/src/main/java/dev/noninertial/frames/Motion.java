@@ -105,7 +105,7 @@ public interface Motion {
         double[] p = new double[Placement.COMPONENTS];
         for (int k = 0; k < count; k++) {
             at(times[timeOffset + k], p, 0);
-            Kinematics.toBase(p, source, sourceOffset + k * PointState.COMPONENTS,
+            Kinematics.toBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
                     target, targetOffset + k * PointState.COMPONENTS, 1);
         }
     }
@@ -134,7 +134,7 @@ public interface Motion {
         double[] p = new double[Placement.COMPONENTS];
         for (int k = 0; k < count; k++) {
             at(times[timeOffset + k], p, 0);
-            Kinematics.fromBase(p, source, sourceOffset + k * PointState.COMPONENTS,
+            Kinematics.fromBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
                     target, targetOffset + k * PointState.COMPONENTS, 1);
         }
     }

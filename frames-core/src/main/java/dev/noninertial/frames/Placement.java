@@ -473,7 +473,7 @@ public final class Placement implements Serializable {
     public Placement then(Placement inner) {
         Arguments.nonNull("inner", inner);
         double[] out = new double[COMPONENTS];
-        Kinematics.compose(c, inner.c, 0, out);
+        Kinematics.compose(c, 0, inner.c, 0, out, 0);
         Kinematics.checkFinite(out, 0, COMPONENTS);
         return new Placement(out);
     }
@@ -502,7 +502,7 @@ public final class Placement implements Serializable {
     public PointState toBase(PointState stateInFrame) {
         Arguments.nonNull("stateInFrame", stateInFrame);
         double[] out = new double[PointState.COMPONENTS];
-        Kinematics.toBase(c, stateInFrame.components(), 0, out, 0, 1);
+        Kinematics.toBase(c, 0, stateInFrame.components(), 0, out, 0, 1);
         return PointState.wrap(out);
     }
 
@@ -516,7 +516,7 @@ public final class Placement implements Serializable {
     public PointState fromBase(PointState stateInBase) {
         Arguments.nonNull("stateInBase", stateInBase);
         double[] out = new double[PointState.COMPONENTS];
-        Kinematics.fromBase(c, stateInBase.components(), 0, out, 0, 1);
+        Kinematics.fromBase(c, 0, stateInBase.components(), 0, out, 0, 1);
         return PointState.wrap(out);
     }
 
@@ -536,7 +536,7 @@ public final class Placement implements Serializable {
      */
     public void toBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
-        Kinematics.toBase(c, source, sourceOffset, target, targetOffset, count);
+        Kinematics.toBase(c, 0, source, sourceOffset, target, targetOffset, count);
     }
 
     /**
@@ -554,7 +554,7 @@ public final class Placement implements Serializable {
      */
     public void fromBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
-        Kinematics.fromBase(c, source, sourceOffset, target, targetOffset, count);
+        Kinematics.fromBase(c, 0, source, sourceOffset, target, targetOffset, count);
     }
 
     /** Range checks of every bulk conversion: both ranges fit, and they do not overlap partly. */

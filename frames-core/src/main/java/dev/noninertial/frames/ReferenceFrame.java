@@ -220,6 +220,7 @@ public final class ReferenceFrame implements Serializable {
             linkBelow(i).writeLocal(t, work, offset + Placement.COMPONENTS);
             Kinematics.compose(work, offset, work, offset + Placement.COMPONENTS, work, offset);
         }
+        Kinematics.checkFinite(work, offset, Placement.COMPONENTS);
     }
 
     /** The frame {@code steps} links up from this one. */
@@ -269,7 +270,7 @@ public final class ReferenceFrame implements Serializable {
         links[0].writeLocal(t, work, 0);
         for (int i = 1; i < links.length; i++) {
             links[i].writeLocal(t, work, Placement.COMPONENTS);
-            Kinematics.compose(work, work, Placement.COMPONENTS, work);
+            Kinematics.compose(work, 0, work, Placement.COMPONENTS, work, 0);
         }
         // one check of the finished chain: a link's own primitive at may have written any value
         Kinematics.checkFinite(work, 0, Placement.COMPONENTS);
