@@ -10,4 +10,5 @@ import dev.noninertial.frames.*;
 import dev.noninertial.frames.motion.*;
 import dev.noninertial.frames.dynamics.*;
 import dev.noninertial.frames.uncertainty.*;
+import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;

@@ -4,5 +4,5 @@ var site = LatLonHeight.ofDegrees(57.62, 11.31, 12.0);
 var enu = earth.localLevel(site, LocalAxes.ENU);
 System.out.println(enu);
 System.out.println("normal gravity " + EarthModel.WGS84.normalGravity(site) + " m/s^2");
-System.out.println(enu.state(0.0, PointState.of(Vector3D.ZERO, new Vector3D(0, 100, 0))).fictitious());
+System.out.println(enu.stateAt(0.0, PointState.of(Vector3D.ZERO, new Vector3D(0, 100, 0))).fictitious());
 /exit

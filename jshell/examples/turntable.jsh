@@ -4,5 +4,5 @@ var table = hall.attach("turntable", Motions.spinUp(Vector3D.PLUS_K, 0.0, 0.5, 0
 var cup = PointState.of(new Vector3D(1.2, 0, 0), new Vector3D(0, 0.3, 0));
 var terms = table.placementIn(hall, 4.0).fictitious(cup);
 System.out.println(terms);
-System.out.println(table.state(4.0, cup).in(hall));
+System.out.println(table.stateAt(4.0, cup).in(hall));
 /exit

@@ -45,7 +45,7 @@ public final class DynamicsBaselines {
         ReferenceFrame carousel = yard.attach("carousel", Motions.spinUp(Vector3D.PLUS_K, 0.0, RATE0, SPIN_UP));
         Vector3D gravity = new Vector3D(0, 0, -G);
         SpecificForce weight = (time, state) -> gravity;
-        return TrajectorySolver.in(carousel).withForce(weight);
+        return TrajectorySolver.of(carousel).plusForce(weight);
     }
 
     /** @return the start state: 10 m off the axis, thrown upward and sideways */

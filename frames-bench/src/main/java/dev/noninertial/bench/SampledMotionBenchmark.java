@@ -50,10 +50,9 @@ public class SampledMotionBenchmark {
     private static final double RATE_HZ = 100.0;
     private static final int QUERIES = 1 << 16;
 
-    private static final Motion ANALYTIC = Motions.compose(
-            Motions.spinUp(Vector3D.PLUS_K, 0.2, 0.05, 1e-6),
-            Motions.oscillation(Vector3D.PLUS_I, 0.12, 2 * Math.PI / 7, 0.3),
-            Motions.heave(Vector3D.PLUS_K, 0.8, 2 * Math.PI / 9, 0.1));
+    private static final Motion ANALYTIC = Motions.spinUp(Vector3D.PLUS_K, 0.2, 0.05, 1e-6)
+            .then(Motions.oscillation(Vector3D.PLUS_I, 0.12, 2 * Math.PI / 7, 0.3))
+            .then(Motions.heave(Vector3D.PLUS_K, 0.8, 2 * Math.PI / 9, 0.1));
 
     private double[] times;
     private double[] positions;
@@ -73,7 +72,7 @@ public class SampledMotionBenchmark {
         Random random = new Random(20260101L);
         queryTimes = new double[QUERIES];
         for (int k = 0; k < QUERIES; k++) {
-            queryTimes[k] = random.nextDouble() * motion.end();
+            queryTimes[k] = random.nextDouble() * motion.endTime();
         }
     }
 
@@ -136,8 +135,8 @@ public class SampledMotionBenchmark {
     /** A time stepping forward by 13.7 ms through the record, as a simulation loop would query. */
     private double nextSequentialTime() {
         sequentialTime += 0.0137;
-        if (sequentialTime > motion.end()) {
-            sequentialTime -= motion.end();
+        if (sequentialTime > motion.endTime()) {
+            sequentialTime -= motion.endTime();
         }
         return sequentialTime;
     }

@@ -52,7 +52,7 @@ class GeodesyDynamicsBaselineTest {
         Trajectory whole = DynamicsBaselines.solver().solve(DynamicsBaselines.start(), 0.0, DynamicsBaselines.SPAN);
         double[] a = DynamicsBaselines.integrate(false, DynamicsBaselines.SPAN);
         double[] b = DynamicsBaselines.integrate(true, DynamicsBaselines.SPAN);
-        Vector3D end = whole.end().state().position();
+        Vector3D end = whole.finalState().state().position();
         // same integrator, tolerances and equations: the end points agree far inside the
         // integration error (position tolerance 1e-6 m per step; 1e-3 m over the whole run)
         assertEquals(end.getX(), a[0], 1e-3);

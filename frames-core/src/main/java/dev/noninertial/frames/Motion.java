@@ -46,9 +46,10 @@ public interface Motion {
      * and {@link #fromBase(double[], int, double[], int, double[], int, int)} call once per state.
      * The default implementation calls {@link #at(double)} and copies the result, so it
      * <em>allocates one {@link Placement} per call</em> (the JIT's escape analysis may remove that
-     * allocation once the code is hot, but nothing guarantees it). Every motion made by
-     * {@code dev.noninertial.frames.motion.Motions} except {@code compose} overrides it and
-     * allocates nothing; a user motion on a hot path should override it too, writing exactly the
+     * allocation once the code is hot, but nothing guarantees it). Every motion made by a factory of
+     * {@code dev.noninertial.frames.motion.Motions} overrides it and allocates nothing (a test
+     * enforces it); a stack made by {@link #then(Motion)} uses this default. A user motion on a hot
+     * path should override it too, writing exactly the
      * values {@link #at(double)} would return.
      *
      * @param t time (s from the user's epoch)
@@ -77,8 +78,8 @@ public interface Motion {
      * sample would dominate the cost. It allocates at most one scratch array of
      * {@link Placement#COMPONENTS} doubles per call and nothing per state, provided
      * {@link #at(double, double[], int)} allocates nothing (true for the motions of
-     * {@code Motions} except {@code compose}; the default for a user lambda allocates one
-     * placement per state). For one state, or states already held as objects, use
+     * the factories of {@code Motions}; the default, used by a stack made by {@link #then(Motion)} and
+     * by a user lambda, allocates one placement per state). For one state, or states already held as objects, use
      * {@link Placement#toBase(PointState)}; for many states at one time, use
      * {@link Placement#toBase(double[], int, double[], int, int)}.
      *

@@ -21,8 +21,13 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  */
 public final class Orientations {
 
-    /** Largest allowed |q| - 1 for a quaternion said to be unit. */
-    public static final double QUATERNION_TOLERANCE = 1e-6;
+    /**
+     * Largest allowed {@code ||q| - 1|} for a quaternion said to be unit: the one tolerance of the
+     * library for unit quaternions, used by every factory that takes one (here,
+     * {@code SampledMotion}); an accepted quaternion is normalised before use.
+     * It admits quaternions written with 7 significant digits, as in logs.
+     */
+    public static final double UNIT_QUATERNION_TOLERANCE = 1e-6;
 
     /** Largest allowed element of M M^T - I for a matrix said to be orthonormal. */
     public static final double MATRIX_TOLERANCE = 1e-9;
@@ -60,7 +65,7 @@ public final class Orientations {
      * @param q3 vector part z
      * @return orientation mapping base components to frame components
      * @throws IllegalArgumentException if a part is not finite or the norm differs from 1 by more
-     *         than {@link #QUATERNION_TOLERANCE}
+     *         than {@link #UNIT_QUATERNION_TOLERANCE}
      */
     public static Rotation fromQuaternion(double q0, double q1, double q2, double q3) {
         Arguments.finite("q0", q0);
@@ -68,8 +73,8 @@ public final class Orientations {
         Arguments.finite("q2", q2);
         Arguments.finite("q3", q3);
         double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-        if (!(Math.abs(norm - 1.0) <= QUATERNION_TOLERANCE)) {
-            throw new IllegalArgumentException("quaternion must be unit (|norm - 1| <= " + QUATERNION_TOLERANCE
+        if (!(Math.abs(norm - 1.0) <= UNIT_QUATERNION_TOLERANCE)) {
+            throw new IllegalArgumentException("quaternion must be unit (|norm - 1| <= " + UNIT_QUATERNION_TOLERANCE
                     + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3 + ") with norm " + norm);
         }
         return new Rotation(q0, q1, q2, q3, true);

@@ -176,7 +176,7 @@ public final class Placement implements Serializable {
      * @param orientation R, whose {@code applyTo} maps B components to F components
      * @return the placement
      */
-    public static Placement fixed(Vector3D origin, Rotation orientation) {
+    public static Placement stationary(Vector3D origin, Rotation orientation) {
         return of(origin, Vector3D.ZERO, Vector3D.ZERO, orientation, Vector3D.ZERO, Vector3D.ZERO);
     }
 
@@ -328,7 +328,7 @@ public final class Placement implements Serializable {
      * @param angularAcceleration al in F (rad/s^2)
      * @return the copy
      */
-    public Placement withRotation(Rotation orientation, Vector3D angularVelocity, Vector3D angularAcceleration) {
+    public Placement withOrientation(Rotation orientation, Vector3D angularVelocity, Vector3D angularAcceleration) {
         return of(origin(), originVelocity(), originAcceleration(), orientation, angularVelocity,
                 angularAcceleration);
     }

@@ -60,7 +60,7 @@ public final class PointState implements Serializable {
      * @param position position (m)
      * @return the state
      */
-    public static PointState atRest(Vector3D position) {
+    public static PointState stationary(Vector3D position) {
         return of(position, Vector3D.ZERO, Vector3D.ZERO);
     }
 

@@ -186,7 +186,7 @@ public final class ReferenceFrame implements Serializable {
      * @param stateInThisFrame state seen in and resolved in this frame
      * @return the framed state
      */
-    public FramedState state(double t, PointState stateInThisFrame) {
+    public FramedState stateAt(double t, PointState stateInThisFrame) {
         return new FramedState(this, t, stateInThisFrame);
     }
 

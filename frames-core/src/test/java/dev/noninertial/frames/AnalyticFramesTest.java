@@ -26,7 +26,7 @@ class AnalyticFramesTest {
         double t = 1.75;
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         ReferenceFrame disk = lab.attach("disk", Motions.spinUp(Vector3D.PLUS_K, 0.2, w0, al));
-        FictitiousAccelerations f = disk.placementIn(lab, t).fictitious(PointState.atRest(new Vector3D(r, 0, 0)));
+        FictitiousAccelerations f = disk.placementIn(lab, t).fictitious(PointState.stationary(new Vector3D(r, 0, 0)));
         double w = w0 + al * t;
         assertEquals(-al * r, f.euler().getY(), RELATIVE * al * r);
         assertEquals(0.0, f.euler().getX(), 0.0);
@@ -61,7 +61,7 @@ class AnalyticFramesTest {
         assertEquals(0.0, f.frameAcceleration().add(accel).getNorm(), RELATIVE * accel.getNorm());
         assertEquals(0.0, f.euler().getNorm() + f.coriolis().getNorm() + f.centrifugal().getNorm(), 0.0);
         // converting a point at rest in the lab gives acceleration -A in the cabin
-        PointState inCabin = cabin.placementIn(lab, 7.0).fromBase(PointState.atRest(new Vector3D(9, 9, 9)));
+        PointState inCabin = cabin.placementIn(lab, 7.0).fromBase(PointState.stationary(new Vector3D(9, 9, 9)));
         assertEquals(0.0, inCabin.acceleration().add(accel).getNorm(), RELATIVE * accel.getNorm());
     }
 
@@ -73,7 +73,7 @@ class AnalyticFramesTest {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         ReferenceFrame disk = lab.attach("disk", Motions.spin(Vector3D.PLUS_K, 0.0, w));
         double t = 0.3;
-        PointState inLab = disk.state(t, PointState.atRest(new Vector3D(r, 0, 0))).in(lab).state();
+        PointState inLab = disk.stateAt(t, PointState.stationary(new Vector3D(r, 0, 0))).in(lab).state();
         assertEquals(r, inLab.position().getNorm(), RELATIVE * r);
         assertEquals(w * r, inLab.velocity().getNorm(), RELATIVE * w * r);
         assertEquals(-w * w * r, inLab.acceleration().dotProduct(inLab.position().normalize()), RELATIVE * w * w * r);

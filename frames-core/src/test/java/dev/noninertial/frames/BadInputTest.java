@@ -64,18 +64,18 @@ class BadInputTest {
 
     @Test
     void framesWithNoCommonRootAreRefusedNamingBoth() {
-        ReferenceFrame a = ReferenceFrame.inertialRoot("alpha").attach("deck", Motions.fixed(Vector3D.PLUS_I));
+        ReferenceFrame a = ReferenceFrame.inertialRoot("alpha").attach("deck", Motions.stationary(Vector3D.PLUS_I));
         ReferenceFrame b = ReferenceFrame.inertialRoot("beta");
         refused(IllegalArgumentException.class, "alpha/deck", () -> a.placementIn(b, 0));
         refused(IllegalArgumentException.class, "beta", () -> a.placementIn(b, 0));
-        FramedState s = a.state(0, PointState.atRest(Vector3D.ZERO));
+        FramedState s = a.stateAt(0, PointState.stationary(Vector3D.ZERO));
         refused(IllegalArgumentException.class, "share no root", () -> s.in(b));
     }
 
     @Test
     void motionReturningNullIsReportedWithTheFramePath() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        ReferenceFrame broken = lab.attach("deck", Motions.fixed(Vector3D.PLUS_I)).attach("mast", t -> null);
+        ReferenceFrame broken = lab.attach("deck", Motions.stationary(Vector3D.PLUS_I)).attach("mast", t -> null);
         refused(IllegalStateException.class, "lab/deck/mast", () -> broken.placementIn(lab, 1.0));
         refused(IllegalStateException.class, "lab/deck/mast", () -> broken.placementIn(broken.parent().get(), 1.0));
     }
@@ -88,9 +88,9 @@ class BadInputTest {
         refused(NullPointerException.class, "base", () -> lab.placementIn(null, 0));
         refused(NullPointerException.class, "stateInFrame", () -> Placement.identity().toBase((PointState) null));
         refused(NullPointerException.class, "inner", () -> Placement.identity().then(null));
-        refused(NullPointerException.class, "target", () -> lab.state(0, PointState.atRest(Vector3D.ZERO)).in(null));
-        refused(NullPointerException.class, "position", () -> PointState.atRest(null));
-        refused(IllegalArgumentException.class, "blank", () -> lab.attach(" ", Motions.fixed(Vector3D.ZERO)));
+        refused(NullPointerException.class, "target", () -> lab.stateAt(0, PointState.stationary(Vector3D.ZERO)).in(null));
+        refused(NullPointerException.class, "position", () -> PointState.stationary(null));
+        refused(IllegalArgumentException.class, "blank", () -> lab.attach(" ", Motions.stationary(Vector3D.ZERO)));
     }
 
     @Test

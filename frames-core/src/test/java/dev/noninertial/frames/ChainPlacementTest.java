@@ -24,8 +24,8 @@ class ChainPlacementTest {
             Motions.heave(new Vector3D(0, 0.1, 1), 1.5, 0.6, 0.3),
             t -> Motions.oscillation(Vector3D.PLUS_I, 0.12, 0.8, 0.1).at(t), // user lambda: default path
             Motions.spinUp(new Vector3D(0.1, -0.2, 1), 0.0, 1.1, 0.02),
-            Motions.compose(Motions.translation(new Vector3D(2, -1, 0.5), new Vector3D(0.3, 0.1, 0)),
-                    Motions.fixed(Vector3D.ZERO, new Rotation(Vector3D.PLUS_J, 0.3, RotationConvention.FRAME_TRANSFORM))),
+            Motions.translation(new Vector3D(2, -1, 0.5), new Vector3D(0.3, 0.1, 0))
+                    .then(Motions.stationary(Vector3D.ZERO, new Rotation(Vector3D.PLUS_J, 0.3, RotationConvention.FRAME_TRANSFORM))),
             Motions.oscillation(new Vector3D(0, 1, 0.1), 0.3, 1.7, 0.0),
         };
     }

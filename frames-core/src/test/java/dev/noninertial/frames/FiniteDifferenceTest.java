@@ -86,7 +86,7 @@ class FiniteDifferenceTest {
             Vector3D local = s.position().add(dt, s.velocity()).add(0.5 * dt * dt, s.acceleration());
             r[k + 2] = leaf.placementIn(base, t + dt).positionToBase(local);
         }
-        PointState converted = leaf.state(t, s).in(base).state();
+        PointState converted = leaf.stateAt(t, s).in(base).state();
         assertClose("converted velocity", firstDerivative(r), converted.velocity());
         assertClose("converted acceleration", secondDerivative(r), converted.acceleration());
     }

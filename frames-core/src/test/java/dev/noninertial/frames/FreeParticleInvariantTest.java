@@ -21,10 +21,9 @@ class FreeParticleInvariantTest {
     @Test
     void freeParticleAccelerationInMovingFrameIsTheSumOfFictitiousTerms() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        Motion carrier = Motions.compose(
-                Motions.translation(new Vector3D(100, -20, 5), new Vector3D(12, 3, 0), new Vector3D(0.5, -0.2, 0.1)),
-                Motions.spinUp(new Vector3D(0.2, -0.1, 1), 0.3, 0.4, 0.15),
-                Motions.oscillation(Vector3D.PLUS_I, 0.2, 1.1, 0.4));
+        Motion carrier = Motions.translation(new Vector3D(100, -20, 5), new Vector3D(12, 3, 0), new Vector3D(0.5, -0.2, 0.1))
+                .then(Motions.spinUp(new Vector3D(0.2, -0.1, 1), 0.3, 0.4, 0.15))
+                .then(Motions.oscillation(Vector3D.PLUS_I, 0.2, 1.1, 0.4));
         ReferenceFrame platform = lab.attach("platform", carrier);
         Vector3D r0 = new Vector3D(40, 70, -10);
         Vector3D v0 = new Vector3D(-8, 2.5, 1);
@@ -35,7 +34,7 @@ class FreeParticleInvariantTest {
         for (int i = 0; i < 200; i++) {
             double t = 30 * rng.nextDouble();
             PointState inLab = PointState.of(r0.add(t, v0), v0); // uniform motion, zero acceleration
-            FramedState seen = lab.state(t, inLab).in(platform);
+            FramedState seen = lab.stateAt(t, inLab).in(platform);
             FictitiousAccelerations f = seen.fictitious();
             Vector3D total = f.total();
             // 1) the converted acceleration is the fictitious sum (a_B = 0)

@@ -22,13 +22,13 @@ class MotionBulkConversionTest {
 
     private static List<Motion> motions() {
         return List.of(
-                Motions.fixed(new Vector3D(1.0, -2.0, 0.5), new Rotation(new Vector3D(1, 2, 3), 0.4,
+                Motions.stationary(new Vector3D(1.0, -2.0, 0.5), new Rotation(new Vector3D(1, 2, 3), 0.4,
                         RotationConvention.FRAME_TRANSFORM)),
                 Motions.spinUp(new Vector3D(0.2, -0.3, 1.0), 0.3, 1.2, 0.05),
                 Motions.oscillation(new Vector3D(1, 0, 0.1), 0.2, 0.9, 0.4),
                 Motions.heave(new Vector3D(0, 0.2, 1), 1.5, 0.7, 0.1),
                 Motions.translation(new Vector3D(1, 2, 3), new Vector3D(0.1, -0.2, 0.3), new Vector3D(0.01, 0.02, -0.03)),
-                Motions.compose(Motions.spin(Vector3D.PLUS_K, 0.0, 0.5), Motions.heave(Vector3D.PLUS_I, 2.0, 1.1, 0.0)),
+                Motions.spin(Vector3D.PLUS_K, 0.0, 0.5).then(Motions.heave(Vector3D.PLUS_I, 2.0, 1.1, 0.0)),
                 t -> Motions.spin(Vector3D.PLUS_J, 0.1, 0.8).at(t)); // a user lambda: default path
     }
 

@@ -61,7 +61,7 @@ class OrientationsTest {
             assertTrue(Rotation.distance(r, rebuilt) < 1e-14);
             // the placement's matrix reads back the same orientation (Shepperd branch coverage:
             // random angles up to pi exercise all four branches)
-            assertTrue(Rotation.distance(r, Placement.fixed(Vector3D.ZERO, r).orientation()) < 1e-14);
+            assertTrue(Rotation.distance(r, Placement.stationary(Vector3D.ZERO, r).orientation()) < 1e-14);
         }
     }
 

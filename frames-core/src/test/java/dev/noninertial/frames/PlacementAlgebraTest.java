@@ -96,8 +96,8 @@ class PlacementAlgebraTest {
         for (int i = 0; i < 500; i++) {
             Rotation rFB = RandomFrames.orientation(rng); // F in B
             Rotation rGF = RandomFrames.orientation(rng); // G in F
-            Placement p = Placement.fixed(Vector3D.ZERO, rFB);
-            Placement q = Placement.fixed(Vector3D.ZERO, rGF);
+            Placement p = Placement.stationary(Vector3D.ZERO, rFB);
+            Placement q = Placement.stationary(Vector3D.ZERO, rGF);
             // v_G = R_GF (R_FB v_B): Hipparchus applies r2 first in compose(r2, VECTOR_OPERATOR)
             Rotation expected = rGF.compose(rFB, RotationConvention.VECTOR_OPERATOR);
             Rotation actual = p.then(q).orientation();

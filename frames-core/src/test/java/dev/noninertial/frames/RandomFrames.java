@@ -41,14 +41,14 @@ final class RandomFrames {
                 rng.nextGaussian());
         Motion heave = Motions.heave(axis(rng), 3 * rng.nextDouble(), 0.5 + rng.nextDouble(), rng.nextGaussian());
         Motion drift = Motions.translation(vector(rng, 10), vector(rng, 3), vector(rng, 1), vector(rng, 0.2));
-        Motion offset = Motions.fixed(vector(rng, 5), orientation(rng));
+        Motion offset = Motions.stationary(vector(rng, 5), orientation(rng));
         switch (rng.nextInt(4)) {
             case 0:
-                return Motions.compose(drift, spin);
+                return drift.then(spin);
             case 1:
-                return Motions.compose(offset, rock, heave);
+                return offset.then(rock).then(heave);
             case 2:
-                return Motions.compose(heave, spin, offset, rock);
+                return heave.then(spin).then(offset).then(rock);
             default:
                 return drift.then(rock).then(spin);
         }

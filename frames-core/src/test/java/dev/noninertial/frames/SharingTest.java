@@ -41,12 +41,12 @@ class SharingTest {
 
     private static ReferenceFrame everyMotionKind() {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
-        return lab.attach("fixed", Motions.fixed(new Vector3D(1, 2, 3), Orientations.fromYawPitchRoll(0.1, 0.2, 0.3)))
+        return lab.attach("fixed", Motions.stationary(new Vector3D(1, 2, 3), Orientations.fromYawPitchRoll(0.1, 0.2, 0.3)))
                 .attach("spin", Motions.spinUp(Vector3D.PLUS_K, 0.1, 0.5, 0.05))
                 .attach("rock", Motions.oscillation(Vector3D.PLUS_I, 0.2, 0.8, 0.1)
                         .then(Motions.heave(Vector3D.PLUS_K, 1.5, 0.6, 0.2)))
-                .attach("drift", Motions.compose(Motions.translation(Vector3D.PLUS_J, Vector3D.MINUS_I),
-                        Motions.spin(Vector3D.PLUS_J, 0, 0.1)))
+                .attach("drift", Motions.translation(Vector3D.PLUS_J, Vector3D.MINUS_I)
+                        .then(Motions.spin(Vector3D.PLUS_J, 0, 0.1)))
                 .attach("user", (Motion & Serializable) t -> Placement.identity());
     }
 
@@ -68,7 +68,7 @@ class SharingTest {
             // deterministic arithmetic on the same inputs: bit-identical
             assertEquals(leaf.placementIn(leaf.root(), t), copy.placementIn(copy.root(), t));
         }
-        FramedState framed = leaf.state(2.0, s);
+        FramedState framed = leaf.stateAt(2.0, s);
         FramedState framedCopy = roundTrip(framed);
         assertEquals(framed.state(), framedCopy.state());
         assertEquals(framed.in(leaf.root()).state(), framedCopy.in(framedCopy.frame().root()).state());
@@ -81,7 +81,7 @@ class SharingTest {
         int n = 2000;
         List<PointState> expected = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            expected.add(leaf.state(0.01 * i, PointState.atRest(new Vector3D(i, 0, 1))).in(root).state());
+            expected.add(leaf.stateAt(0.01 * i, PointState.stationary(new Vector3D(i, 0, 1))).in(root).state());
         }
         ExecutorService pool = Executors.newFixedThreadPool(8);
         try {
@@ -92,7 +92,7 @@ class SharingTest {
                     boolean same = true;
                     for (int k = 0; k < n; k++) {
                         int i = (k * 7 + offset * 13) % n; // each worker walks a different order
-                        PointState got = leaf.state(0.01 * i, PointState.atRest(new Vector3D(i, 0, 1))).in(root)
+                        PointState got = leaf.stateAt(0.01 * i, PointState.stationary(new Vector3D(i, 0, 1))).in(root)
                                 .state();
                         same &= got.equals(expected.get(i));
                     }

@@ -31,14 +31,14 @@ final class LongRangeScenario {
         // the non-rotating comparison: the same site geometry fixed in an inertial root
         Placement fixed = s.siteInEarth;
         ReferenceFrame still = ReferenceFrame.inertialRoot("Earth held still")
-                .attach("Kelvaro Point ENU (still)", Motions.fixed(fixed.origin(), fixed.orientation()));
+                .attach("Kelvaro Point ENU (still)", Motions.stationary(fixed.origin(), fixed.orientation()));
         SpecificForce normalGravity = (t, p) -> s.normalGravityInSite(p.position());
-        TrajectoryEvent impact = TrajectoryEvent.when("impact", (t, p) -> s.heightOf(p.position()) - ground)
+        TrajectoryEvent impact = TrajectoryEvent.of("impact", (t, p) -> s.heightOf(p.position()) - ground)
                 .fallingOnly().stopping().withCheckInterval(1.0);
-        TrajectorySolver rotating = TrajectorySolver.in(s.site).withForce(s.gravitationInSite())
-                .withTolerance(1e-6, 1e-9, 1e-12).withMaxStep(5.0).withEvent(impact);
-        TrajectorySolver held = TrajectorySolver.in(still).withForce(normalGravity)
-                .withTolerance(1e-6, 1e-9, 1e-12).withMaxStep(5.0).withEvent(impact);
+        TrajectorySolver rotating = TrajectorySolver.of(s.site).plusForce(s.gravitationInSite())
+                .withTolerance(1e-6, 1e-9, 1e-12).withMaxStep(5.0).plusEvent(impact);
+        TrajectorySolver held = TrajectorySolver.of(still).plusForce(normalGravity)
+                .withTolerance(1e-6, 1e-9, 1e-12).withMaxStep(5.0).plusEvent(impact);
 
         ScenarioTable table = new ScenarioTable("long-range",
                 "Drag-free test body from Kelvaro Point (invented), 800 m/s at 45 deg: Earth rotation on and off")
@@ -58,8 +58,8 @@ final class LongRangeScenario {
             PointState launch = PointState.of(Vector3D.ZERO, v0);
             Trajectory withSpin = rotating.solve(launch, 0.0, 600.0);
             Trajectory without = held.solve(launch, 0.0, 600.0);
-            Vector3D a = withSpin.end().state().position();
-            Vector3D b = without.end().state().position();
+            Vector3D a = withSpin.finalState().state().position();
+            Vector3D b = without.finalState().state().position();
             Vector3D d = a.subtract(b);
             double apex = 0.5 * withSpin.endTime();
             table.row(azimuthDeg, withSpin.endTime(), a.dotProduct(along) / 1e3,

@@ -32,8 +32,9 @@ final class ShipCraneScenario {
         double course = Math.toRadians(60.0);
         LatLonHeight start = LatLonHeight.ofDegrees(57.60, 11.20, 0.0);
         ReferenceFrame level = s.earth.carriedLevel("Tarrowind level (NED)",
-                GeodeticPath.steadyCourse(s.model.ellipsoid(), start, speed * Math.cos(course),
-                        speed * Math.sin(course)), LocalAxes.NED);
+                GeodeticPath.steadyCourse(s.model.ellipsoid(), start,
+                        new Vector3D(speed * Math.cos(course), speed * Math.sin(course), 0), LocalAxes.NED),
+                LocalAxes.NED);
         // heave: 1.1 m amplitude, 9 s period, along NED down
         ReferenceFrame heaving = level.attach("Tarrowind heave", Motions.heave(Vector3D.PLUS_K, 1.1,
                 2 * Math.PI / 9.0, 0.0));
@@ -41,13 +42,13 @@ final class ShipCraneScenario {
         double rollW = 2 * Math.PI / 10.0;
         double pitchAmp = Math.toRadians(1.5);
         double pitchW = 2 * Math.PI / 7.0;
-        ReferenceFrame hull = s.earth.body(heaving, "Tarrowind hull (x fwd, y stbd, z down)", t -> {
+        ReferenceFrame hull = s.earth.body("Tarrowind hull (x fwd, y stbd, z down)", heaving, t -> {
             double sr = Math.sin(rollW * t);
             double sp = Math.sin(pitchW * t + 0.7);
             return new AttitudeSample(course, pitchAmp * sp, rollAmp * sr,
                     0.0, pitchAmp * pitchW * Math.cos(pitchW * t + 0.7), rollAmp * rollW * Math.cos(rollW * t),
                     0.0, -pitchW * pitchW * pitchAmp * sp, -rollW * rollW * rollAmp * sr);
-        });
+        }, LocalAxes.NED);
         // crane tip: 22 m forward, 9 m to port, 31 m above the hull origin; hook lowered at 0.4 m/s
         PointState hook = PointState.of(new Vector3D(22.0, -9.0, -31.0), new Vector3D(0.0, 0.0, 0.4));
         ReferenceFrame inertial = s.earth.inertial();
@@ -64,7 +65,7 @@ final class ShipCraneScenario {
                 .column("line tilt", "deg", "%.2f")
                 .column("largest term", "", "%s");
         for (double t = 0.0; t <= 20.0 + 1e-9; t += 1.0) {
-            FramedState here = hull.state(t, hook);
+            FramedState here = hull.stateAt(t, hook);
             FictitiousAccelerations f = here.fictitious();
             Placement hullInEarth = hull.placementIn(s.earth.earthFixed(), t);
             Vector3D positionInEarth = hullInEarth.positionToBase(hook.position());

@@ -31,14 +31,14 @@ final class SiteRotationScenario {
         double lat = DemoSetting.KELVARO_POINT.latitude();
         Vector3D rate = s.model.earthRateIn(lat, LocalAxes.ENU);
         row(table, "Earth rate w", rate, "rad/s");
-        FramedState origin = s.site.state(0.0, PointState.atRest(Vector3D.ZERO)).in(s.earth.inertial());
+        FramedState origin = s.site.stateAt(0.0, PointState.stationary(Vector3D.ZERO)).in(s.earth.inertial());
         Vector3D velocityInSite = s.site.placementIn(s.earth.inertial(), 0.0)
                 .vectorFromBase(origin.state().velocity());
         row(table, "site velocity in inertial space", velocityInSite, "m/s");
-        FictitiousAccelerations atRest = s.site.state(0.0, PointState.atRest(Vector3D.ZERO)).fictitious();
+        FictitiousAccelerations atRest = s.site.stateAt(0.0, PointState.stationary(Vector3D.ZERO)).fictitious();
         row(table, "frame acceleration at rest (circling the axis)", atRest.frameAcceleration(), "m/s^2");
         Vector3D gravity = s.normalGravityInSite(Vector3D.ZERO);
-        Vector3D gravitation = s.gravitationInSite().at(0.0, PointState.atRest(Vector3D.ZERO));
+        Vector3D gravitation = s.gravitationInSite().at(0.0, PointState.stationary(Vector3D.ZERO));
         row(table, "normal gravity (plumb line)", gravity, "m/s^2");
         row(table, "gravitation (masses only)", gravitation, "m/s^2");
         row(table, "gravity - gravitation", gravity.subtract(gravitation), "m/s^2");
@@ -49,13 +49,13 @@ final class SiteRotationScenario {
 
         // a point held at rest by a reaction opposite to normal gravity, for 60 s
         SpecificForce reaction = SpecificForce.uniform(gravity.negate());
-        TrajectorySolver right = TrajectorySolver.in(s.site).withForce(s.gravitationInSite()).withForce(reaction)
+        TrajectorySolver right = TrajectorySolver.of(s.site).plusForce(s.gravitationInSite()).plusForce(reaction)
                 .withTolerance(1e-9, 1e-12, 1e-13);
-        TrajectorySolver wrong = TrajectorySolver.in(s.site)
-                .withForce((t, p) -> s.normalGravityInSite(p.position())).withForce(reaction)
+        TrajectorySolver wrong = TrajectorySolver.of(s.site)
+                .plusForce((t, p) -> s.normalGravityInSite(p.position())).plusForce(reaction)
                 .withTolerance(1e-9, 1e-12, 1e-13);
-        Vector3D heldRight = right.solve(PointState.atRest(Vector3D.ZERO), 0.0, 60.0).end().state().position();
-        Vector3D heldWrong = wrong.solve(PointState.atRest(Vector3D.ZERO), 0.0, 60.0).end().state().position();
+        Vector3D heldRight = right.solve(PointState.stationary(Vector3D.ZERO), 0.0, 60.0).finalState().state().position();
+        Vector3D heldWrong = wrong.solve(PointState.stationary(Vector3D.ZERO), 0.0, 60.0).finalState().state().position();
         row(table, "held point after 60 s, gravitation passed", heldRight, "m");
         row(table, "held point after 60 s, gravity passed (mistake)", heldWrong, "m");
         table.note("integrate gravitation, not gravity, in an Earth-fixed frame: the engine adds the centrifugal term");

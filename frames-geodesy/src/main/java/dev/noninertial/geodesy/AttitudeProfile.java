@@ -10,7 +10,8 @@ import dev.noninertial.frames.Placement;
  * Heading, pitch and roll of a body over a local-level frame as functions of time, with their
  * first and second derivatives (convention in {@link AttitudeSample}). {@link #toMotion()}
  * turns it into the motion of a body frame in the level frame, with analytic angular velocity
- * and acceleration; {@link EarthFrames#body(ReferenceFrame, String, AttitudeProfile)} attaches it.
+ * and acceleration; {@link EarthFrames#body(String, dev.noninertial.frames.ReferenceFrame, AttitudeProfile,
+ * LocalAxes)} attaches it with the heading sense named.
  *
  * <p>Time {@code t} is in seconds from the frames' epoch. Implementations must return
  * consistent derivatives and should be immutable and thread-safe.
@@ -27,33 +28,39 @@ public interface AttitudeProfile {
     AttitudeSample at(double t);
 
     /**
-     * A fixed attitude.
+     * An attitude that does not change (all rates zero).
      *
      * @param heading yaw (rad)
      * @param pitch pitch (rad)
      * @param roll roll (rad)
      * @return the profile
      */
-    static AttitudeProfile still(double heading, double pitch, double roll) {
-        AttitudeSample sample = AttitudeSample.still(heading, pitch, roll);
+    static AttitudeProfile stationary(double heading, double pitch, double roll) {
+        AttitudeSample sample = AttitudeSample.stationary(heading, pitch, roll);
         return (AttitudeProfile & Serializable) t -> sample;
     }
 
     /**
-     * Angles changing at constant rates from given values at t = 0 (a steady turn, a steady
-     * roll-in).
+     * Angles changing at constant rates from a start sample at t = 0 (a steady turn, a steady
+     * roll-in): {@code heading(t) = start.heading() + start.headingRate() t}, and so on. Make the
+     * start sample with {@link AttitudeSample#withRates(double, double, double)}, for example
+     * {@code constantRates(AttitudeSample.stationary(h, p, r).withRates(0, 0, rollRate))}.
      *
-     * @param start angles at t = 0 (rad), rates and accelerations ignored
-     * @param headingRate d(heading)/dt (rad/s)
-     * @param pitchRate d(pitch)/dt (rad/s)
-     * @param rollRate d(roll)/dt (rad/s)
+     * @param start angles (rad) and rates (rad/s) at t = 0; its angular accelerations must be zero
      * @return the profile
+     * @throws IllegalArgumentException if an angular acceleration of {@code start} is not zero
+     *         (a constant-rate profile has none)
      */
-    static AttitudeProfile constantRates(AttitudeSample start, double headingRate, double pitchRate, double rollRate) {
+    static AttitudeProfile constantRates(AttitudeSample start) {
         Arguments.nonNull("start", start);
-        Arguments.finite("headingRate", headingRate);
-        Arguments.finite("pitchRate", pitchRate);
-        Arguments.finite("rollRate", rollRate);
+        if (start.headingAcceleration() != 0 || start.pitchAcceleration() != 0 || start.rollAcceleration() != 0) {
+            throw new IllegalArgumentException("start must have zero angular accelerations for constant rates, got ("
+                    + start.headingAcceleration() + ", " + start.pitchAcceleration() + ", "
+                    + start.rollAcceleration() + ") rad/s^2 (heading, pitch, roll)");
+        }
+        double headingRate = start.headingRate();
+        double pitchRate = start.pitchRate();
+        double rollRate = start.rollRate();
         return (AttitudeProfile & Serializable) t -> new AttitudeSample(start.heading() + headingRate * t,
                 start.pitch() + pitchRate * t, start.roll() + rollRate * t, headingRate, pitchRate, rollRate, 0, 0, 0);
     }

@@ -57,14 +57,28 @@ public record AttitudeSample(double heading, double pitch, double roll,
     }
 
     /**
-     * A still attitude (no rates).
+     * A stationary attitude (no rates, no angular accelerations).
      *
      * @param heading yaw angle (rad)
      * @param pitch pitch angle (rad)
      * @param roll roll angle (rad)
      * @return the sample
      */
-    public static AttitudeSample still(double heading, double pitch, double roll) {
+    public static AttitudeSample stationary(double heading, double pitch, double roll) {
         return new AttitudeSample(heading, pitch, roll, 0, 0, 0, 0, 0, 0);
+    }
+
+    /**
+     * A copy with the three rates replaced (angles and angular accelerations kept).
+     *
+     * @param newHeadingRate d(heading)/dt (rad/s)
+     * @param newPitchRate d(pitch)/dt (rad/s)
+     * @param newRollRate d(roll)/dt (rad/s)
+     * @return the sample
+     * @throws IllegalArgumentException if a rate is not finite
+     */
+    public AttitudeSample withRates(double newHeadingRate, double newPitchRate, double newRollRate) {
+        return new AttitudeSample(heading, pitch, roll, newHeadingRate, newPitchRate, newRollRate,
+                headingAcceleration, pitchAcceleration, rollAcceleration);
     }
 }

@@ -7,6 +7,7 @@ import java.util.Locale;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Orientations;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
@@ -57,6 +58,10 @@ import dev.noninertial.frames.motion.Motions;
  * <p>Immutable and thread-safe.
  */
 public final class EarthFrames implements Serializable {
+
+    /** NED axes placed in ENU axes: rows north (0, 1, 0), east (1, 0, 0), down (0, 0, -1). */
+    private static final Motion ENU_TO_NED = Motions.stationary(Vector3D.ZERO,
+            Orientations.fromMatrix(new double[][] {{0, 1, 0}, {1, 0, 0}, {0, 0, -1}}));
 
     private static final long serialVersionUID = 1L;
 
@@ -156,7 +161,7 @@ public final class EarthFrames implements Serializable {
         Arguments.nonNull("site", site);
         Arguments.nonNull("axes", axes);
         Ellipsoid shape = model.ellipsoid();
-        return earthFixed.attach(name, Motions.fixed(shape.toCartesian(site),
+        return earthFixed.attach(name, Motions.stationary(shape.toCartesian(site),
                 Orientations.fromMatrix(Ellipsoid.localRows(site.latitude(), site.longitude(), axes))));
     }
 
@@ -178,19 +183,27 @@ public final class EarthFrames implements Serializable {
     }
 
     /**
-     * A body frame on top of a frame (usually a local-level one), turned by heading, pitch and roll
-     * (z-y-x sequence relative to the parent's axes, see {@link AttitudeSample}), origin at the
-     * parent's origin.
+     * A body frame on a parent frame whose axes are local-level axes (a local-level or carried
+     * frame, or a frame on one that keeps its axes, such as a heaving deck), turned by heading,
+     * pitch and roll, origin at the parent's origin. The heading sense is the same whatever the
+     * parent's axis order, so {@code parentAxes} must say which it is: heading is clockwise from
+     * north about the down direction, pitch nose up, roll right side down, with body axes x
+     * forward, y right, z down (the z-y-x sequence of {@link AttitudeSample} applied to NED axes;
+     * over an ENU parent the fixed ENU-to-NED turn is applied first). For the raw z-y-x turn about
+     * any parent's own axes, attach {@link AttitudeProfile#toMotion()} yourself.
      *
-     * @param level the parent frame
      * @param name readable name of the body frame
+     * @param parent the frame the body hangs on; its axes are local-level axes in {@code parentAxes}
      * @param attitude heading, pitch, roll and their rates over time
-     * @return a new frame attached to {@code level}
+     * @param parentAxes axis order of {@code parent}
+     * @return a new frame attached to {@code parent}
      */
-    public ReferenceFrame body(ReferenceFrame level, String name, AttitudeProfile attitude) {
-        Arguments.nonNull("level", level);
+    public ReferenceFrame body(String name, ReferenceFrame parent, AttitudeProfile attitude, LocalAxes parentAxes) {
+        Arguments.nonNull("parent", parent);
         Arguments.nonNull("attitude", attitude);
-        return level.attach(name, attitude.toMotion());
+        Arguments.nonNull("parentAxes", parentAxes);
+        Motion turn = attitude.toMotion();
+        return parent.attach(name, parentAxes == LocalAxes.NED ? turn : ENU_TO_NED.then(turn));
     }
 
     /**

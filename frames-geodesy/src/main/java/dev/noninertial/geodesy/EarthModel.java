@@ -356,56 +356,87 @@ public final class EarthModel implements Serializable {
 
     /**
      * Transport rate: angular velocity of a north-aligned local-level frame carried at a ground
-     * speed over the ellipsoid, relative to the Earth-fixed frame. NED:
-     * {@code (vE/(RN+h), -vN/(RM+h), -vE tan(lat)/(RN+h))}; ENU: {@code (-vN/(RM+h), vE/(RN+h), vE tan(lat)/(RN+h))}.
-     * Undefined at the poles (the north direction is), where it is refused.
+     * velocity over the ellipsoid, relative to the Earth-fixed frame. With vN, vE the north and
+     * east components of {@code groundVelocity}, NED: {@code (vE/(RN+h), -vN/(RM+h), -vE tan(lat)/(RN+h))};
+     * ENU: {@code (-vN/(RM+h), vE/(RN+h), vE tan(lat)/(RN+h))}. The vertical component does not
+     * enter (a climbing frame keeps its axes). Undefined at the poles (the north direction is),
+     * where it is refused.
      *
      * @param position geodetic position (rad, m), |lat| &lt; pi/2
-     * @param northSpeed north velocity component vN (m/s)
-     * @param eastSpeed east velocity component vE (m/s)
-     * @param axes local axis order of the result
-     * @return transport rate (rad/s), resolved in the chosen local axes
-     * @throws IllegalArgumentException at a pole or for non-finite speeds
+     * @param groundVelocity velocity relative to the Earth (m/s), resolved in {@code axes}
+     * @param axes local axis order of {@code groundVelocity} and of the result
+     * @return transport rate (rad/s), resolved in {@code axes}
+     * @throws IllegalArgumentException at a pole or for a non-finite velocity
      */
-    public Vector3D transportRate(LatLonHeight position, double northSpeed, double eastSpeed, LocalAxes axes) {
+    public Vector3D transportRate(LatLonHeight position, Vector3D groundVelocity, LocalAxes axes) {
         Arguments.nonNull("position", position);
-        Arguments.finite("northSpeed", northSpeed);
-        Arguments.finite("eastSpeed", eastSpeed);
+        Arguments.finite("groundVelocity", groundVelocity);
         Arguments.nonNull("axes", axes);
-        double lat = position.latitude();
-        if (Math.abs(lat) == 0.5 * Math.PI) {
-            throw new IllegalArgumentException("position.latitude must be strictly inside (-90, 90) deg for a "
-                    + "north-aligned frame, got " + Math.toDegrees(lat) + " deg");
-        }
+        double lat = refusePole(position);
+        double north = northComponent(groundVelocity, axes);
+        double east = eastComponent(groundVelocity, axes);
         double rm = ellipsoid.meridianRadius(lat) + position.height();
         double rn = ellipsoid.primeVerticalRadius(lat) + position.height();
-        double aboutEast = -northSpeed / rm;
-        double aboutNorth = eastSpeed / rn;
-        double aboutUp = eastSpeed * Math.tan(lat) / rn;
+        double aboutEast = -north / rm;
+        double aboutNorth = east / rn;
+        double aboutUp = east * Math.tan(lat) / rn;
         return axes == LocalAxes.ENU ? new Vector3D(aboutEast, aboutNorth, aboutUp)
                 : new Vector3D(aboutNorth, aboutEast, -aboutUp);
     }
 
     /**
      * Eotvos correction for a gravimeter moving over the ellipsoid at constant height, exact
-     * for the normal Earth: {@code 2 w vE cos(lat) + vE^2/(RN+h) + vN^2/(RM+h)}, the amount by
-     * which motion lowers the measured vertical specific force (add it to the reading). The
-     * common gravimetry rule of thumb {@code 7.503 V cos(lat) sin(heading) + 0.004154 V^2} mGal
-     * (V in knots) is the same with one spherical radius.
+     * for the normal Earth: {@code 2 w vE cos(lat) + vE^2/(RN+h) + vN^2/(RM+h)} with vN, vE the
+     * north and east components of {@code groundVelocity}, the amount by which motion lowers the
+     * measured vertical specific force (add it to the reading). The common gravimetry rule of
+     * thumb {@code 7.503 V cos(lat) sin(heading) + 0.004154 V^2} mGal (V in knots) is the same
+     * with one spherical radius. The velocity is a vector in stated axes so that north and east
+     * cannot be swapped silently (a swap changes the result by more than an order of magnitude).
      *
-     * @param position geodetic position (rad, m)
-     * @param northSpeed north velocity vN (m/s)
-     * @param eastSpeed east velocity vE (m/s)
-     * @return correction (m/s^2); 1 mGal = 1e-5 m/s^2
+     * @param position geodetic position (rad, m), |lat| &lt; pi/2 (refused at a pole, like
+     *        {@link #transportRate(LatLonHeight, Vector3D, LocalAxes)})
+     * @param groundVelocity velocity relative to the Earth (m/s), resolved in {@code axes}, with a
+     *        zero vertical component (the formula holds at constant height)
+     * @param axes local axis order of {@code groundVelocity}
+     * @return correction (m/s^2); {@code Units.toMilligals} converts it to mGal
+     * @throws IllegalArgumentException at a pole, for a non-finite velocity or a non-zero vertical
+     *         component
      */
-    public double eotvosCorrection(LatLonHeight position, double northSpeed, double eastSpeed) {
+    public double eotvosCorrection(LatLonHeight position, Vector3D groundVelocity, LocalAxes axes) {
         Arguments.nonNull("position", position);
-        Arguments.finite("northSpeed", northSpeed);
-        Arguments.finite("eastSpeed", eastSpeed);
-        double lat = position.latitude();
+        Arguments.finite("groundVelocity", groundVelocity);
+        Arguments.nonNull("axes", axes);
+        if (groundVelocity.getZ() != 0.0) {
+            throw new IllegalArgumentException("groundVelocity must be horizontal (zero "
+                    + (axes == LocalAxes.ENU ? "up" : "down") + " component) for the constant-height Eotvos "
+                    + "correction, got " + groundVelocity + " m/s in " + axes + " axes");
+        }
+        double lat = refusePole(position);
+        double north = northComponent(groundVelocity, axes);
+        double east = eastComponent(groundVelocity, axes);
         double rm = ellipsoid.meridianRadius(lat) + position.height();
         double rn = ellipsoid.primeVerticalRadius(lat) + position.height();
-        return 2.0 * omega * eastSpeed * Math.cos(lat) + eastSpeed * eastSpeed / rn + northSpeed * northSpeed / rm;
+        return 2.0 * omega * east * Math.cos(lat) + east * east / rn + north * north / rm;
+    }
+
+    /** The latitude of a position where a north-aligned frame exists (not at a pole). */
+    private static double refusePole(LatLonHeight position) {
+        double lat = position.latitude();
+        if (Math.abs(lat) == 0.5 * Math.PI) {
+            throw new IllegalArgumentException("position.latitude must be strictly inside (-90, 90) deg for a "
+                    + "north-aligned frame, got " + Math.toDegrees(lat) + " deg");
+        }
+        return lat;
+    }
+
+    /** North component of a vector resolved in local axes. */
+    static double northComponent(Vector3D v, LocalAxes axes) {
+        return axes == LocalAxes.ENU ? v.getY() : v.getX();
+    }
+
+    /** East component of a vector resolved in local axes. */
+    static double eastComponent(Vector3D v, LocalAxes axes) {
+        return axes == LocalAxes.ENU ? v.getX() : v.getY();
     }
 
     // ------------------------------------------------------------------ ellipsoidal coordinates

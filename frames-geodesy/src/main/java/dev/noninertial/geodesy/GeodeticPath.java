@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.noninertial.frames.Arguments;
 
 /**
@@ -29,7 +31,7 @@ public interface GeodeticPath {
      * @param site geodetic position (rad, m), not at a pole
      * @return the path
      */
-    static GeodeticPath standing(LatLonHeight site) {
+    static GeodeticPath stationary(LatLonHeight site) {
         return constantRates(site, 0.0, 0.0, 0.0);
     }
 
@@ -62,15 +64,24 @@ public interface GeodeticPath {
      *
      * @param ellipsoid the reference ellipsoid of the heights and radii
      * @param start position at t = 0 (rad, m)
-     * @param northSpeed vN (m/s)
-     * @param eastSpeed vE (m/s)
+     * @param groundVelocity velocity relative to the Earth (m/s), resolved in {@code axes}: its
+     *        north and east components are vN and vE; its vertical component must be zero
+     * @param axes local axis order of {@code groundVelocity}
      * @return the path
+     * @throws IllegalArgumentException for a non-finite velocity or a non-zero vertical component
      */
-    static GeodeticPath steadyCourse(Ellipsoid ellipsoid, LatLonHeight start, double northSpeed, double eastSpeed) {
+    static GeodeticPath steadyCourse(Ellipsoid ellipsoid, LatLonHeight start, Vector3D groundVelocity,
+                                     LocalAxes axes) {
         Arguments.nonNull("ellipsoid", ellipsoid);
         Arguments.nonNull("start", start);
-        Arguments.finite("northSpeed", northSpeed);
-        Arguments.finite("eastSpeed", eastSpeed);
-        return new Courses.Steady(ellipsoid, start, northSpeed, eastSpeed);
+        Arguments.finite("groundVelocity", groundVelocity);
+        Arguments.nonNull("axes", axes);
+        if (groundVelocity.getZ() != 0.0) {
+            throw new IllegalArgumentException("groundVelocity must be horizontal (zero "
+                    + (axes == LocalAxes.ENU ? "up" : "down") + " component) on a constant-height course, got "
+                    + groundVelocity + " m/s in " + axes + " axes");
+        }
+        return new Courses.Steady(ellipsoid, start, EarthModel.northComponent(groundVelocity, axes),
+                EarthModel.eastComponent(groundVelocity, axes));
     }
 }

@@ -145,7 +145,7 @@ class EarthFramesTest {
             Vector3D reaction = MODEL.normalGravityVector(r).negate();
             Vector3D specific = reaction.add(MODEL.gravitation(r));
             FictitiousAccelerations f = EARTH.earthFixed().placementIn(EARTH.inertial(), 12.0)
-                    .fictitious(PointState.atRest(r));
+                    .fictitious(PointState.stationary(r));
             Vector3D seen = specific.add(f.total());
             // 1e-15 m/s^2: rounding of the 0.03 m/s^2 centrifugal term computed two ways
             assertTrue(seen.getNorm() < 1e-15, "lat " + deg + ": " + seen);
@@ -164,7 +164,7 @@ class EarthFramesTest {
         LatLonHeight start = LatLonHeight.ofDegrees(58.0, -4.0, 30.0);
         double vn = 8.0;
         double ve = -5.0;
-        GeodeticPath path = GeodeticPath.steadyCourse(Ellipsoid.WGS84, start, vn, ve);
+        GeodeticPath path = GeodeticPath.steadyCourse(Ellipsoid.WGS84, start, new Vector3D(vn, ve, 0), LocalAxes.NED);
         for (LocalAxes axes : LocalAxes.values()) {
             ReferenceFrame level = EARTH.carriedLevel("research vessel Larkspur Tern", path, axes);
             double t = 5400.0;
@@ -174,7 +174,8 @@ class EarthFramesTest {
             checkByDifferences(level, EARTH.inertial(), t, 1.0, 1e-15, 1e-17, 1e-8, 1e-9);
             // closed forms (REFERENCES.md, Titterton and Weston): transport rate, then Earth rate + transport
             LatLonHeight here = path.at(t).position();
-            Vector3D transport = MODEL.transportRate(here, vn, ve, axes);
+            Vector3D transport = MODEL.transportRate(here,
+                    axes == LocalAxes.ENU ? new Vector3D(ve, vn, 0) : new Vector3D(vn, ve, 0), axes);
             assertVectorEquals(transport, level.placementIn(EARTH.earthFixed(), t).angularVelocity(), 1e-20,
                     "transport rate " + axes);
             assertVectorEquals(transport.add(MODEL.earthRateIn(here.latitude(), axes)),
@@ -217,7 +218,7 @@ class EarthFramesTest {
                 0.7 + 0.1 * Math.sin(0.2 * s), 0.05 * Math.sin(0.5 * s + 1), 0.2 * Math.sin(0.3 * s),
                 0.02 * Math.cos(0.2 * s), 0.025 * Math.cos(0.5 * s + 1), 0.06 * Math.cos(0.3 * s),
                 -0.004 * Math.sin(0.2 * s), -0.0125 * Math.sin(0.5 * s + 1), -0.018 * Math.sin(0.3 * s));
-        ReferenceFrame body = EARTH.body(level, "hull", sway);
+        ReferenceFrame body = EARTH.body("hull", level, sway, LocalAxes.NED);
         // step 1e-4 s: truncation ~ w''' h^2 ~ 1e-10, rounding ~ 1e-16 / 1e-4 = 1e-12
         checkByDifferences(body, level, t, 1e-4, 1e-10, 1e-9, 1e-9, 1e-9);
         checkByDifferences(body, EARTH.inertial(), t, 1e-4, 1e-10, 1e-9, 1e-5, 1e-5);
@@ -235,7 +236,7 @@ class EarthFramesTest {
         double knot = 1852.0 / 3600.0;
         double ve = 10 * knot;
         LatLonHeight start = LatLonHeight.ofDegrees(60.0, 5.0, 0.0);
-        GeodeticPath run = GeodeticPath.steadyCourse(Ellipsoid.WGS84, start, 0.0, ve);
+        GeodeticPath run = GeodeticPath.steadyCourse(Ellipsoid.WGS84, start, new Vector3D(ve, 0, 0), LocalAxes.ENU);
         ReferenceFrame moving = EARTH.carriedLevel("gravimeter on launch Ossery", run, LocalAxes.ENU);
         double t = 600.0;
         ReferenceFrame still = EARTH.localLevel("gravimeter ashore", run.at(t).position(), LocalAxes.ENU);
@@ -245,7 +246,7 @@ class EarthFramesTest {
         double upStill = inertialUp(still, t);
         double engine = upStill - upMoving;
         // exact ellipsoidal closed form, 2 w vE cos(lat) + vE^2/(RN + h): same physics, rounding only
-        assertEquals(MODEL.eotvosCorrection(start, 0.0, ve), engine, 1e-12);
+        assertEquals(MODEL.eotvosCorrection(start, new Vector3D(ve, 0, 0), LocalAxes.ENU), engine, 1e-12);
         // gravimetry rule of thumb (common practice): 7.503 V cos(lat) sin(heading) + 0.004154 V^2 mGal.
         // Tolerance 0.01 mGal: the rule uses one spherical radius (about 0.3 % off RN at 60 deg on the
         // 0.41 mGal term) and rounds 2 w to 7.503 (0.001 mGal here); measured difference 0.0027 mGal
@@ -267,12 +268,13 @@ class EarthFramesTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> EarthFrames.of(MODEL, Instant.parse("1850-01-01T00:00:00Z")));
         assertTrue(e.getMessage().contains("1850"));
-        GeodeticPath north = GeodeticPath.steadyCourse(Ellipsoid.WGS84, LatLonHeight.ofDegrees(89.0, 0, 0), 100, 0);
+        GeodeticPath north = GeodeticPath.steadyCourse(Ellipsoid.WGS84, LatLonHeight.ofDegrees(89.0, 0, 0),
+                new Vector3D(100, 0, 0), LocalAxes.NED);
         e = assertThrows(IllegalArgumentException.class, () -> north.at(3600.0));
         assertTrue(e.getMessage().contains("t = 3600"), e.getMessage());
         assertThrows(IllegalArgumentException.class,
-                () -> MODEL.transportRate(LatLonHeight.ofDegrees(90, 0, 0), 1, 1, LocalAxes.NED));
+                () -> MODEL.transportRate(LatLonHeight.ofDegrees(90, 0, 0), new Vector3D(1, 1, 0), LocalAxes.NED));
         assertThrows(IllegalArgumentException.class, () -> new PathSample(Math.PI / 2, 0, 0, 0, 0, 0, 0, 0, 0));
-        assertThrows(IllegalArgumentException.class, () -> AttitudeSample.still(Double.NaN, 0, 0));
+        assertThrows(IllegalArgumentException.class, () -> AttitudeSample.stationary(Double.NaN, 0, 0));
     }
 }

@@ -89,7 +89,7 @@ public final class GeodesyFigures {
         EarthFrames earth = EarthFrames.of(m, Instant.parse("2026-03-20T12:00:00Z"));
         double ve = 10 * 1852.0 / 3600.0;
         LatLonHeight start = LatLonHeight.ofDegrees(60.0, 5.0, 0.0);
-        GeodeticPath run = GeodeticPath.steadyCourse(wgs, start, 0.0, ve);
+        GeodeticPath run = GeodeticPath.steadyCourse(wgs, start, new Vector3D(ve, 0, 0), LocalAxes.ENU);
         ReferenceFrame moving = earth.carriedLevel("launch", run, LocalAxes.ENU);
         ReferenceFrame still = earth.localLevel("ashore", run.at(600).position(), LocalAxes.ENU);
         Placement pm = moving.placementIn(earth.inertial(), 600);
@@ -97,18 +97,19 @@ public final class GeodesyFigures {
         double engine = ps.vectorFromBase(ps.originAcceleration()).getZ() - pm.vectorFromBase(pm.originAcceleration()).getZ();
         double rule = (7.503 * 10 * 0.5 + 0.004154 * 100) * 1e-5;
         System.out.printf("Eotvos engine %.6f mGal, closed form diff %.2e m/s^2, rule of thumb diff %.4f mGal%n",
-                engine * 1e5, engine - m.eotvosCorrection(start, 0, ve), (engine - rule) * 1e5);
+                engine * 1e5, engine - m.eotvosCorrection(start, new Vector3D(ve, 0, 0), LocalAxes.ENU), (engine - rule) * 1e5);
         // rest test
         double worstRest = 0;
         for (double deg = 0; deg <= 90; deg += 1) {
             Vector3D r = wgs.toCartesian(LatLonHeight.ofDegrees(deg, 8, 0));
-            FictitiousAccelerations f = earth.earthFixed().placementIn(earth.inertial(), 12).fictitious(PointState.atRest(r));
+            FictitiousAccelerations f = earth.earthFixed().placementIn(earth.inertial(), 12).fictitious(PointState.stationary(r));
             Vector3D seen = m.normalGravityVector(r).negate().add(m.gravitation(r)).add(f.total());
             worstRest = Math.max(worstRest, seen.getNorm());
         }
         System.out.printf("point held on the ellipsoid, residual acceleration in ECEF: %.2e m/s^2%n", worstRest);
         // finite-difference checks (five-point stencil) of a carried frame and a body frame
-        GeodeticPath course = GeodeticPath.steadyCourse(wgs, LatLonHeight.ofDegrees(58.0, -4.0, 30.0), 8.0, -5.0);
+        GeodeticPath course = GeodeticPath.steadyCourse(wgs, LatLonHeight.ofDegrees(58.0, -4.0, 30.0),
+                new Vector3D(8.0, -5.0, 0), LocalAxes.NED);
         ReferenceFrame level = earth.carriedLevel("level", course, LocalAxes.NED);
         report("carried level in ECEF", level, earth.earthFixed(), 5400.0, 1.0);
         report("carried level in ECI", level, earth.inertial(), 5400.0, 1.0);
@@ -116,7 +117,7 @@ public final class GeodesyFigures {
                 0.7 + 0.1 * Math.sin(0.2 * s), 0.05 * Math.sin(0.5 * s + 1), 0.2 * Math.sin(0.3 * s),
                 0.02 * Math.cos(0.2 * s), 0.025 * Math.cos(0.5 * s + 1), 0.06 * Math.cos(0.3 * s),
                 -0.004 * Math.sin(0.2 * s), -0.0125 * Math.sin(0.5 * s + 1), -0.018 * Math.sin(0.3 * s));
-        ReferenceFrame body = earth.body(level, "hull", sway);
+        ReferenceFrame body = earth.body("hull", level, sway, LocalAxes.NED);
         report("body in carried level", body, level, 37.0, 1e-3);
         report("body in ECI", body, earth.inertial(), 37.0, 1e-3);
     }

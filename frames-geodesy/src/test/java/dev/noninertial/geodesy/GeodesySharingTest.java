@@ -53,9 +53,10 @@ class GeodesySharingTest {
 
     private static ReferenceFrame vesselBody(EarthFrames earth) {
         ReferenceFrame level = earth.carriedLevel("survey launch",
-                GeodeticPath.steadyCourse(Ellipsoid.WGS84, START, 4.0, -2.5), LocalAxes.NED);
-        return earth.body(level, "hull", AttitudeProfile.constantRates(AttitudeSample.still(0.3, 0.02, -0.05),
-                0.01, 0.0, 0.002));
+                GeodeticPath.steadyCourse(Ellipsoid.WGS84, START, new Vector3D(4.0, -2.5, 0), LocalAxes.NED),
+                LocalAxes.NED);
+        return earth.body("hull", level, AttitudeProfile.constantRates(AttitudeSample.stationary(0.3, 0.02, -0.05)
+                .withRates(0.01, 0.0, 0.002)), LocalAxes.NED);
     }
 
     @Test
@@ -78,8 +79,8 @@ class GeodesySharingTest {
     void trajectoryResultsAndUncertainStatesSurviveSerialization() throws Exception {
         EarthFrames earth = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-09-14T06:30:00Z"));
         ReferenceFrame enu = earth.localLevel(START, LocalAxes.ENU);
-        Trajectory tr = TrajectorySolver.in(enu).withForce(earth.gravitationIn(enu))
-                .withEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0)).withMaxStep(2.0)
+        Trajectory tr = TrajectorySolver.of(enu).plusForce(earth.gravitationIn(enu))
+                .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0)).withMaxStep(2.0)
                 .solve(PointState.of(Vector3D.ZERO, new Vector3D(20, 0, 40)), 0.0, 30.0);
         TrajectorySample sample = tr.sampleAt(3.0);
         TrajectorySample sampleCopy = roundTrip(sample);
@@ -105,7 +106,7 @@ class GeodesySharingTest {
         int n = 1500;
         List<FramedState> expected = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            expected.add(hull.state(0.4 * i, PointState.atRest(new Vector3D(12, -3, -8))).in(eci));
+            expected.add(hull.stateAt(0.4 * i, PointState.stationary(new Vector3D(12, -3, -8))).in(eci));
         }
         ExecutorService pool = Executors.newFixedThreadPool(6);
         try {
@@ -116,7 +117,7 @@ class GeodesySharingTest {
                     boolean same = true;
                     for (int k = 0; k < n; k++) {
                         int i = (k * 11 + offset * 101) % n; // 11 and 1500 share no factor: every index
-                        same &= hull.state(0.4 * i, PointState.atRest(new Vector3D(12, -3, -8))).in(eci)
+                        same &= hull.stateAt(0.4 * i, PointState.stationary(new Vector3D(12, -3, -8))).in(eci)
                                 .state().equals(expected.get(i).state());
                     }
                     return same;

@@ -34,11 +34,11 @@ class GravitationForceTest {
         ReferenceFrame eci = EARTH.inertial();
         PointState launch = PointState.of(Vector3D.ZERO, new Vector3D(150, 250, 300));
         double end = 60.0;
-        FramedState local = TrajectorySolver.in(enu).withForce(EARTH.gravitationIn(enu)).withTolerance(1e-12)
-                .solve(launch, 0.0, end).end();
-        FramedState start = enu.state(0.0, launch).in(eci);
-        FramedState inertial = TrajectorySolver.in(eci).withForce(EARTH.gravitationIn(eci)).withTolerance(1e-12)
-                .solve(start, end).end();
+        FramedState local = TrajectorySolver.of(enu).plusForce(EARTH.gravitationIn(enu)).withTolerance(1e-12)
+                .solve(launch, 0.0, end).finalState();
+        FramedState start = enu.stateAt(0.0, launch).in(eci);
+        FramedState inertial = TrajectorySolver.of(eci).plusForce(EARTH.gravitationIn(eci)).withTolerance(1e-12)
+                .solve(start, end).finalState();
         // a ~20 km shot: both runs integrate to ~1e-8 m; 1e-6 m leaves room for the conversion
         // of ~6.4e6 m coordinates (ulp ~1e-9 m) and the two integrators' different step sequences
         double miss = inertial.in(enu).state().position().distance(local.state().position());
@@ -50,8 +50,8 @@ class GravitationForceTest {
         ReferenceFrame ned = EARTH.localLevel(SITE, LocalAxes.NED);
         Vector3D g = EarthModel.WGS84.normalGravityIn(SITE, LocalAxes.NED);
         SpecificForce reaction = SpecificForce.uniform(g.negate());
-        PointState end = TrajectorySolver.in(ned).withForce(EARTH.gravitationIn(ned)).withForce(reaction)
-                .withTolerance(1e-12).solve(PointState.atRest(Vector3D.ZERO), 0.0, 100.0).end().state();
+        PointState end = TrajectorySolver.of(ned).plusForce(EARTH.gravitationIn(ned)).plusForce(reaction)
+                .withTolerance(1e-12).solve(PointState.stationary(Vector3D.ZERO), 0.0, 100.0).finalState().state();
         // residual acceleration ~1e-15 m/s^2 (round-off) would move it ~5e-12 m in 100 s
         assertTrue(end.position().getNorm() < 1e-9, () -> "drift " + end.position());
     }
@@ -59,7 +59,7 @@ class GravitationForceTest {
     @Test
     void inEarthFixedAxesItIsTheModelsGravitation() {
         Vector3D r = EarthModel.WGS84.ellipsoid().toCartesian(SITE);
-        Vector3D viaForce = EARTH.gravitationIn(EARTH.earthFixed()).at(12.0, PointState.atRest(r));
+        Vector3D viaForce = EARTH.gravitationIn(EARTH.earthFixed()).at(12.0, PointState.stationary(r));
         assertEquals(0.0, viaForce.distance(EarthModel.WGS84.gravitation(r)), 0.0);
     }
 

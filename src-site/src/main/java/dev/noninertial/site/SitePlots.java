@@ -76,9 +76,8 @@ public final class SitePlots {
         double omega = 2 * Math.PI / PERIOD;
         // heave first (moves the intermediate frame), then roll of the deck about its x axis;
         // heave leads the roll by a quarter period, as on a beam sea (invented demonstration)
-        Motion deckMotion = Motions.compose(
-                Motions.heave(Vector3D.PLUS_K, HEAVE_AMPLITUDE, omega, Math.PI / 2),
-                Motions.oscillation(Vector3D.PLUS_I, ROLL_AMPLITUDE, omega, 0.0));
+        Motion deckMotion = Motions.heave(Vector3D.PLUS_K, HEAVE_AMPLITUDE, omega, Math.PI / 2)
+                .then(Motions.oscillation(Vector3D.PLUS_I, ROLL_AMPLITUDE, omega, 0.0));
         ReferenceFrame sea = ReferenceFrame.inertialRoot("sea");
         ReferenceFrame deck = sea.attach("deck", deckMotion);
         PointState point = PointState.of(new Vector3D(0, 0, MAST_HEIGHT), new Vector3D(0, 0, CLIMB_SPEED));
@@ -89,7 +88,7 @@ public final class SitePlots {
         double[][] z = new double[4][n];
         for (int i = 0; i < n; i++) {
             t[i] = PERIOD * i / (n - 1);
-            FictitiousAccelerations f = deck.state(t[i], point).fictitious();
+            FictitiousAccelerations f = deck.stateAt(t[i], point).fictitious();
             Vector3D[] terms = {f.frameAcceleration(), f.euler(), f.coriolis(), f.centrifugal()};
             for (int k = 0; k < 4; k++) {
                 y[k][i] = terms[k].getY();

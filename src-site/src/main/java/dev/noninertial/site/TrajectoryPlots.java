@@ -63,7 +63,7 @@ final class TrajectoryPlots {
         double[][] enu = {{0, 1, 0}, {-s, 0, c}, {c, 0, s}};
         ReferenceFrame inertial = ReferenceFrame.inertialRoot("Earth-centred inertial");
         ReferenceFrame ecef = inertial.attach("Earth-fixed", Motions.spin(Vector3D.PLUS_K, 0.0, rate));
-        return ecef.attach("east-north-up", Motions.fixed(site, Orientations.fromMatrix(enu)));
+        return ecef.attach("east-north-up", Motions.stationary(site, Orientations.fromMatrix(enu)));
     }
 
     /**
@@ -71,7 +71,7 @@ final class TrajectoryPlots {
      * straight down: gravitation = gravity minus the inertial terms felt at rest at the origin.
      */
     static Vector3D gravitationAtOrigin(ReferenceFrame enu) {
-        FictitiousAccelerations atRest = enu.state(0.0, PointState.atRest(Vector3D.ZERO)).fictitious();
+        FictitiousAccelerations atRest = enu.stateAt(0.0, PointState.stationary(Vector3D.ZERO)).fictitious();
         return new Vector3D(0, 0, -GRAVITY).subtract(atRest.total());
     }
 
@@ -82,12 +82,12 @@ final class TrajectoryPlots {
         double horizontal = LAUNCH_SPEED * Math.cos(ELEVATION);
         Vector3D v0 = new Vector3D(horizontal * Math.sin(azimuth), horizontal * Math.cos(azimuth),
                 LAUNCH_SPEED * Math.sin(ELEVATION));
-        Trajectory tr = TrajectorySolver.in(enu)
-                .withForce(SpecificForce.uniform(pull))
+        Trajectory tr = TrajectorySolver.of(enu)
+                .plusForce(SpecificForce.uniform(pull))
                 .withTolerance(1e-6)
-                .withEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0))
+                .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0))
                 .solve(PointState.of(Vector3D.ZERO, v0), 0.0, 400.0);
-        return tr.end().state().position();
+        return tr.finalState().state().position();
     }
 
     /**
@@ -136,18 +136,18 @@ final class TrajectoryPlots {
      */
     static CurveSheet[] foucault() {
         ReferenceFrame enu = localLevel(PENDULUM_LATITUDE, EARTH_RATE);
-        Vector3D hold = enu.state(0.0, PointState.atRest(Vector3D.ZERO)).fictitious().total();
+        Vector3D hold = enu.stateAt(0.0, PointState.stationary(Vector3D.ZERO)).fictitious().total();
         double k = GRAVITY / PENDULUM_LENGTH;
         // small-swing pendulum as an isotropic 2-D oscillator about its rest point; the constant
         // part (gravitation plus string tension at rest) holds the rest point still
         SpecificForce restoring = (t, s) -> new Vector3D(-k * s.position().getX(), -k * s.position().getY(), 0)
                 .subtract(hold);
-        TrajectoryEvent turning = TrajectoryEvent.when("turning point",
+        TrajectoryEvent turning = TrajectoryEvent.of("turning point",
                 (t, s) -> s.position().dotProduct(s.velocity())).fallingOnly();
-        Trajectory tr = TrajectorySolver.in(enu)
-                .withForce(restoring)
+        Trajectory tr = TrajectorySolver.of(enu)
+                .plusForce(restoring)
                 .withTolerance(1e-9, 1e-9, 1e-11)
-                .withEvent(turning)
+                .plusEvent(turning)
                 .solve(PointState.of(new Vector3D(0, PENDULUM_AMPLITUDE, 0), Vector3D.ZERO), 0.0, PENDULUM_SPAN);
         List<EventMark> marks = tr.events("turning point");
         double[] t = new double[marks.size() + 1];

@@ -25,5 +25,5 @@ public interface CrossingFunction {
      * @param state the point, seen in and resolved in the integration frame
      * @return the value, finite (any unit)
      */
-    double valueAt(double time, PointState state);
+    double at(double time, PointState state);
 }

@@ -81,12 +81,12 @@ public final class Trajectory {
     }
 
     /** @return the point at {@link #startTime()}, in the integration frame, acceleration from the equations */
-    public FramedState start() {
+    public FramedState initialState() {
         return equations.framed(startTime, startY);
     }
 
     /** @return the point at {@link #endTime()}, in the integration frame, acceleration from the equations */
-    public FramedState end() {
+    public FramedState finalState() {
         return equations.framed(endTime, endY);
     }
 

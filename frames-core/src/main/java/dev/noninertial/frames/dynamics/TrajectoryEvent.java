@@ -18,7 +18,7 @@ import dev.noninertial.frames.Formats;
  * <p>Ready-made events: {@link #groundImpact(Vector3D, double)} (stops),
  * {@link #heightCrossing(String, Vector3D, double)} and
  * {@link #rangeReached(String, Vector3D, Vector3D, double)} (recorded), and
- * {@link #when(String, CrossingFunction)} for anything else. Change the behaviour with
+ * {@link #of(String, CrossingFunction)} for anything else. Change the behaviour with
  * {@link #stopping()}, {@link #recording()}, {@link #risingOnly()}, {@link #fallingOnly()}.
  *
  * <p>Caution: an impact time or point computed here holds for the modelled forces only (no drag
@@ -72,7 +72,7 @@ public final class TrajectoryEvent {
      * @throws IllegalArgumentException if {@code name} is blank
      * @throws NullPointerException if an argument is null
      */
-    public static TrajectoryEvent when(String name, CrossingFunction function) {
+    public static TrajectoryEvent of(String name, CrossingFunction function) {
         return new TrajectoryEvent(checkName(name), Arguments.nonNull("function", function), Direction.EITHER,
                 false, DEFAULT_CHECK_INTERVAL, DEFAULT_TIME_ACCURACY);
     }
@@ -108,7 +108,7 @@ public final class TrajectoryEvent {
         double ux = u.getX();
         double uy = u.getY();
         double uz = u.getZ();
-        return when(name, (time, s) -> {
+        return of(name, (time, s) -> {
             Vector3D r = s.position();
             return ux * r.getX() + uy * r.getY() + uz * r.getZ() - h;
         });
@@ -131,7 +131,7 @@ public final class TrajectoryEvent {
         Vector3D u = Arguments.unitAxis("up", up);
         Vector3D o = Arguments.finite("from", from);
         double d = Arguments.positive("range", range);
-        return when(name, (time, s) -> {
+        return of(name, (time, s) -> {
             Vector3D r = s.position().subtract(o);
             double along = r.dotProduct(u);
             Vector3D horizontal = r.subtract(along, u);

@@ -37,10 +37,10 @@ import dev.noninertial.frames.ReferenceFrame;
  * its root).
  *
  * <pre>{@code
- * TrajectorySolver solver = TrajectorySolver.in(site)
- *         .withForce(SpecificForce.uniform(gravitationInSite))
+ * TrajectorySolver solver = TrajectorySolver.of(site)
+ *         .plusForce(SpecificForce.uniform(gravitationInSite))
  *         .withTolerance(1e-9)
- *         .withEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0));
+ *         .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0));
  * Trajectory tr = solver.solve(PointState.of(r0, v0), 0.0, 120.0);
  * }</pre>
  *
@@ -114,7 +114,7 @@ public final class TrajectorySolver {
      * @return the solver
      * @throws NullPointerException if {@code frame} is null
      */
-    public static TrajectorySolver in(ReferenceFrame frame) {
+    public static TrajectorySolver of(ReferenceFrame frame) {
         Arguments.nonNull("frame", frame);
         return new TrajectorySolver(frame, List.of(), List.of(), DEFAULT_POSITION_TOLERANCE,
                 DEFAULT_VELOCITY_TOLERANCE, DEFAULT_RELATIVE_TOLERANCE, 0.0, Double.NaN, DEFAULT_MAX_EVALUATIONS,
@@ -129,7 +129,7 @@ public final class TrajectorySolver {
      * @return the copy
      * @throws NullPointerException if {@code force} is null
      */
-    public TrajectorySolver withForce(SpecificForce force) {
+    public TrajectorySolver plusForce(SpecificForce force) {
         Arguments.nonNull("force", force);
         List<SpecificForce> more = new ArrayList<>(forces);
         more.add(force);
@@ -144,7 +144,7 @@ public final class TrajectorySolver {
      * @return the copy
      * @throws NullPointerException if {@code event} is null
      */
-    public TrajectorySolver withEvent(TrajectoryEvent event) {
+    public TrajectorySolver plusEvent(TrajectoryEvent event) {
         Arguments.nonNull("event", event);
         List<TrajectoryEvent> more = new ArrayList<>(events);
         more.add(event);
@@ -431,7 +431,7 @@ public final class TrajectorySolver {
                     new Vector3D(d[3], d[4], d[5]));
             double value;
             try {
-                value = event.function().valueAt(t, p);
+                value = event.function().at(t, p);
             } catch (TrajectoryFailure e) {
                 throw e;
             } catch (RuntimeException e) {

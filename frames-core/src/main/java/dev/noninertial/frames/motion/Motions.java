@@ -2,7 +2,6 @@ package dev.noninertial.frames.motion;
 
 import java.io.Serializable;
 import java.util.Arrays;
-import java.util.List;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -24,7 +23,8 @@ import dev.noninertial.frames.Placement;
  * (equal to its B components, since {@code n} is the rotation axis).
  *
  * <p>Time {@code t} is in seconds from the user's epoch. All motions returned here are immutable,
- * thread-safe and serializable (when the motions given to {@link #compose(Motion...)} are).
+ * thread-safe and serializable. Stack motions with {@link Motion#then(Motion)}; a logged motion
+ * is made by {@link SampledMotion#fromArrays(double[], double[], double[])}.
  */
 public final class Motions {
 
@@ -37,8 +37,8 @@ public final class Motions {
      * @param offset position of F's origin in B (m)
      * @return the motion
      */
-    public static Motion fixed(Vector3D offset) {
-        return fixed(offset, Rotation.IDENTITY);
+    public static Motion stationary(Vector3D offset) {
+        return stationary(offset, Rotation.IDENTITY);
     }
 
     /**
@@ -48,8 +48,8 @@ public final class Motions {
      * @param orientation orientation of F, mapping B components to F components
      * @return the motion
      */
-    public static Motion fixed(Vector3D offset, Rotation orientation) {
-        return new Fixed(Placement.fixed(offset, orientation));
+    public static Motion stationary(Vector3D offset, Rotation orientation) {
+        return new Fixed(Placement.stationary(offset, orientation));
     }
 
     /**
@@ -136,25 +136,6 @@ public final class Motions {
                 Arguments.finite("amplitude", amplitude),
                 Arguments.finite("angularFrequency", angularFrequency),
                 Arguments.finite("phase", phase));
-    }
-
-    /**
-     * Stacks motions: the first places an intermediate frame in the parent, each next one places
-     * the next frame in the previous, the last places F. Equivalent to attaching a chain of
-     * frames, without naming the intermediate ones.
-     *
-     * @param chain motions from the outermost to the innermost, at least one
-     * @return the combined motion
-     */
-    public static Motion compose(Motion... chain) {
-        Arguments.nonNull("chain", chain);
-        if (chain.length == 0) {
-            throw new IllegalArgumentException("chain must hold at least one motion, got none");
-        }
-        for (int i = 0; i < chain.length; i++) {
-            Arguments.nonNull("chain[" + i + "]", chain[i]);
-        }
-        return new Stack(chain.clone());
     }
 
     /** Placement for a turn by angle th about unit axis n, with rate th1 and acceleration th2. */
@@ -295,7 +276,7 @@ public final class Motions {
 
         @Override
         public String toString() {
-            return "fixed " + placement;
+            return "stationary " + placement;
         }
     }
 
@@ -546,56 +527,5 @@ public final class Motions {
             }
             return b.toString();
         }
-    }
-
-    private static final class Stack implements Motion, Serializable {
-        private static final long serialVersionUID = 1L;
-        private final Motion[] chain;
-
-        Stack(Motion[] chain) {
-            this.chain = chain;
-        }
-
-        @Override
-        public Placement at(double t) {
-            Placement p = chain[0].at(t);
-            for (int i = 1; i < chain.length; i++) {
-                p = p.then(chain[i].at(t));
-            }
-            return p;
-        }
-
-        @Override
-        public boolean equals(Object other) {
-            return other instanceof Stack && Arrays.equals(chain, ((Stack) other).chain);
-        }
-
-        @Override
-        public int hashCode() {
-            return Arrays.hashCode(chain);
-        }
-
-        @Override
-        public String toString() {
-            return "compose" + List.of(chain);
-        }
-    }
-
-    /**
-     * A logged motion: samples of the origin position and the attitude, interpolated with
-     * mutually consistent rates; same as
-     * {@link SampledMotion#fromArrays(double[], double[], double[])}, where the interpolation, the
-     * refusals and the file reader are described.
-     *
-     * @param times sample times (s), finite, strictly increasing, at least two
-     * @param positions origin of F in B axes, packed {@code x, y, z} per sample (m)
-     * @param quaternions orientation of F in B, packed {@code q0, q1, q2, q3} per sample, scalar
-     *        first, mapping B components to F components, unit within
-     *        {@link Orientations#QUATERNION_TOLERANCE}
-     * @return the motion, refusing queries outside [times[0], times[n - 1]]
-     * @throws IllegalArgumentException if a sample is refused (the message names its index)
-     */
-    public static SampledMotion sampled(double[] times, double[] positions, double[] quaternions) {
-        return SampledMotion.fromArrays(times, positions, quaternions);
     }
 }

@@ -60,7 +60,7 @@ import dev.noninertial.frames.Placement;
  * <h2>Refusals</h2>
  * Construction refuses, naming the sample: fewer than two samples, times that are not finite or
  * do not increase strictly, non-finite values, quaternions whose norm differs from 1 by more than
- * {@link Orientations#QUATERNION_TOLERANCE} (those within are normalised), and attitudes that
+ * {@link Orientations#UNIT_QUATERNION_TOLERANCE} (those within are normalised), and attitudes that
  * turn by more than {@link #MAX_TURN_BETWEEN_SAMPLES} radians between consecutive samples (such a
  * record is under-sampled: the sense of the turn is ambiguous). Queries before the first or after
  * the last sample, or strictly inside a gap longer than {@link #maxGap()}, are refused: nothing is
@@ -121,7 +121,7 @@ public final class SampledMotion implements Motion, Serializable {
      *        {@code 3 * times.length}
      * @param quaternions orientation of F in B, packed {@code q0, q1, q2, q3} per sample, scalar
      *        first, library convention (maps B components to F components), each unit within
-     *        {@link Orientations#QUATERNION_TOLERANCE}; length {@code 4 * times.length}
+     *        {@link Orientations#UNIT_QUATERNION_TOLERANCE}; length {@code 4 * times.length}
      * @return the motion, without gap limit
      * @throws NullPointerException if an array is null
      * @throws IllegalArgumentException if a length is wrong or a sample is refused (the message names
@@ -246,7 +246,7 @@ public final class SampledMotion implements Motion, Serializable {
      * @throws IllegalArgumentException if the length is wrong or a value is not finite (naming the
      *         sample index)
      */
-    public SampledMotion withAngularRates(double[] angularVelocities) {
+    public SampledMotion withAngularVelocities(double[] angularVelocities) {
         Arguments.nonNull("angularVelocities", angularVelocities);
         checkLength("angularVelocities", angularVelocities.length, 3, times.length);
         double[] w = finiteCopy("angularVelocities", angularVelocities);
@@ -278,12 +278,12 @@ public final class SampledMotion implements Motion, Serializable {
     }
 
     /** @return time of the first sample (s) */
-    public double start() {
+    public double startTime() {
         return times[0];
     }
 
     /** @return time of the last sample (s) */
-    public double end() {
+    public double endTime() {
         return times[times.length - 1];
     }
 
@@ -312,7 +312,7 @@ public final class SampledMotion implements Motion, Serializable {
     }
 
     /** @return whether measured angular rates are used */
-    public boolean hasMeasuredAngularRates() {
+    public boolean hasMeasuredAngularVelocities() {
         return rates != null;
     }
 
@@ -347,7 +347,7 @@ public final class SampledMotion implements Motion, Serializable {
     /**
      * Placement of F in B at time {@code t}, interpolated as described in the class comment.
      *
-     * @param t time (s), within [start(), end()] and not strictly inside a gap longer than
+     * @param t time (s), within [startTime(), endTime()] and not strictly inside a gap longer than
      *        {@link #maxGap()}
      * @return the placement with position, velocity and acceleration of the origin (B axes),
      *         orientation (maps B components to F components), angular velocity and angular
@@ -792,10 +792,10 @@ public final class SampledMotion implements Motion, Serializable {
             double q2 = quaternions[4 * i + 2];
             double q3 = quaternions[4 * i + 3];
             double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-            if (!(Math.abs(norm - 1.0) <= Orientations.QUATERNION_TOLERANCE)) {
+            if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
                 throw new IllegalArgumentException(label.apply(i) + ": quaternion (" + q0 + ", " + q1 + ", " + q2
                         + ", " + q3 + ") must be finite and unit (|norm - 1| <= "
-                        + Orientations.QUATERNION_TOLERANCE + "), got norm " + norm);
+                        + Orientations.UNIT_QUATERNION_TOLERANCE + "), got norm " + norm);
             }
             double sign = 1.0 / norm;
             if (i > 0) {

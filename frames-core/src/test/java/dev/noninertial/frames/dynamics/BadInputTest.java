@@ -30,7 +30,7 @@ class BadInputTest {
 
     @Test
     void spanMustRunForwardAndBeFinite() {
-        TrajectorySolver s = TrajectorySolver.in(LAB);
+        TrajectorySolver s = TrajectorySolver.of(LAB);
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.solve(START, 5.0, 2.0)),
                 "endTime", "after startTime = 5.0", "2.0");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.solve(START, 5.0, 5.0)), "endTime");
@@ -46,7 +46,7 @@ class BadInputTest {
 
     @Test
     void tolerancesAndSettingsMustBePositive() {
-        TrajectorySolver s = TrajectorySolver.in(LAB);
+        TrajectorySolver s = TrajectorySolver.of(LAB);
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.withTolerance(0.0)), "tolerance", "0.0");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.withTolerance(-1e-9)), "tolerance");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.withTolerance(1e-9, Double.NaN, 1e-9)),
@@ -55,21 +55,21 @@ class BadInputTest {
                 "relative");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.withMaxStep(0.0)), "seconds");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> s.withMaxEvaluations(0)), "count", "0");
-        assertThrows(NullPointerException.class, () -> s.withForce(null));
-        assertThrows(NullPointerException.class, () -> s.withEvent(null));
+        assertThrows(NullPointerException.class, () -> s.plusForce(null));
+        assertThrows(NullPointerException.class, () -> s.plusEvent(null));
         assertMessage(assertThrows(IllegalArgumentException.class,
                 () -> TrajectoryEvent.groundImpact(Vector3D.ZERO, 0.0)), "up");
         assertMessage(assertThrows(IllegalArgumentException.class,
                 () -> TrajectoryEvent.rangeReached("r", Vector3D.PLUS_K, Vector3D.ZERO, -5.0)), "range", "-5.0");
         assertMessage(assertThrows(IllegalArgumentException.class,
-                () -> TrajectoryEvent.when(" ", (t, st) -> 0.0)), "name");
+                () -> TrajectoryEvent.of(" ", (t, st) -> 0.0)), "name");
     }
 
     @Test
     void nonFiniteForceIsReportedWithTimeAndState() {
         SpecificForce bad = (t, st) -> t > 1.0 ? new Vector3D(Double.NaN, 0, 0) : Vector3D.ZERO;
         TrajectoryFailure f = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce(bad).withMaxStep(0.1).solve(START, 0.0, 3.0));
+                () -> TrajectorySolver.of(LAB).plusForce(bad).withMaxStep(0.1).solve(START, 0.0, 3.0));
         assertMessage(f, "specific force #0", "non-finite", "NaN", "at t = ", "state r = (");
         assertTrue(f.time() > 1.0 && f.time() <= 1.1, "time " + f.time());
         assertEquals(6, f.components().length);
@@ -82,7 +82,7 @@ class BadInputTest {
         // finite but absurd force: the state overflows to infinity within a step or two
         SpecificForce huge = (t, st) -> new Vector3D(1e308, 0, 0);
         TrajectoryFailure f = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce(huge).solve(START, 0.0, 10.0));
+                () -> TrajectorySolver.of(LAB).plusForce(huge).solve(START, 0.0, 10.0));
         assertMessage(f, "non-finite", "at t = ");
     }
 
@@ -95,11 +95,11 @@ class BadInputTest {
             return Vector3D.ZERO;
         };
         TrajectoryFailure f = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce(throwing).solve(START, 0.0, 3.0));
+                () -> TrajectorySolver.of(LAB).plusForce(throwing).solve(START, 0.0, 3.0));
         assertMessage(f, "threw", "table lookup out of range", "at t = ");
         assertTrue(f.getCause() instanceof IllegalStateException);
         TrajectoryFailure n = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce((t, st) -> null).solve(START, 0.0, 3.0));
+                () -> TrajectorySolver.of(LAB).plusForce((t, st) -> null).solve(START, 0.0, 3.0));
         assertMessage(n, "returned null", "at t = 0 s");
     }
 
@@ -113,44 +113,44 @@ class BadInputTest {
         };
         ReferenceFrame logged = LAB.attach("logged", limited);
         TrajectoryFailure m = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(logged).solve(START, 0.0, 5.0));
+                () -> TrajectorySolver.of(logged).solve(START, 0.0, 5.0));
         assertMessage(m, "motion of frame 'lab/logged'", "t must be in [0, 2] s");
         assertTrue(m.time() > 2.0);
         TrajectoryFailure budget = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce((t, st) -> st.position().scalarMultiply(-100.0))
+                () -> TrajectorySolver.of(LAB).plusForce((t, st) -> st.position().scalarMultiply(-100.0))
                         .withTolerance(1e-12).withMaxEvaluations(50).solve(START, 0.0, 100.0));
         assertMessage(budget, "gave up", "at t = ");
         // a stiff spring (period 6e-4 s) cannot be followed with steps of at least 0.01 s
         TrajectoryFailure stiff = assertThrows(TrajectoryFailure.class,
-                () -> TrajectorySolver.in(LAB).withForce((t, st) -> st.position().scalarMultiply(-1e8))
+                () -> TrajectorySolver.of(LAB).plusForce((t, st) -> st.position().scalarMultiply(-1e8))
                         .withMinStep(0.01).solve(START, 0.0, 10.0));
         assertMessage(stiff, "gave up", "at t = ");
         assertMessage(assertThrows(IllegalArgumentException.class,
-                () -> TrajectorySolver.in(LAB).withMinStep(1.0).withMaxStep(0.5).solve(START, 0.0, 10.0)),
+                () -> TrajectorySolver.of(LAB).withMinStep(1.0).withMaxStep(0.5).solve(START, 0.0, 10.0)),
                 "minimum step", "0.5", "1.0");
     }
 
     @Test
     void eventFunctionAndDenseOutputRangeAreChecked() {
-        TrajectoryFailure e = assertThrows(TrajectoryFailure.class, () -> TrajectorySolver.in(LAB)
-                .withEvent(TrajectoryEvent.when("broken", (t, st) -> t > 0.5 ? Double.NaN : 1.0))
+        TrajectoryFailure e = assertThrows(TrajectoryFailure.class, () -> TrajectorySolver.of(LAB)
+                .plusEvent(TrajectoryEvent.of("broken", (t, st) -> t > 0.5 ? Double.NaN : 1.0))
                 .solve(START, 0.0, 2.0));
         assertMessage(e, "event 'broken'", "non-finite", "at t = ");
-        Trajectory tr = TrajectorySolver.in(LAB).solve(START, 0.0, 2.0);
+        Trajectory tr = TrajectorySolver.of(LAB).solve(START, 0.0, 2.0);
         assertMessage(assertThrows(IllegalArgumentException.class, () -> tr.at(2.5)), "t must be in [0.0, 2.0]",
                 "2.5");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> tr.at(-0.1)), "-0.1");
         assertMessage(assertThrows(IllegalArgumentException.class, () -> tr.samples(0.0)), "interval");
         assertMessage(assertThrows(IllegalArgumentException.class,
-                () -> TrajectorySolver.in(LAB).withIntegrator(() -> null).solve(START, 0.0, 1.0)), "null");
+                () -> TrajectorySolver.of(LAB).withIntegrator(() -> null).solve(START, 0.0, 1.0)), "null");
     }
 
     @Test
     void customIntegratorIsUsed() {
         // fixed-step classical Runge-Kutta is exact on free motion (rounding only, 1e-12 m)
-        Trajectory tr = TrajectorySolver.in(LAB).withIntegrator(() -> new ClassicalRungeKuttaIntegrator(0.25))
+        Trajectory tr = TrajectorySolver.of(LAB).withIntegrator(() -> new ClassicalRungeKuttaIntegrator(0.25))
                 .solve(START, 0.0, 2.0);
         assertEquals(8, tr.stepCount());
-        assertEquals(5.0, tr.end().state().position().getZ(), 1e-12);
+        assertEquals(5.0, tr.finalState().state().position().getZ(), 1e-12);
     }
 }

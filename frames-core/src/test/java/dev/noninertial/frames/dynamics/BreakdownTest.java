@@ -28,8 +28,8 @@ class BreakdownTest {
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         ReferenceFrame disk = lab.attach("disk", Motions.spin(Vector3D.PLUS_K, 0.0, w));
         SpecificForce spoke = (t, s) -> s.position().scalarMultiply(-w * w);   // centripetal pull
-        Trajectory tr = TrajectorySolver.in(disk).withForce(spoke).withTolerance(1e-12)
-                .solve(PointState.atRest(new Vector3D(r, 0, 0)), 0.0, 10.0);
+        Trajectory tr = TrajectorySolver.of(disk).plusForce(spoke).withTolerance(1e-12)
+                .solve(PointState.stationary(new Vector3D(r, 0, 0)), 0.0, 10.0);
         List<TrajectorySample> samples = tr.samples(2.5);
         assertEquals(5, samples.size());                  // 0, 2.5, 5, 7.5, 10
         assertEquals(10.0, samples.get(4).time(), 0.0);
@@ -57,7 +57,7 @@ class BreakdownTest {
         double v = 3.0;
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         ReferenceFrame disk = lab.attach("disk", Motions.spin(Vector3D.PLUS_K, 0.0, w));
-        Trajectory tr = TrajectorySolver.in(disk).withTolerance(1e-12)
+        Trajectory tr = TrajectorySolver.of(disk).withTolerance(1e-12)
                 .solve(PointState.of(Vector3D.ZERO, new Vector3D(v, 0, 0)), 0.0, 1.0e-3);
         List<TrajectorySample> samples = tr.samples(3e-4);   // 0, 3e-4, 6e-4, 9e-4, then 1e-3
         assertEquals(5, samples.size());

@@ -26,17 +26,17 @@ class EastwardDeflectionTest {
         double g = 9.81;     // plumb-line gravity chosen for the test
         double h = 150.0;
         SpinningSite earth = new SpinningSite(EARTH_RATE, lat, RADIUS);
-        TrajectorySolver solver = TrajectorySolver.in(earth.site)
-                .withForce(SpecificForce.uniform(earth.plumbGravitation(g)))
+        TrajectorySolver solver = TrajectorySolver.of(earth.site)
+                .plusForce(SpecificForce.uniform(earth.plumbGravitation(g)))
                 .withTolerance(1e-11, 1e-11, 1e-13)
-                .withEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0));
-        Trajectory tr = solver.solve(PointState.atRest(new Vector3D(0, 0, h)), 0.0, 60.0);
+                .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0));
+        Trajectory tr = solver.solve(PointState.stationary(new Vector3D(0, 0, h)), 0.0, 60.0);
 
         double t = Math.sqrt(2 * h / g);
         double expected = EARTH_RATE * g * t * t * t * Math.cos(Math.toRadians(lat)) / 3.0;
         double east = tr.at(t).state().position().getX();
         double impactTime = tr.stopEvent().orElseThrow().time();
-        Vector3D impact = tr.end().state().position();
+        Vector3D impact = tr.finalState().state().position();
         System.out.printf("MEASURED east deflection: h=%.0f m, t=%.6f s, expected %.9e m, integrated %.9e m,"
                 + " relative difference %.2e; impact time %.9f s (vs %.9f), south %.3e m%n",
                 h, t, expected, east, (east - expected) / expected, impactTime, t, impact.getY());

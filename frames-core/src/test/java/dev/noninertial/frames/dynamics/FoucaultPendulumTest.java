@@ -40,14 +40,14 @@ class FoucaultPendulumTest {
                     -vertical * vertical * r.getZ());
         };
         // farthest points of the swing: r . v (horizontal) goes from positive to negative
-        TrajectoryEvent turningPoint = TrajectoryEvent.when("turning point", (t, s) ->
+        TrajectoryEvent turningPoint = TrajectoryEvent.of("turning point", (t, s) ->
                 s.position().getX() * s.velocity().getX() + s.position().getY() * s.velocity().getY())
                 .fallingOnly().withCheckInterval(0.05);
-        Trajectory tr = TrajectorySolver.in(site.site)
-                .withForce(restoring)
+        Trajectory tr = TrajectorySolver.of(site.site)
+                .plusForce(restoring)
                 .withTolerance(1e-12, 1e-12, 1e-12)
-                .withEvent(turningPoint)
-                .solve(PointState.atRest(new Vector3D(0.1, 0, 0)), 0.0, 200.0);
+                .plusEvent(turningPoint)
+                .solve(PointState.stationary(new Vector3D(0.1, 0, 0)), 0.0, 200.0);
 
         List<EventMark> marks = tr.events("turning point");
         // least-squares slope of the swing-line angle (defined modulo pi) against time

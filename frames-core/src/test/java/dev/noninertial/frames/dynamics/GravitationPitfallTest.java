@@ -26,12 +26,12 @@ class GravitationPitfallTest {
         double g = 9.81;
         SpinningSite earth = new SpinningSite(EARTH_RATE, 49.0, RADIUS);
         SpecificForce reaction = SpecificForce.uniform(new Vector3D(0, 0, g));
-        Trajectory held = TrajectorySolver.in(earth.site)
-                .withForce(SpecificForce.uniform(earth.plumbGravitation(g)))
-                .withForce(reaction)
+        Trajectory held = TrajectorySolver.of(earth.site)
+                .plusForce(SpecificForce.uniform(earth.plumbGravitation(g)))
+                .plusForce(reaction)
                 .withTolerance(1e-12, 1e-12, 1e-13)
-                .solve(PointState.atRest(Vector3D.ZERO), 0.0, 100.0);
-        double drift = held.end().state().position().getNorm();
+                .solve(PointState.stationary(Vector3D.ZERO), 0.0, 100.0);
+        double drift = held.finalState().state().position().getNorm();
         System.out.printf("MEASURED held point, gravitation passed: drift after 100 s %.3e m%n", drift);
         // exact equilibrium; only rounding of the ~0.03 m/s^2 terms that cancel remains:
         // 1e-9 m over 100 s
@@ -43,18 +43,18 @@ class GravitationPitfallTest {
         double g = 9.81;
         double lat = Math.toRadians(49.0);
         SpinningSite earth = new SpinningSite(EARTH_RATE, 49.0, RADIUS);
-        Trajectory wrong = TrajectorySolver.in(earth.site)
-                .withForce(SpecificForce.uniform(new Vector3D(0, 0, -g)))   // gravity: the mistake
-                .withForce(SpecificForce.uniform(new Vector3D(0, 0, g)))    // reaction
+        Trajectory wrong = TrajectorySolver.of(earth.site)
+                .plusForce(SpecificForce.uniform(new Vector3D(0, 0, -g)))   // gravity: the mistake
+                .plusForce(SpecificForce.uniform(new Vector3D(0, 0, g)))    // reaction
                 .withTolerance(1e-12, 1e-12, 1e-13)
-                .solve(PointState.atRest(Vector3D.ZERO), 0.0, 10.0);
+                .solve(PointState.stationary(Vector3D.ZERO), 0.0, 10.0);
         // extra acceleration: centrifugal w^2 d with d = a cos(lat), away from the axis; in ENU its
         // north part is -w^2 a cos(lat) sin(lat) (toward the equator), its up part w^2 a cos^2(lat)
         double w2d = EARTH_RATE * EARTH_RATE * RADIUS * Math.cos(lat);
         double south = w2d * Math.sin(lat);
         Vector3D expected = new Vector3D(0, -0.5 * south * 100, 0.5 * w2d * Math.cos(lat) * 100);
-        Vector3D got = wrong.end().state().position();
-        Vector3D horizontalAcceleration = wrong.start().state().acceleration();
+        Vector3D got = wrong.finalState().state().position();
+        Vector3D horizontalAcceleration = wrong.initialState().state().acceleration();
         System.out.printf("MEASURED gravity passed by mistake: start acceleration %s, horizontal %.5f m/s^2,"
                 + " displacement after 10 s %s (expected %s)%n", horizontalAcceleration,
                 -horizontalAcceleration.getY(), got, expected);

@@ -27,7 +27,7 @@ class SchemesTest {
     static final PointState PUCK = PointState.of(new Vector3D(0.3, 0, 0), new Vector3D(0.2, 0.1, 0));
 
     static double offLine(Trajectory tr) {
-        FramedState start = tr.start().in(LAB);
+        FramedState start = tr.initialState().in(LAB);
         double worst = 0;
         for (double t = 0; t <= 5.0; t += 0.25) {
             FramedState s = tr.at(t).in(LAB);
@@ -40,7 +40,7 @@ class SchemesTest {
     @Test
     void everySchemeKeepsThePuckOnItsInertialLine() {
         for (IntegrationScheme scheme : IntegrationScheme.values()) {
-            Trajectory tr = TrajectorySolver.in(TABLE).withScheme(scheme).withTolerance(1e-10, 1e-10, 1e-10)
+            Trajectory tr = TrajectorySolver.of(TABLE).withScheme(scheme).withTolerance(1e-10, 1e-10, 1e-10)
                     .solve(PUCK, 0.0, 5.0);
             double worst = offLine(tr);
             System.out.printf("MEASURED scheme %s: off the line %.3e m, %d steps, %d evaluations%n",
@@ -53,13 +53,13 @@ class SchemesTest {
 
     @Test
     void sharedSolverGivesIdenticalResultsOnSeveralThreads() throws Exception {
-        TrajectorySolver solver = TrajectorySolver.in(TABLE).withTolerance(1e-12);
-        Vector3D reference = solver.solve(PUCK, 0.0, 5.0).end().state().position();
+        TrajectorySolver solver = TrajectorySolver.of(TABLE).withTolerance(1e-12);
+        Vector3D reference = solver.solve(PUCK, 0.0, 5.0).finalState().state().position();
         ExecutorService pool = Executors.newFixedThreadPool(2);
         try {
             java.util.List<Future<Vector3D>> runs = new java.util.ArrayList<>();
             for (int i = 0; i < 4; i++) {
-                runs.add(pool.submit(() -> solver.solve(PUCK, 0.0, 5.0).end().state().position()));
+                runs.add(pool.submit(() -> solver.solve(PUCK, 0.0, 5.0).finalState().state().position()));
             }
             for (Future<Vector3D> f : runs) {
                 // deterministic arithmetic: bit-identical

@@ -29,7 +29,7 @@ final class SpinningSite {
         body = inertial.attach("body", Motions.spin(Vector3D.PLUS_K, 0.0, rate));
         // rows: east, north, up in body axes (v_site = M v_body)
         double[][] enu = {{0, 1, 0}, {-s, 0, c}, {c, 0, s}};
-        site = body.attach("site", Motions.fixed(new Vector3D(radius * c, 0, radius * s),
+        site = body.attach("site", Motions.stationary(new Vector3D(radius * c, 0, radius * s),
                 Orientations.fromMatrix(enu)));
     }
 
@@ -40,7 +40,7 @@ final class SpinningSite {
      * centrifugal pull of the site's circle about the axis).
      */
     Vector3D plumbGravitation(double g) {
-        Vector3D inertialTerms = site.placementIn(inertial, 0.0).fictitious(PointState.atRest(Vector3D.ZERO)).total();
+        Vector3D inertialTerms = site.placementIn(inertial, 0.0).fictitious(PointState.stationary(Vector3D.ZERO)).total();
         return new Vector3D(0, 0, -g).subtract(inertialTerms);
     }
 }

@@ -27,10 +27,10 @@ class ThrowEventsTest {
         double v = 30.0;
         double mark = 20.0;
         ReferenceFrame yard = ReferenceFrame.inertialRoot("yard");
-        Trajectory tr = TrajectorySolver.in(yard)
-                .withForce(SpecificForce.uniform(new Vector3D(0, 0, -G)))
-                .withEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0))
-                .withEvent(TrajectoryEvent.heightCrossing("20 m", Vector3D.PLUS_K, mark))
+        Trajectory tr = TrajectorySolver.of(yard)
+                .plusForce(SpecificForce.uniform(new Vector3D(0, 0, -G)))
+                .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0))
+                .plusEvent(TrajectoryEvent.heightCrossing("20 m", Vector3D.PLUS_K, mark))
                 .solve(PointState.of(new Vector3D(0, 0, h0), new Vector3D(0, 0, v)), 0.0, 60.0);
 
         double impact = (v + Math.sqrt(v * v + 2 * G * h0)) / G;
@@ -50,7 +50,7 @@ class ThrowEventsTest {
         assertFalse(stop.rising());
         assertEquals(impact, stop.time(), 1e-9);
         assertEquals(impact, tr.endTime(), 1e-9);
-        assertEquals(0.0, tr.end().state().position().getZ(), 1e-7);   // |dz/dt| ~ 31 m/s times 1e-9 s
+        assertEquals(0.0, tr.finalState().state().position().getZ(), 1e-7);   // |dz/dt| ~ 31 m/s times 1e-9 s
         assertEquals(2, crossings.size());
         assertTrue(crossings.get(0).rising());
         assertFalse(crossings.get(1).rising());
@@ -67,11 +67,11 @@ class ThrowEventsTest {
     void rangeEventAndUserStopEventFireAtAnalyticTimes() {
         double u = 15.0;   // 50 m reached at 3.33 s, before the apex at 4.08 s
         ReferenceFrame yard = ReferenceFrame.inertialRoot("yard");
-        Trajectory tr = TrajectorySolver.in(yard)
-                .withForce(SpecificForce.uniform(new Vector3D(0, 0, -G)))
-                .withEvent(TrajectoryEvent.rangeReached("50 m", Vector3D.PLUS_K, Vector3D.ZERO, 50.0))
+        Trajectory tr = TrajectorySolver.of(yard)
+                .plusForce(SpecificForce.uniform(new Vector3D(0, 0, -G)))
+                .plusEvent(TrajectoryEvent.rangeReached("50 m", Vector3D.PLUS_K, Vector3D.ZERO, 50.0))
                 // user event: stop at the apex, where the vertical velocity changes sign
-                .withEvent(TrajectoryEvent.when("apex", (t, s) -> s.velocity().getZ()).fallingOnly().stopping())
+                .plusEvent(TrajectoryEvent.of("apex", (t, s) -> s.velocity().getZ()).fallingOnly().stopping())
                 .solve(PointState.of(Vector3D.ZERO, new Vector3D(u, 0, 40.0)), 0.0, 60.0);
         double rangeTime = 50.0 / u;
         double apex = 40.0 / G;

@@ -25,10 +25,10 @@ class TurntablePuckTest {
         PointState onTable = PointState.of(new Vector3D(0.2, 0.0, 0.0), new Vector3D(0.5, 0.3, 0.0));
         // tolerances: the puck reaches ~10 m from the axis where the table turns at 5 rad/s, so
         // table-frame speeds reach ~50 m/s; 1e-13 relative keeps the local error below 1e-11 m
-        Trajectory tr = TrajectorySolver.in(table)
+        Trajectory tr = TrajectorySolver.of(table)
                 .withTolerance(1e-12, 1e-12, 1e-13)
                 .solve(onTable, 0.0, 10.0);
-        FramedState start = tr.start().in(lab);
+        FramedState start = tr.initialState().in(lab);
         Vector3D r0 = start.state().position();
         Vector3D v0 = start.state().velocity();
         double worst = 0;
@@ -38,7 +38,7 @@ class TurntablePuckTest {
             worst = Math.max(worst, s.state().position().distance(new Vector3D(1.0, r0, s.time(), v0)));
             worstAccel = Math.max(worstAccel, s.state().acceleration().getNorm());
         }
-        double tableRadius = tr.end().state().position().getNorm();
+        double tableRadius = tr.finalState().state().position().getNorm();
         System.out.printf("MEASURED puck: largest distance from the straight line %.3e m over %.2f m travelled"
                 + " (table-frame radius at end %.2f m), largest inertial acceleration %.3e m/s^2, steps %d%n",
                 worst, v0.getNorm() * 10, tableRadius, worstAccel, tr.stepCount());

@@ -9,15 +9,14 @@ import dev.noninertial.frames.Placement;
 /**
  * An analytic platform motion and its samples, the reference of the sampled-motion tests: a
  * spin-up about the vertical, a harmonic roll about the spun x axis and a harmonic heave along the
- * rolled z axis, stacked with {@link Motions#compose(Motion...)}. Its rates are exact (closed-form
+ * rolled z axis, stacked with {@link Motion#then(Motion)}. Its rates are exact (closed-form
  * derivatives of sines and polynomials, composed by the textbook rules of relative motion).
  */
 final class AnalyticRecord {
 
-    static final Motion REFERENCE = Motions.compose(
-            Motions.spinUp(Vector3D.PLUS_K, 0.2, 0.05, 0.004),
-            Motions.oscillation(Vector3D.PLUS_I, 0.12, 2 * Math.PI / 7, 0.3),
-            Motions.heave(Vector3D.PLUS_K, 0.8, 2 * Math.PI / 9, 0.1));
+    static final Motion REFERENCE = Motions.spinUp(Vector3D.PLUS_K, 0.2, 0.05, 0.004)
+            .then(Motions.oscillation(Vector3D.PLUS_I, 0.12, 2 * Math.PI / 7, 0.3))
+            .then(Motions.heave(Vector3D.PLUS_K, 0.8, 2 * Math.PI / 9, 0.1));
 
     final double[] times;
     final double[] positions;
@@ -61,7 +60,7 @@ final class AnalyticRecord {
     }
 
     SampledMotion withRates() {
-        return poses().withVelocities(velocities).withAngularRates(rates);
+        return poses().withVelocities(velocities).withAngularVelocities(rates);
     }
 
     private static void put(double[] a, int i, Vector3D v) {

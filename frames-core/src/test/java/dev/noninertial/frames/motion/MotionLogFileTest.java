@@ -35,9 +35,9 @@ class MotionLogFileTest {
     void exampleLogReadsWithItsRowsAndUnits() throws IOException {
         SampledMotion m = example();
         assertEquals(601, m.sampleCount());
-        assertEquals(0.0, m.start(), 0.0);
-        assertEquals(60.0, m.end(), 1e-12);
-        assertTrue(m.hasMeasuredAngularRates());
+        assertEquals(0.0, m.startTime(), 0.0);
+        assertEquals(60.0, m.endTime(), 1e-12);
+        assertTrue(m.hasMeasuredAngularVelocities());
         // row "0.1, 120.1915, -34.8393, 0.0338, 40.041885, 0.597121, 0.362100, ..." of the file
         Placement p = m.at(0.1);
         assertEquals(0, p.origin().distance(new Vector3D(120.1915, -34.8393, 0.0338)), 1e-12);
@@ -69,7 +69,7 @@ class MotionLogFileTest {
         }
         SampledMotion derived = SampledMotion.readCsv(new StringReader(posesOnly.toString()), "poses");
         SampledMotion measured = example();
-        assertTrue(!derived.hasMeasuredAngularRates());
+        assertTrue(!derived.hasMeasuredAngularVelocities());
         for (double t = 0.05; t < 60; t += 0.731) {
             Vector3D a = derived.at(t).angularVelocity();
             Vector3D b = measured.at(t).angularVelocity();
@@ -97,7 +97,7 @@ class MotionLogFileTest {
                 + "0, 1, 0, 0, 90, 0, 0, 1, 3.6, 0\n"
                 + "1000, 1, 0, 0, 90, 0, 0, 1, 3.6, 0\n";
         SampledMotion m = SampledMotion.readCsv(new StringReader(text), "units");
-        assertEquals(1.0, m.end(), 0.0);
+        assertEquals(1.0, m.endTime(), 0.0);
         // at a sample the measured velocity is the first derivative (the rows need not be consistent)
         Placement p = m.at(1.0);
         assertEquals(1000.0, p.origin().getX(), 1e-12);

@@ -173,7 +173,7 @@ class SampledMotionConsistencyTest {
         double[] queries = new double[5000];
         Random random = new Random(9);
         for (int k = 0; k < queries.length; k++) {
-            queries[k] = random.nextDouble() * m.end();
+            queries[k] = random.nextDouble() * m.endTime();
         }
         Placement[] expected = new Placement[queries.length];
         for (int k = 0; k < queries.length; k++) {

@@ -59,7 +59,7 @@ class SampledMotionRefusalTest {
     @Test
     void quaternionsFarFromUnitNormAreRefused() {
         double[] q = identities(6);
-        // 1e-6 is the library tolerance (Orientations.QUATERNION_TOLERANCE): 1 + 5e-7 passes
+        // 1e-6 is the library tolerance (Orientations.UNIT_QUATERNION_TOLERANCE): 1 + 5e-7 passes
         q[8] = 1 + 5e-7;
         SampledMotion ok = SampledMotion.fromArrays(T, P, q);
         assertEquals(1.0, ok.at(2).orientation().getQ0(), 1e-15);

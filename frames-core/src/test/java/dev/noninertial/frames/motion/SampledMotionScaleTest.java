@@ -49,7 +49,7 @@ class SampledMotionScaleTest {
         SampledMotion withVelocities = m.withVelocities(v);
         assertEquals(88.0, (double) withVelocities.heldBytes() / N, 1e-3);
         before = threads.getThreadAllocatedBytes(id);
-        SampledMotion full = withVelocities.withAngularRates(v);
+        SampledMotion full = withVelocities.withAngularVelocities(v);
         long added = threads.getThreadAllocatedBytes(id) - before;
         // both measured kinds: 112 bytes per sample, over the 100-byte budget (13 independent doubles
         // per sample already need 104); measured here so the report states it, not asserted as met
@@ -57,7 +57,7 @@ class SampledMotionScaleTest {
         System.out.printf("with velocities and rates: held %.2f bytes/sample (rates copy allocated %.2f)%n",
                 (double) full.heldBytes() / N, (double) added / N);
         // the record answers at both ends and inside (yaw rate 0.1 rad/s, surge 3 m/s from the formula)
-        Placement end = withVelocities.at(withVelocities.end());
+        Placement end = withVelocities.at(withVelocities.endTime());
         assertEquals(3.0 * 0.01 * (N - 1), end.origin().getX(), 1e-9);
         assertEquals(0.1, withVelocities.at(1234.567).angularVelocity().getZ(), 1e-9);
         assertEquals(3.0, withVelocities.at(0.0).originVelocity().getX(), 0.0);

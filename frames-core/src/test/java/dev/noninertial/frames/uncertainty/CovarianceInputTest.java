@@ -19,7 +19,7 @@ class CovarianceInputTest {
 
     private final ReferenceFrame root = ReferenceFrame.inertialRoot("quay");
     private final ReferenceFrame deck = root.attach("deck", Motions.spin(Vector3D.PLUS_K, 0.0, 0.1));
-    private final FramedState mean = deck.state(1.0, PointState.atRest(new Vector3D(1, 2, 3)));
+    private final FramedState mean = deck.stateAt(1.0, PointState.stationary(new Vector3D(1, 2, 3)));
 
     private static RealMatrix diagonal(int n, double variance) {
         RealMatrix m = MatrixUtils.createRealIdentityMatrix(n);
@@ -94,7 +94,7 @@ class CovarianceInputTest {
 
     @Test
     void wrongFramePairsAreRefused() {
-        UncertainState atRoot = UncertainState.of(root.state(1.0, PointState.atRest(Vector3D.ZERO)), diagonal(6, 1));
+        UncertainState atRoot = UncertainState.of(root.stateAt(1.0, PointState.stationary(Vector3D.ZERO)), diagonal(6, 1));
         refused("frame 'quay' is a root and has no parent", () -> atRoot.toParent(PlacementUncertainty.none()));
         ReferenceFrame other = ReferenceFrame.inertialRoot("slipway");
         UncertainState atDeck = UncertainState.of(mean, diagonal(6, 1));

@@ -42,15 +42,12 @@ class UncertainStateTest {
 
     // invented tree: a survey boat and a carrier with a sensor mast on an inertial "harbour" root
     private final ReferenceFrame harbour = ReferenceFrame.inertialRoot("harbour");
-    private final ReferenceFrame carrier = harbour.attach("carrier", Motions.compose(
-            Motions.translation(new Vector3D(300, -150, 0), new Vector3D(4.0, 1.5, 0), new Vector3D(0.02, -0.01, 0)),
-            Motions.spinUp(Vector3D.PLUS_K, 0.4, 0.03, 0.004)));
-    private final ReferenceFrame mast = carrier.attach("mast", Motions.compose(
-            Motions.fixed(new Vector3D(12.0, -3.0, 25.0), Orientations.fromYawPitchRoll(0.3, 0.1, -0.2)),
-            Motions.oscillation(Vector3D.PLUS_I, 0.08, 0.9, 0.5)));
-    private final ReferenceFrame boat = harbour.attach("boat", Motions.compose(
-            Motions.translation(new Vector3D(-200, 400, 0), new Vector3D(-2.0, 3.0, 0)),
-            Motions.spin(new Vector3D(0.1, 0.0, 1.0), -0.8, -0.06)));
+    private final ReferenceFrame carrier = harbour.attach("carrier", Motions.translation(new Vector3D(300, -150, 0), new Vector3D(4.0, 1.5, 0), new Vector3D(0.02, -0.01, 0))
+            .then(Motions.spinUp(Vector3D.PLUS_K, 0.4, 0.03, 0.004)));
+    private final ReferenceFrame mast = carrier.attach("mast", Motions.stationary(new Vector3D(12.0, -3.0, 25.0), Orientations.fromYawPitchRoll(0.3, 0.1, -0.2))
+            .then(Motions.oscillation(Vector3D.PLUS_I, 0.08, 0.9, 0.5)));
+    private final ReferenceFrame boat = harbour.attach("boat", Motions.translation(new Vector3D(-200, 400, 0), new Vector3D(-2.0, 3.0, 0))
+            .then(Motions.spin(new Vector3D(0.1, 0.0, 1.0), -0.8, -0.06)));
 
     private final PointState buoyInMast = Fixtures.buoy();
     private final double[] sigmas9 = {0.5, 0.8, 0.3, 0.05, 0.08, 0.03, 0.01, 0.02, 0.015};
@@ -81,7 +78,7 @@ class UncertainStateTest {
     @Test
     void treeConversionMatchesMonteCarlo() {
         RealMatrix p = Fixtures.randomCovariance(new Well19937c(11), sigmas9);
-        UncertainState inMast = UncertainState.of(mast.state(T, buoyInMast), p);
+        UncertainState inMast = UncertainState.of(mast.stateAt(T, buoyInMast), p);
         UncertainState inBoat = inMast.in(boat);
         assertSame(boat, inBoat.frame());
 
@@ -89,7 +86,7 @@ class UncertainStateTest {
         Fixtures.SampleStatistics stats = new Fixtures.SampleStatistics(array(inBoat.mean().state()));
         for (int k = 0; k < SAMPLES; k++) {
             // each sample goes through the tree by the library's state conversion, not the Jacobian
-            stats.add(array(mast.state(T, PointState.fromArray(draw.nextVector(), 0)).in(boat).state()));
+            stats.add(array(mast.stateAt(T, PointState.fromArray(draw.nextVector(), 0)).in(boat).state()));
         }
         double worst = Fixtures.worstStandardErrors(stats.covariance(), inBoat.covariance(), stats.count());
         assertTrue(worst <= SIGMAS, "worst element off by " + worst + " standard errors");
@@ -106,7 +103,7 @@ class UncertainStateTest {
     @Test
     void positionVelocityConversionMatchesMonteCarloBothWays() {
         RealMatrix p = Fixtures.randomCovariance(new Well19937c(12), head(sigmas9, 6));
-        FramedState meanInBoat = mast.state(T, buoyInMast).in(boat);
+        FramedState meanInBoat = mast.stateAt(T, buoyInMast).in(boat);
         UncertainState inBoat = UncertainState.of(meanInBoat, p);
         UncertainState inMast = inBoat.in(mast);
         assertEquals(StateLayout.POSITION_VELOCITY, inMast.layout());
@@ -114,7 +111,7 @@ class UncertainStateTest {
         CorrelatedRandomVectorGenerator draw = gaussian(head(array(meanInBoat.state()), 6), p, 2);
         Fixtures.SampleStatistics stats = new Fixtures.SampleStatistics(head(array(inMast.mean().state()), 6));
         for (int k = 0; k < SAMPLES; k++) {
-            stats.add(head(array(boat.state(T, state(draw.nextVector(), 6)).in(mast).state()), 6));
+            stats.add(head(array(boat.stateAt(T, state(draw.nextVector(), 6)).in(mast).state()), 6));
         }
         double worst = Fixtures.worstStandardErrors(stats.covariance(), inMast.covariance(), stats.count());
         assertTrue(worst <= SIGMAS, "worst element off by " + worst + " standard errors");
@@ -127,7 +124,7 @@ class UncertainStateTest {
         RealMatrix attitude = Fixtures.randomCovariance(new Well19937c(14), new double[] {2e-3, 1e-3, 3e-3});
         RealMatrix origin = Fixtures.randomCovariance(new Well19937c(15), new double[] {0.3, 0.2, 0.4});
         PlacementUncertainty u = PlacementUncertainty.of(attitude, origin);
-        UncertainState inCarrier = UncertainState.of(mast.state(T, buoyInMast), p).toParent(u);
+        UncertainState inCarrier = UncertainState.of(mast.stateAt(T, buoyInMast), p).toParent(u);
         assertSame(carrier, inCarrier.frame());
 
         Placement nominal = mast.placementIn(carrier, T);
@@ -144,7 +141,7 @@ class UncertainStateTest {
         double worst = Fixtures.worstStandardErrors(stats.covariance(), inCarrier.covariance(), stats.count());
         assertTrue(worst <= SIGMAS, "worst element off by " + worst + " standard errors");
         double ignored = Fixtures.worstStandardErrors(stats.covariance(),
-                UncertainState.of(mast.state(T, buoyInMast), p).in(carrier).covariance(), stats.count());
+                UncertainState.of(mast.stateAt(T, buoyInMast), p).in(carrier).covariance(), stats.count());
         assertTrue(ignored > 10 * SIGMAS, "ignoring the placement uncertainty should be rejected, got " + ignored);
         System.out.printf("uncertainty MC toParent 9x9: worst %.2f SE (placement ignored %.0f SE)%n", worst, ignored);
     }
@@ -155,7 +152,7 @@ class UncertainStateTest {
         RealMatrix attitude = Fixtures.randomCovariance(new Well19937c(17), new double[] {1.5e-3, 2.5e-3, 1e-3});
         RealMatrix origin = Fixtures.randomCovariance(new Well19937c(18), new double[] {0.25, 0.35, 0.15});
         PlacementUncertainty u = PlacementUncertainty.of(attitude, origin);
-        FramedState meanInCarrier = mast.state(T, buoyInMast).in(carrier);
+        FramedState meanInCarrier = mast.stateAt(T, buoyInMast).in(carrier);
         UncertainState inMast = UncertainState.of(meanInCarrier, p).toChild(mast, u);
         assertSame(mast, inMast.frame());
 
@@ -183,7 +180,7 @@ class UncertainStateTest {
         Well19937c random = new Well19937c(19);
         for (int trial = 0; trial < 50; trial++) {
             RealMatrix p = Fixtures.randomCovariance(random, sigmas9);
-            RealMatrix out = UncertainState.of(mast.state(T, buoyInMast), p).in(boat)
+            RealMatrix out = UncertainState.of(mast.stateAt(T, buoyInMast), p).in(boat)
                     .toParent(PlacementUncertainty.ofSigmas(1e-3, 0.1)).covariance();
             for (int i = 0; i < 9; i++) {
                 for (int k = 0; k < 9; k++) {
@@ -201,7 +198,7 @@ class UncertainStateTest {
     void convertingThereAndBackRestoresTheCovariance() {
         // Invariant: the conversion back is the inverse map, J_back = J^-1, so P is recovered.
         RealMatrix p = Fixtures.randomCovariance(new Well19937c(20), sigmas9);
-        UncertainState start = UncertainState.of(mast.state(T, buoyInMast), p);
+        UncertainState start = UncertainState.of(mast.stateAt(T, buoyInMast), p);
         RealMatrix back = start.in(boat).in(mast).covariance();
         for (int i = 0; i < 9; i++) {
             for (int k = 0; k < 9; k++) {
