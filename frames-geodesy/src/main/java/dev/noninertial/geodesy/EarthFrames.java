@@ -7,13 +7,19 @@ import java.util.Locale;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.FramedState;
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Orientations;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
 import dev.noninertial.frames.dynamics.SpecificForce;
+import dev.noninertial.frames.dynamics.TrajectoryEvent;
 import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.geodesy.air.AirDrag;
+import dev.noninertial.geodesy.air.Atmosphere1976;
+import dev.noninertial.geodesy.air.DragCurve;
+import dev.noninertial.geodesy.air.WindProfile;
 
 /**
  * The frames of a spinning Earth, ready with no data files, no network and no set-up call:
@@ -75,13 +81,21 @@ public final class EarthFrames implements Serializable {
     private final ReferenceFrame inertial;
     /** Earth-fixed frame spinning under the inertial root. */
     private final ReferenceFrame earthFixed;
+    /** False for the comparison Earth that does not turn ({@link #withoutRotation()}). */
+    private final boolean rotating;
 
-    private EarthFrames(EarthModel model, Instant epoch) {
+    private EarthFrames(EarthModel model, Instant epoch, boolean rotating) {
         this.model = model;
         this.epoch = epoch;
+        this.rotating = rotating;
         this.angleAtEpoch = EarthRotationAngle.at(epoch);
-        this.inertial = ReferenceFrame.inertialRoot("ECI");
-        this.earthFixed = inertial.attach("ECEF", Motions.spin(Vector3D.PLUS_K, angleAtEpoch, model.rotationRate()));
+        this.inertial = ReferenceFrame.inertialRoot(rotating ? "ECI" : "ECI (Earth not rotating)");
+        this.earthFixed = inertial.attach("ECEF", Motions.spin(Vector3D.PLUS_K, angleAtEpoch, spinRate()));
+    }
+
+    /** Rate of the Earth-fixed frame in the inertial root (rad/s): the model's, or 0 without rotation. */
+    private double spinRate() {
+        return rotating ? model.rotationRate() : 0.0;
     }
 
     /**
@@ -95,7 +109,31 @@ public final class EarthFrames implements Serializable {
     public static EarthFrames of(EarthModel model, Instant epochUt1) {
         Arguments.nonNull("model", model);
         Arguments.nonNull("epochUt1", epochUt1);
-        return new EarthFrames(model, epochUt1);
+        return new EarthFrames(model, epochUt1, true);
+    }
+
+    /**
+     * The same Earth that does not rotate, for comparison runs: the Earth-fixed frame stays at its
+     * orientation of the epoch in the inertial root, while the model (shape, GM and the normal
+     * gravity field, hence {@link #gravitationIn(ReferenceFrame) gravitation}) is unchanged. So a
+     * case built the same way on both Earths and integrated with the same real forces differs
+     * only by the inertial terms of the Earth's rotation (Coriolis, centrifugal; Euler is zero):
+     * the difference of the two landing points is the rotation's effect. Frames made on this
+     * object form a new tree; build the whole case on it again (local-level frames, forces).
+     *
+     * <p>Note that on the non-rotating Earth a body at rest on the ground feels gravitation
+     * alone, not normal gravity (its weight lacks the centrifugal part, up to 0.034 m/s^2 on the
+     * equator): that is part of the rotation's effect being isolated.
+     *
+     * @return the non-rotating twin (itself if already non-rotating)
+     */
+    public EarthFrames withoutRotation() {
+        return rotating ? new EarthFrames(model, epoch, false) : this;
+    }
+
+    /** @return false for the comparison Earth of {@link #withoutRotation()}, true otherwise */
+    public boolean isRotating() {
+        return rotating;
     }
 
     /** @return the Earth model */
@@ -114,14 +152,15 @@ public final class EarthFrames implements Serializable {
     }
 
     /**
-     * The angle of the Earth-fixed frame in the inertial root, {@code ERA(epoch) + w t}.
+     * The angle of the Earth-fixed frame in the inertial root, {@code ERA(epoch) + w t}
+     * ({@code w = 0} for {@link #withoutRotation()}).
      *
      * @param t time (s from the epoch)
      * @return angle about z (rad), not reduced
      */
     public double rotationAngle(double t) {
         Arguments.finite("t", t);
-        return angleAtEpoch + model.rotationRate() * t;
+        return angleAtEpoch + spinRate() * t;
     }
 
     /** @return the Earth-centred inertial root ("ECI"), z along the rotation axis */
@@ -223,11 +262,88 @@ public final class EarthFrames implements Serializable {
      */
     public SpecificForce gravitationIn(ReferenceFrame frame) {
         Arguments.nonNull("frame", frame);
+        checkTree("frame", frame);
+        return new GravitationForce(model, frame, earthFixed);
+    }
+
+    /**
+     * Air drag as a force to integrate in {@code frame}, any frame of this Earth's tree: the
+     * airspeed is the velocity relative to the air that turns with {@link #earthFixed()}, plus
+     * the wind (see {@link AirDrag}). Add gravitation separately.
+     *
+     * @param frame the integration frame, in the tree of {@link #inertial()}
+     * @param air the atmosphere (density and speed of sound at the geodetic height)
+     * @param dragCurve drag coefficient against Mach number (Mach outside the table is refused)
+     * @param areaOverMass reference area over mass A/m (m^2/kg), positive
+     * @param wind the air's velocity relative to the Earth, east-north-up at the point
+     * @return drag per unit mass (m/s^2), resolved in {@code frame}'s axes
+     * @throws IllegalArgumentException if {@code frame} belongs to another tree or
+     *         {@code areaOverMass} is not positive and finite
+     */
+    public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, DragCurve dragCurve, double areaOverMass,
+                          WindProfile wind) {
+        return AirDrag.of(this, frame, air, dragCurve, areaOverMass, wind);
+    }
+
+    /**
+     * Air drag with a ballistic coefficient {@code B = m / (Cd A)} (kg/m^2), the same at every
+     * Mach number (see {@link AirDrag#ofBallisticCoefficient}).
+     *
+     * @param frame the integration frame, in the tree of {@link #inertial()}
+     * @param air the atmosphere
+     * @param ballisticCoefficient B (kg/m^2), positive
+     * @param wind the air's velocity relative to the Earth, east-north-up at the point
+     * @return drag per unit mass (m/s^2), resolved in {@code frame}'s axes
+     * @throws IllegalArgumentException if {@code frame} belongs to another tree or {@code B} is
+     *         not positive and finite
+     */
+    public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, double ballisticCoefficient, WindProfile wind) {
+        return AirDrag.ofBallisticCoefficient(this, frame, air, ballisticCoefficient, wind);
+    }
+
+    /**
+     * The geodetic position (latitude, longitude, ellipsoidal height) of a framed state of this
+     * Earth's tree, in one call: the position is carried to {@link #earthFixed()} at the state's
+     * time and converted with {@link Ellipsoid#toGeodetic(Vector3D)}.
+     *
+     * @param state a point at a time, in any frame of this Earth's tree
+     * @return its geodetic position (rad, m) on this Earth's ellipsoid
+     * @throws IllegalArgumentException if the state's frame belongs to another tree
+     */
+    public LatLonHeight geodeticOf(FramedState state) {
+        Arguments.nonNull("state", state);
+        checkTree("state.frame()", state.frame());
+        Placement p = state.frame().placementIn(earthFixed, state.time());
+        return model.ellipsoid().toGeodetic(p.positionToBase(state.state().position()));
+    }
+
+    /**
+     * Ground impact on this Earth: the point comes down through the geodetic height
+     * {@code groundHeight} above the ellipsoid (falling crossings only). Stops the run; named
+     * "ground impact". Unlike {@link TrajectoryEvent#groundImpact(Vector3D, double)} (a plane in
+     * the integration frame) this follows the curved ellipsoid, in any frame of the tree.
+     *
+     * @param frame the integration frame, in the tree of {@link #inertial()}
+     * @param groundHeight ellipsoidal height of the ground (m), finite
+     * @return the event
+     * @throws IllegalArgumentException if {@code frame} belongs to another tree or the height is
+     *         not finite
+     */
+    public TrajectoryEvent groundImpactIn(ReferenceFrame frame, double groundHeight) {
+        Arguments.nonNull("frame", frame);
+        checkTree("frame", frame);
+        double ground = Arguments.finite("groundHeight", groundHeight);
+        Ellipsoid shape = model.ellipsoid();
+        return TrajectoryEvent.of("ground impact", (time, s) -> shape.toGeodetic(
+                frame.placementIn(earthFixed, time).positionToBase(s.position())).height() - ground)
+                .fallingOnly().stopping();
+    }
+
+    private void checkTree(String name, ReferenceFrame frame) {
         if (frame.root() != inertial) {
-            throw new IllegalArgumentException("frame '" + frame.path() + "' is not in the tree of this Earth ('"
+            throw new IllegalArgumentException(name + " '" + frame.path() + "' is not in the tree of this Earth ('"
                     + inertial.path() + "'): build it from this EarthFrames");
         }
-        return new GravitationForce(model, frame, earthFixed);
     }
 
     /** Gravitation evaluated in Earth-fixed axes and resolved in the integration frame. */
@@ -250,7 +366,7 @@ public final class EarthFrames implements Serializable {
 
     @Override
     public String toString() {
-        return String.format(Locale.ROOT, "EarthFrames{%s, epoch %s UT1, ERA(epoch)=%.12f rad}", model, epoch,
-                angleAtEpoch);
+        return String.format(Locale.ROOT, "EarthFrames{%s, epoch %s UT1, ERA(epoch)=%.12f rad%s}", model, epoch,
+                angleAtEpoch, rotating ? "" : ", not rotating");
     }
 }

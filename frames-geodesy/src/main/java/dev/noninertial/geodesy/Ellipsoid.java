@@ -554,6 +554,28 @@ public final class Ellipsoid implements Serializable {
         return Orientations.fromMatrix(localRows(position.latitude(), position.longitude(), axes));
     }
 
+    /**
+     * Re-resolves a free vector (a wind, a force) given in local-level axes at a geodetic position
+     * in ECEF axes: {@code R^T u}, with R of {@link #localOrientation(LatLonHeight, LocalAxes)}
+     * ({@code v_local = R v_ECEF}). No origin term is involved.
+     *
+     * @param position geodetic position (rad); the height plays no part
+     * @param axes axis order of {@code local}
+     * @param local components in the local-level axes
+     * @return components in ECEF axes
+     * @throws IllegalArgumentException if a component of {@code local} is not finite
+     */
+    public Vector3D localToEarthFixed(LatLonHeight position, LocalAxes axes, Vector3D local) {
+        Arguments.nonNull("position", position);
+        Arguments.finite("local", local);
+        double[][] r = localRows(position.latitude(), position.longitude(), axes);
+        double x = local.getX();
+        double y = local.getY();
+        double z = local.getZ();
+        return new Vector3D(r[0][0] * x + r[1][0] * y + r[2][0] * z, r[0][1] * x + r[1][1] * y + r[2][1] * z,
+                r[0][2] * x + r[1][2] * y + r[2][2] * z);
+    }
+
     /** Rows of the ECEF-to-local matrix at (lat, lon). */
     static double[][] localRows(double lat, double lon, LocalAxes axes) {
         Arguments.nonNull("axes", axes);
