@@ -71,7 +71,7 @@ class SparkFrameConversionTest {
             PointState local = PointState.of(new Vector3D(row.getDouble(1), row.getDouble(2), row.getDouble(3)),
                     new Vector3D(row.getDouble(4), row.getDouble(5), row.getDouble(6)),
                     new Vector3D(row.getDouble(7), row.getDouble(8), row.getDouble(9)));
-            PointState expected = enu.state(t, local).in(eci).state();
+            PointState expected = enu.stateAt(t, local).in(eci).state();
             assertEquals("RV Quillan Sound", row.getString(10));
             // Object path (itself checked by finite differences in frames-core): 1e-6 m on
             // positions of 6.4e6 m (about 1e-13 relative, rounding of a different operation order),
