@@ -64,7 +64,19 @@ public final class AirdropStudy {
     public static final String DESCENT = "descent_s";
 
     /** Planned release point east of the marker (m): upwind of the forecast wind. */
-    static final double PLANNED_EAST = -425.0;
+    public static final double PLANNED_EAST = -425.0;
+
+    /** Integration tolerance of each descent (m on position, m/s on velocity, and relative). */
+    public static final double TOLERANCE = 1e-3;
+
+    /**
+     * Largest integration step (s): the drag's time constant near terminal speed is about 1 s, and
+     * longer explicit steps leave the stability region (trial stages then probe far below ground).
+     */
+    public static final double MAX_STEP = 2.0;
+
+    /** Interval between checks of the ground crossing (s); the crossing is then located to 1e-10 s. */
+    public static final double CHECK_INTERVAL = 5.0;
 
     private AirdropStudy() {
     }
@@ -90,6 +102,25 @@ public final class AirdropStudy {
     }
 
     /**
+     * The study's Earth: WGS84, rotating, epoch {@link #EPOCH}.
+     *
+     * @return the Earth frames
+     */
+    public static EarthFrames earth() {
+        return EarthFrames.of(EarthModel.WGS84, EPOCH);
+    }
+
+    /**
+     * The drop zone's east-north-up frame, origin at the marker {@link #TOLLAN_HEATH}.
+     *
+     * @param earth the study's Earth frames
+     * @return the frame
+     */
+    public static ReferenceFrame zone(EarthFrames earth) {
+        return earth.localLevel("Tollan Heath ENU", TOLLAN_HEATH, LocalAxes.ENU);
+    }
+
+    /**
      * The model: one bundle's descent, integrated in the drop zone's east-north-up frame.
      * Serializable (it travels to Spark executors): it holds only the Earth frames and rebuilds
      * the per-case drag force and solver for each case.
@@ -98,8 +129,8 @@ public final class AirdropStudy {
 
         private static final long serialVersionUID = 1L;
 
-        private final EarthFrames earth = EarthFrames.of(EarthModel.WGS84, EPOCH);
-        private final ReferenceFrame zone = earth.localLevel("Tollan Heath ENU", TOLLAN_HEATH, LocalAxes.ENU);
+        private final EarthFrames earth = earth();
+        private final ReferenceFrame zone = zone(earth);
         private final Atmosphere1976 air = Atmosphere1976.standard();
 
         @Override
@@ -113,9 +144,9 @@ public final class AirdropStudy {
             TrajectorySolver solver = TrajectorySolver.of(zone)
                     .plusForce(earth.gravitationIn(zone))
                     .plusForce(earth.dragIn(zone, air, c.value(5), WindProfile.steady(c.value(6), c.value(7))))
-                    .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0).withCheckInterval(5.0))
-                    .withTolerance(1e-3)
-                    .withMaxStep(2.0);
+                    .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0).withCheckInterval(CHECK_INTERVAL))
+                    .withTolerance(TOLERANCE)
+                    .withMaxStep(MAX_STEP);
             Trajectory descent = solver.solve(PointState.of(new Vector3D(x, y, c.value(2)),
                     new Vector3D(speed * alongE, speed * alongN, 0.0)), 0.0, 600.0);
             if (descent.stopEvent().isEmpty()) {
