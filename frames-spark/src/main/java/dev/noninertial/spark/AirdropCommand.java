@@ -19,7 +19,7 @@ import dev.noninertial.frames.dispersion.DispersionStudy;
  * <p>Usage: {@code AirdropCommand [--spark] [--workers W] [--partitions P] [--check] [--cases N]
  * [--seed S] [--out DIR]}. {@code --workers} sets the local threads (default: all cores) or the
  * local-mode Spark workers (default 2); {@code --check} also runs the local runner and reports
- * whether the Spark table is identical to it bit for bit. Needs the {@code frames-examples}
+ * whether the Spark table is identical to it bit for bit (exit status 1 if not). Needs the {@code frames-examples}
  * module on the class path (an optional dependency of this module).
  *
  * <p>Invented place and numbers, for demonstration only: not for planning drops or safety areas;
@@ -83,6 +83,7 @@ public final class AirdropCommand {
             System.setProperty("log4j2.configurationFile", "dev/noninertial/spark/command-log4j2.properties");
         }
         SparkSession session = SparkSessions.localOrSubmitted(workers > 0 ? workers : 2);
+        boolean identical = true;
         try {
             int parts = partitions > 0 ? partitions : session.sparkContext().defaultParallelism();
             long t0 = System.nanoTime();
@@ -95,11 +96,15 @@ public final class AirdropCommand {
                 long t1 = System.nanoTime();
                 DispersionResult local = study.run();
                 double localSeconds = (System.nanoTime() - t1) * 1e-9;
+                identical = local.equals(result);
                 System.out.printf(Locale.ROOT, "local runner (%d threads): %.2f s; Spark table identical bit for bit: %s%n",
-                        Runtime.getRuntime().availableProcessors(), localSeconds, local.equals(result) ? "yes" : "NO");
+                        Runtime.getRuntime().availableProcessors(), localSeconds, identical ? "yes" : "NO");
             }
         } finally {
             session.stop();
+        }
+        if (!identical) {
+            System.exit(1);
         }
     }
 }

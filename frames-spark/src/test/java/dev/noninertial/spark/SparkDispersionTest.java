@@ -8,6 +8,7 @@ import org.apache.spark.sql.SparkSession;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
+import dev.noninertial.examples.AirdropStudy;
 import dev.noninertial.frames.dispersion.DispersionModel;
 import dev.noninertial.frames.dispersion.DispersionResult;
 import dev.noninertial.frames.dispersion.DispersionStudy;
@@ -56,6 +57,21 @@ class SparkDispersionTest {
         // and the statistics are the same bits
         assertEquals(Double.doubleToRawLongBits(oneThread.cep("east_m", "north_m")),
                 Double.doubleToRawLongBits(spark.cep("east_m", "north_m")));
+    }
+
+    @Test
+    void theAirdropStudyWithDragAndEarthRotationIsIdenticalOnSpark() {
+        // trajectories integrated on the executors: same bits as the local runner on 1 thread
+        DispersionStudy s = AirdropStudy.study(600, 77L);
+        DispersionResult local = s.run(1);
+        DispersionResult spark = SparkDispersion.run(s, session, 3);
+        assertEquals(local, spark);
+        // a case re-run alone on the driver equals its Spark row
+        double[] alone = s.runCase(599);
+        double[] row = spark.outcome(599);
+        for (int k = 0; k < row.length; k++) {
+            assertEquals(Double.doubleToRawLongBits(row[k]), Double.doubleToRawLongBits(alone[k]));
+        }
     }
 
     @Test

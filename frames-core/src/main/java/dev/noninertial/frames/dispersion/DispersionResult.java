@@ -39,9 +39,13 @@ public final class DispersionResult implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** Input names in declaration order. */
     private final List<String> inputNames;
+    /** Outcome names in order. */
     private final List<String> outcomeNames;
+    /** Values per row: inputs plus outcomes. */
     private final int width;
+    /** Number of rows (cases). */
     private final int rows;
     /** Row-major table, {@code rows * width} values. */
     private final double[] table;

@@ -49,11 +49,17 @@ public final class DispersionStudy implements Serializable {
     /** Cases handed to a worker thread at a time by the local runner. */
     private static final int BLOCK = 32;
 
+    /** The user's model. */
     private final DispersionModel model;
+    /** Outcome names in order. */
     private final List<String> outcomeNames;
+    /** Input names in declaration (drawing) order. */
     private final List<String> inputNames;
+    /** Input distributions, same order as {@code inputNames}. */
     private final List<InputDistribution> distributions;
+    /** Number of cases. */
     private final int cases;
+    /** Master seed. */
     private final long seed;
 
     private DispersionStudy(DispersionModel model, List<String> outcomeNames, List<String> inputNames,

@@ -35,12 +35,17 @@ public final class InputDistribution implements Serializable {
     private final RealDistribution distribution;
     /** Human-readable description with the parameters. */
     private final String text;
-    /** Truncated normal only: mean, standard deviation, standardized bounds, mirrored flag. */
+    /** Mean (of the untruncated normal for the truncated kind). */
     private final double mean;
+    /** Truncated normal: standard deviation of the untruncated normal; NaN otherwise. */
     private final double sigma;
+    /** Truncated normal: standard normal probability at the (possibly mirrored) lower bound. */
     private final double lowProbability;
+    /** Truncated normal: standard normal probability at the (possibly mirrored) upper bound. */
     private final double highProbability;
+    /** Truncated normal: true if the interval lies above the mean and is drawn mirrored. */
     private final boolean mirrored;
+    /** True for the truncated normal. */
     private final boolean truncated;
 
     private InputDistribution(RealDistribution distribution, String text, double mean, double sigma,
