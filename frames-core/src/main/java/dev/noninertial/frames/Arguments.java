@@ -1,5 +1,6 @@
 package dev.noninertial.frames;
 
+import java.io.InvalidObjectException;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -114,6 +115,76 @@ public final class Arguments {
                     name + " must be a non-zero axis (length > 0), got " + vector(axis));
         }
         return axis.scalarMultiply(1.0 / norm);
+    }
+
+    /**
+     * Refuses a range of {@code size} doubles from {@code offset} that does not fit an array, as
+     * {@link java.util.Objects#checkFromIndexSize(int, int, int)} does, but overflow-safe in the
+     * message too and throwing {@link IllegalArgumentException} that names the offset argument.
+     *
+     * @param arrayName name of the array argument
+     * @param array the array
+     * @param offsetName name of the offset argument
+     * @param offset index of the first element of the range
+     * @param size number of elements of the range, at least 0
+     * @throws NullPointerException if {@code array} is null
+     * @throws IllegalArgumentException if the range does not fit
+     */
+    public static void fromIndexSize(String arrayName, double[] array, String offsetName, int offset, int size) {
+        nonNull(arrayName, array);
+        if (offset < 0 || offset > array.length - size) {
+            throw new IllegalArgumentException(offsetName + " must be in [0, " + ((long) array.length - size)
+                    + "] for " + size + " values in " + arrayName + " of length " + array.length + ", got "
+                    + offset);
+        }
+    }
+
+    /**
+     * Refuses a range of {@code count} items of {@code stride} doubles each from {@code offset}
+     * that does not fit an array, blaming the right argument: the count when no offset could
+     * hold that many items (or it is negative), the offset otherwise. Overflow-safe: the span is
+     * computed in {@code long}.
+     *
+     * @param arrayName name of the array argument
+     * @param array the array
+     * @param offsetName name of the offset argument
+     * @param offset index of the first element of the range
+     * @param countName name of the count argument
+     * @param count number of items
+     * @param stride doubles per item, positive
+     * @throws NullPointerException if {@code array} is null
+     * @throws IllegalArgumentException if the count is negative or too large for the array, or the
+     *         range does not fit from the offset
+     */
+    public static void fromIndexSize(String arrayName, double[] array, String offsetName, int offset,
+                                     String countName, int count, int stride) {
+        nonNull(arrayName, array);
+        long span = (long) count * stride;
+        if (count < 0 || span > array.length) {
+            throw new IllegalArgumentException(countName + " must be in [0, " + array.length / stride + "] for "
+                    + arrayName + " of length " + array.length + " (" + stride + (stride == 1 ? " value" : " values")
+                    + " per item, from " + offsetName + " " + offset + "), got " + count);
+        }
+        fromIndexSize(arrayName, array, offsetName, offset, (int) span);
+    }
+
+    /**
+     * The exception a {@code readObject} or {@code readResolve} throws when the value read from a
+     * stream fails the checks its factory makes: every serializable type of the library re-runs
+     * those checks on reading, since a stream is untrusted input.
+     *
+     * @param type the type being read, named in the message
+     * @param cause the refusal of the factory checks
+     * @return an {@link InvalidObjectException} naming the type, with the refusal's message and
+     *         the refusal as its cause
+     */
+    public static InvalidObjectException refusedStream(Class<?> type, RuntimeException cause) {
+        nonNull("type", type);
+        nonNull("cause", cause);
+        InvalidObjectException failure = new InvalidObjectException(
+                "corrupt " + type.getSimpleName() + " in the stream: " + cause.getMessage());
+        failure.initCause(cause);
+        return failure;
     }
 
     private static String vector(Vector3D v) {

@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 
 /**
@@ -86,6 +88,24 @@ public final class FramedState implements Serializable {
      */
     public FramedState withState(PointState newState) {
         return new FramedState(frame, time, newState);
+    }
+
+    /**
+     * Reads the fields and re-checks them as {@link #of(ReferenceFrame, double, PointState)} does.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds a missing frame or state or a non-finite time
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("frame", frame);
+            Arguments.finite("time", time);
+            Arguments.nonNull("state", state);
+        } catch (IllegalArgumentException | NullPointerException e) {
+            throw Arguments.refusedStream(FramedState.class, e);
+        }
     }
 
     @Override

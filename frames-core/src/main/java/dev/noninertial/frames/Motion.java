@@ -102,8 +102,8 @@ public interface Motion {
         double[] p = new double[Placement.COMPONENTS];
         for (int k = 0; k < count; k++) {
             at(times[timeOffset + k], p, 0);
-            Placement.toBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
-                    target, targetOffset + k * PointState.COMPONENTS);
+            Kinematics.toBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
+                    target, targetOffset + k * PointState.COMPONENTS, 1);
         }
     }
 
@@ -131,16 +131,12 @@ public interface Motion {
         double[] p = new double[Placement.COMPONENTS];
         for (int k = 0; k < count; k++) {
             at(times[timeOffset + k], p, 0);
-            Placement.fromBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
-                    target, targetOffset + k * PointState.COMPONENTS);
+            Kinematics.fromBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
+                    target, targetOffset + k * PointState.COMPONENTS, 1);
         }
     }
 
     private static void checkTimes(double[] times, int timeOffset, int count) {
-        Arguments.nonNull("times", times);
-        if (timeOffset < 0 || (long) timeOffset + count > times.length) {
-            throw new IllegalArgumentException("timeOffset must be in [0, " + (times.length - count)
-                    + "] for " + count + " states, got " + timeOffset);
-        }
+        Arguments.fromIndexSize("times", times, "timeOffset", timeOffset, "count", count, 1);
     }
 }

@@ -117,23 +117,9 @@ public final class Orientations {
                 Arguments.finite("matrix[" + i + "][" + j + "]", matrix[i][j]);
             }
         }
-        double worst = 0;
-        for (int i = 0; i < 3; i++) {
-            for (int j = 0; j < 3; j++) {
-                double dot = matrix[i][0] * matrix[j][0] + matrix[i][1] * matrix[j][1] + matrix[i][2] * matrix[j][2];
-                worst = Math.max(worst, Math.abs(dot - (i == j ? 1.0 : 0.0)));
-            }
-        }
-        if (!(worst <= MATRIX_TOLERANCE)) {
-            throw new IllegalArgumentException("matrix must be orthonormal (|M M^T - I| <= " + MATRIX_TOLERANCE
-                    + " elementwise), worst deviation " + worst);
-        }
-        double det = matrix[0][0] * (matrix[1][1] * matrix[2][2] - matrix[1][2] * matrix[2][1])
-                - matrix[0][1] * (matrix[1][0] * matrix[2][2] - matrix[1][2] * matrix[2][0])
-                + matrix[0][2] * (matrix[1][0] * matrix[2][1] - matrix[1][1] * matrix[2][0]);
-        if (!(det > 0)) {
-            throw new IllegalArgumentException("matrix must be a rotation (determinant +1), got determinant " + det);
-        }
+        double[] rows = {matrix[0][0], matrix[0][1], matrix[0][2], matrix[1][0], matrix[1][1], matrix[1][2],
+            matrix[2][0], matrix[2][1], matrix[2][2]};
+        checkRotationRows(rows, 0, MATRIX_TOLERANCE, "matrix");
         return fromOrthonormalRows(matrix[0][0], matrix[0][1], matrix[0][2],
                 matrix[1][0], matrix[1][1], matrix[1][2],
                 matrix[2][0], matrix[2][1], matrix[2][2]);
@@ -217,10 +203,55 @@ public final class Orientations {
     }
 
     /**
+     * Refuses 9 finite values (a 3x3 matrix row by row from {@code offset}) that are not a
+     * rotation: {@code |M M^T - I|} above {@code tolerance} elementwise, or a reflection.
+     */
+    static void checkRotationRows(double[] m, int offset, double tolerance, String name) {
+        double worst = 0;
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                int a = offset + 3 * i;
+                int b = offset + 3 * j;
+                double dot = m[a] * m[b] + m[a + 1] * m[b + 1] + m[a + 2] * m[b + 2];
+                worst = Math.max(worst, Math.abs(dot - (i == j ? 1.0 : 0.0)));
+            }
+        }
+        if (!(worst <= tolerance)) {
+            throw new IllegalArgumentException(name + " must be an orthonormal rotation matrix (|M M^T - I| <= "
+                    + tolerance + " elementwise), worst deviation " + worst);
+        }
+        int o = offset;
+        double det = m[o] * (m[o + 4] * m[o + 8] - m[o + 5] * m[o + 7])
+                - m[o + 1] * (m[o + 3] * m[o + 8] - m[o + 5] * m[o + 6])
+                + m[o + 2] * (m[o + 3] * m[o + 7] - m[o + 4] * m[o + 6]);
+        if (!(det > 0)) {
+            throw new IllegalArgumentException(name + " must be a rotation (determinant +1), got determinant "
+                    + det);
+        }
+    }
+
+    /**
      * Converts orthonormal matrix rows to a rotation (Shepperd's method, stable for all angles).
      */
     static Rotation fromOrthonormalRows(double m00, double m01, double m02, double m10, double m11, double m12,
                                         double m20, double m21, double m22) {
+        double[] q = new double[4];
+        matrixToQuaternion(m00, m01, m02, m10, m11, m12, m20, m21, m22, q, 0);
+        return new Rotation(q[0], q[1], q[2], q[3], true);
+    }
+
+    /**
+     * The quaternion (scalar first, library convention) of the orthonormal matrix held row by row
+     * at {@code m[mo]}, written at {@code q[qo]}; allocates nothing.
+     */
+    static void matrixToQuaternion(double[] m, int mo, double[] q, int qo) {
+        matrixToQuaternion(m[mo], m[mo + 1], m[mo + 2], m[mo + 3], m[mo + 4], m[mo + 5], m[mo + 6], m[mo + 7],
+                m[mo + 8], q, qo);
+    }
+
+    /** Shepperd's method on matrix rows, written at {@code out[oo]}, scalar first. */
+    private static void matrixToQuaternion(double m00, double m01, double m02, double m10, double m11, double m12,
+                                           double m20, double m21, double m22, double[] out, int oo) {
         // Hipparchus matrix of quaternion q: m01 = 2(q1q2 + q0q3), m10 = 2(q1q2 - q0q3), ...
         double trace = m00 + m11 + m22;
         double q0;
@@ -252,6 +283,9 @@ public final class Orientations {
             q1 = inv * (m02 + m20);
             q2 = inv * (m12 + m21);
         }
-        return new Rotation(q0, q1, q2, q3, true);
+        out[oo] = q0;
+        out[oo + 1] = q1;
+        out[oo + 2] = q2;
+        out[oo + 3] = q3;
     }
 }

@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -17,41 +19,32 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  */
 public final class PointState implements Serializable {
 
-    private static final long serialVersionUID = 1L;
+    private static final long serialVersionUID = 2L;
 
     /** Layout of one state in the bulk arrays: x, y, z, vx, vy, vz, ax, ay, az. */
     public static final int COMPONENTS = 9;
 
-    /** Position x (m). */
-    final double x;
-    /** Position y (m). */
-    final double y;
-    /** Position z (m). */
-    final double z;
-    /** Velocity x (m/s). */
-    final double vx;
-    /** Velocity y (m/s). */
-    final double vy;
-    /** Velocity z (m/s). */
-    final double vz;
-    /** Acceleration x (m/s^2). */
-    final double ax;
-    /** Acceleration y (m/s^2). */
-    final double ay;
-    /** Acceleration z (m/s^2). */
-    final double az;
+    /**
+     * x, y, z (m), vx, vy, vz (m/s), ax, ay, az (m/s^2): the bulk layout. Never shared, never
+     * modified.
+     *
+     * @serial 9 finite doubles (checked on reading)
+     */
+    private final double[] c;
 
-    PointState(double x, double y, double z, double vx, double vy, double vz,
-               double ax, double ay, double az) {
-        this.x = x;
-        this.y = y;
-        this.z = z;
-        this.vx = vx;
-        this.vy = vy;
-        this.vz = vz;
-        this.ax = ax;
-        this.ay = ay;
-        this.az = az;
+    /** Takes ownership of an array of 9 finite values. */
+    private PointState(double[] c) {
+        this.c = c;
+    }
+
+    /** A state taking over an array the kernel has filled and checked. */
+    static PointState wrap(double[] components) {
+        return new PointState(components);
+    }
+
+    /** The components in the bulk layout, for the kernel callers of this package; never modify. */
+    double[] components() {
+        return c;
     }
 
     /**
@@ -88,9 +81,9 @@ public final class PointState implements Serializable {
         Arguments.finite("position", position);
         Arguments.finite("velocity", velocity);
         Arguments.finite("acceleration", acceleration);
-        return new PointState(position.getX(), position.getY(), position.getZ(),
-                velocity.getX(), velocity.getY(), velocity.getZ(),
-                acceleration.getX(), acceleration.getY(), acceleration.getZ());
+        return new PointState(new double[] {position.getX(), position.getY(), position.getZ(),
+            velocity.getX(), velocity.getY(), velocity.getZ(),
+            acceleration.getX(), acceleration.getY(), acceleration.getZ()});
     }
 
     /**
@@ -99,21 +92,16 @@ public final class PointState implements Serializable {
      * @param components x, y, z (m), vx, vy, vz (m/s), ax, ay, az (m/s^2)
      * @param offset index of x in {@code components}
      * @return the state
-     * @throws IllegalArgumentException if a component is NaN or infinite
+     * @throws NullPointerException if {@code components} is null
+     * @throws IllegalArgumentException if the range does not fit the array or a component is NaN or
+     *         infinite
      */
     public static PointState fromArray(double[] components, int offset) {
-        Arguments.nonNull("components", components);
-        if (offset < 0 || offset + COMPONENTS > components.length) {
-            throw new IllegalArgumentException("offset must be in [0, " + (components.length - COMPONENTS)
-                    + "], got " + offset);
-        }
+        Arguments.fromIndexSize("components", components, "offset", offset, COMPONENTS);
         for (int i = 0; i < COMPONENTS; i++) {
             Arguments.finite("components[" + (offset + i) + "]", components[offset + i]);
         }
-        int o = offset;
-        return new PointState(components[o], components[o + 1], components[o + 2],
-                components[o + 3], components[o + 4], components[o + 5],
-                components[o + 6], components[o + 7], components[o + 8]);
+        return new PointState(java.util.Arrays.copyOfRange(components, offset, offset + COMPONENTS));
     }
 
     /**
@@ -121,32 +109,27 @@ public final class PointState implements Serializable {
      *
      * @param target destination array
      * @param offset index where x is written
+     * @throws NullPointerException if {@code target} is null
+     * @throws IllegalArgumentException if the range does not fit the array
      */
     public void toArray(double[] target, int offset) {
-        target[offset] = x;
-        target[offset + 1] = y;
-        target[offset + 2] = z;
-        target[offset + 3] = vx;
-        target[offset + 4] = vy;
-        target[offset + 5] = vz;
-        target[offset + 6] = ax;
-        target[offset + 7] = ay;
-        target[offset + 8] = az;
+        Arguments.fromIndexSize("target", target, "offset", offset, COMPONENTS);
+        System.arraycopy(c, 0, target, offset, COMPONENTS);
     }
 
     /** @return position (m) */
     public Vector3D position() {
-        return new Vector3D(x, y, z);
+        return new Vector3D(c[0], c[1], c[2]);
     }
 
     /** @return velocity (m/s) */
     public Vector3D velocity() {
-        return new Vector3D(vx, vy, vz);
+        return new Vector3D(c[3], c[4], c[5]);
     }
 
     /** @return acceleration (m/s^2) */
     public Vector3D acceleration() {
-        return new Vector3D(ax, ay, az);
+        return new Vector3D(c[6], c[7], c[8]);
     }
 
     /**
@@ -157,7 +140,7 @@ public final class PointState implements Serializable {
      */
     public PointState withAcceleration(Vector3D acceleration) {
         Arguments.finite("acceleration", acceleration);
-        return new PointState(x, y, z, vx, vy, vz, acceleration.getX(), acceleration.getY(), acceleration.getZ());
+        return with(6, acceleration);
     }
 
     /**
@@ -168,7 +151,7 @@ public final class PointState implements Serializable {
      */
     public PointState withVelocity(Vector3D velocity) {
         Arguments.finite("velocity", velocity);
-        return new PointState(x, y, z, velocity.getX(), velocity.getY(), velocity.getZ(), ax, ay, az);
+        return with(3, velocity);
     }
 
     /**
@@ -179,7 +162,37 @@ public final class PointState implements Serializable {
      */
     public PointState withPosition(Vector3D position) {
         Arguments.finite("position", position);
-        return new PointState(position.getX(), position.getY(), position.getZ(), vx, vy, vz, ax, ay, az);
+        return with(0, position);
+    }
+
+    private PointState with(int at, Vector3D v) {
+        double[] n = c.clone();
+        n[at] = v.getX();
+        n[at + 1] = v.getY();
+        n[at + 2] = v.getZ();
+        return new PointState(n);
+    }
+
+    /**
+     * Re-checks a deserialized state: a stream is untrusted.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            if (c == null || c.length != COMPONENTS) {
+                throw new IllegalArgumentException("components must hold " + COMPONENTS + " doubles, got "
+                        + (c == null ? "none" : c.length));
+            }
+            for (int k = 0; k < COMPONENTS; k++) {
+                Arguments.finite("component " + k, c[k]);
+            }
+        } catch (IllegalArgumentException e) {
+            throw Arguments.refusedStream(PointState.class, e);
+        }
     }
 
     @Override
@@ -190,25 +203,18 @@ public final class PointState implements Serializable {
         if (!(other instanceof PointState)) {
             return false;
         }
-        PointState s = (PointState) other;
-        return Double.compare(x, s.x) == 0 && Double.compare(y, s.y) == 0 && Double.compare(z, s.z) == 0
-                && Double.compare(vx, s.vx) == 0 && Double.compare(vy, s.vy) == 0 && Double.compare(vz, s.vz) == 0
-                && Double.compare(ax, s.ax) == 0 && Double.compare(ay, s.ay) == 0 && Double.compare(az, s.az) == 0;
+        return java.util.Arrays.equals(c, ((PointState) other).c);
     }
 
     @Override
     public int hashCode() {
-        int h = 17;
-        for (double d : new double[] {x, y, z, vx, vy, vz, ax, ay, az}) {
-            h = 31 * h + Double.hashCode(d);
-        }
-        return h;
+        return java.util.Arrays.hashCode(c);
     }
 
     @Override
     public String toString() {
-        return "PointState{r=" + Formats.vector(x, y, z, "m")
-                + ", v=" + Formats.vector(vx, vy, vz, "m/s")
-                + ", a=" + Formats.vector(ax, ay, az, "m/s^2") + "}";
+        return "PointState{r=" + Formats.vector(c[0], c[1], c[2], "m")
+                + ", v=" + Formats.vector(c[3], c[4], c[5], "m/s")
+                + ", a=" + Formats.vector(c[6], c[7], c[8], "m/s^2") + "}";
     }
 }

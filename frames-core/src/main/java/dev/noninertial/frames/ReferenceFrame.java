@@ -1,5 +1,7 @@
 package dev.noninertial.frames;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Optional;
 
@@ -13,6 +15,12 @@ import java.util.Optional;
  * same name and motion are still two frames.
  *
  * <p>Immutable and thread-safe, provided the motions are (all motions of this library are).
+ *
+ * <p>Serialization goes through a proxy that rebuilds every frame with the same checks as
+ * {@link #attach(String, Motion)}: a stream cannot make a frame its own ancestor, and chains of
+ * any depth are written and read without deep recursion (each frame refers back to its
+ * ancestors in a pattern that keeps the nesting of the stream logarithmic in the depth), while
+ * frames shared in the object graph stay shared after reading.
  */
 public final class ReferenceFrame implements Serializable {
 
@@ -99,9 +107,31 @@ public final class ReferenceFrame implements Serializable {
         return parent == null;
     }
 
-    /** @return names from the root down to this frame, separated by '/' */
+    /**
+     * The names from the root down to this frame, separated by '/'. Built by one walk up the
+     * tree, in time linear in the length of the result (no recursion, so any depth works).
+     *
+     * @return the path, for example {@code "quay/crane/hook"}
+     */
     public String path() {
-        return parent == null ? name : parent.path() + "/" + name;
+        if (parent == null) {
+            return name;
+        }
+        int length = -1;
+        for (ReferenceFrame f = this; f != null; f = f.parent) {
+            length += f.name.length() + 1;
+        }
+        char[] out = new char[length];
+        int end = length;
+        for (ReferenceFrame f = this; f != null; f = f.parent) {
+            int start = end - f.name.length();
+            f.name.getChars(0, f.name.length(), out, start);
+            if (start > 0) {
+                out[start - 1] = '/';
+            }
+            end = start - 1;
+        }
+        return new String(out);
     }
 
     /**
@@ -149,7 +179,7 @@ public final class ReferenceFrame implements Serializable {
             // placements per link; same arithmetic as then(), hence the same bits
             double[] work = new double[2 * Placement.COMPONENTS];
             placeInAncestor(ancestor, t, work);
-            return Placement.fromArray(work, 0);
+            return Placement.wrap(java.util.Arrays.copyOf(work, Placement.COMPONENTS));
         }
         Placement local = motion.at(t);
         if (local == null) {
@@ -158,15 +188,22 @@ public final class ReferenceFrame implements Serializable {
         return local;
     }
 
-    /** Writes the placement of this frame in a strict ancestor into work[0, 24); work[24, 48) is scratch. */
+    /**
+     * Writes the placement of this frame in a strict ancestor into work[0, 24); work[24, 48) is
+     * scratch. Walks the tree iteratively (any depth, no recursion) and composes from the link
+     * just below the ancestor down to this frame, in the order of successive {@code then} calls.
+     */
     private void placeInAncestor(ReferenceFrame ancestor, double t, double[] work) {
-        if (parent == ancestor) {
-            writeLocal(t, work, 0);
-            return;
+        ReferenceFrame[] links = new ReferenceFrame[depth - ancestor.depth];
+        int k = links.length;
+        for (ReferenceFrame f = this; f != ancestor; f = f.parent) {
+            links[--k] = f;
         }
-        parent.placeInAncestor(ancestor, t, work);
-        writeLocal(t, work, Placement.COMPONENTS);
-        Placement.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+        links[0].writeLocal(t, work, 0);
+        for (int i = 1; i < links.length; i++) {
+            links[i].writeLocal(t, work, Placement.COMPONENTS);
+            Kinematics.compose(work, 0, work, Placement.COMPONENTS, work, 0);
+        }
     }
 
     /** This frame's motion on primitives; a motion that returns null is reported with the frame's path. */
@@ -188,6 +225,105 @@ public final class ReferenceFrame implements Serializable {
      */
     public FramedState stateAt(double t, PointState stateInThisFrame) {
         return new FramedState(this, t, stateInThisFrame);
+    }
+
+    // ------------------------------------------------------------------ serialization
+
+    /**
+     * Replaces this frame in a stream by its proxy.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        int from = depth & (depth - 1); // depth with its lowest set bit cleared
+        Object[] ancestors = new Object[depth - from];
+        ReferenceFrame f = parent;
+        for (int i = ancestors.length - 1; i >= 0; i--) {
+            ancestors[i] = f;
+            f = f.parent;
+        }
+        return new Proxy(name, motion, depth, ancestors);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy.
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("a ReferenceFrame is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form of a frame: its name, its motion, its depth and the ancestors from depth
+     * {@code depth & (depth - 1)} to {@code depth - 1}, root side first. Writing them in that order
+     * means every ancestor but the first was already written by an earlier element of the same
+     * array, so the stream nests at most one level per set bit of the depth (17 levels for
+     * 100,000 links) and holds about {@code n log2(n) / 2} references for a chain of n links.
+     */
+    private static final class Proxy implements Serializable {
+
+        private static final long serialVersionUID = 1L;
+
+        /** Name of the frame. */
+        private final String name;
+        /** Motion in the parent, null for a root. */
+        private final Motion motion;
+        /** Number of links from the root. */
+        private final int depth;
+        /** Ancestors at depths {@code depth & (depth - 1)} to {@code depth - 1}, root side first. */
+        private final Object[] ancestors;
+
+        Proxy(String name, Motion motion, int depth, Object[] ancestors) {
+            this.name = name;
+            this.motion = motion;
+            this.depth = depth;
+            this.ancestors = ancestors;
+        }
+
+        /**
+         * Rebuilds the frame with the checks of {@link ReferenceFrame#attach(String, Motion)}.
+         *
+         * @return the frame
+         * @throws InvalidObjectException if the stream does not describe a frame of a tree
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                if (depth < 0 || ancestors == null) {
+                    throw new IllegalArgumentException("depth must be at least 0, got " + depth);
+                }
+                if (depth == 0) {
+                    if (ancestors.length != 0 || motion != null) {
+                        throw new IllegalArgumentException("a root has neither ancestors nor a motion");
+                    }
+                    return inertialRoot(name);
+                }
+                int from = depth & (depth - 1);
+                if (ancestors.length != depth - from) {
+                    throw new IllegalArgumentException("frame at depth " + depth + " must list "
+                            + (depth - from) + " ancestors, got " + ancestors.length);
+                }
+                ReferenceFrame previous = null;
+                for (int i = 0; i < ancestors.length; i++) {
+                    if (!(ancestors[i] instanceof ReferenceFrame)) {
+                        throw new IllegalArgumentException("ancestor " + i + " of frame '" + name
+                                + "' is not a frame (a frame cannot be its own ancestor)");
+                    }
+                    ReferenceFrame a = (ReferenceFrame) ancestors[i];
+                    if (a.depth != from + i || (previous != null && a.parent != previous)) {
+                        throw new IllegalArgumentException("ancestor " + i + " of frame '" + name
+                                + "' is not the parent of the ancestor before it");
+                    }
+                    previous = a;
+                }
+                return previous.attach(name, motion);
+            } catch (IllegalArgumentException | NullPointerException e) {
+                InvalidObjectException failure = new InvalidObjectException("corrupt frame: " + e.getMessage());
+                failure.initCause(e);
+                throw failure;
+            }
+        }
     }
 
     @Override

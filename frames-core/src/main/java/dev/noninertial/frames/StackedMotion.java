@@ -14,6 +14,18 @@ record StackedMotion(Motion outer, Motion inner) implements Motion, Serializable
 
     private static final long serialVersionUID = 1L;
 
+    /**
+     * Refuses a missing motion (also when read from a stream: records deserialize through this
+     * constructor).
+     *
+     * @param outer motion of M in the parent
+     * @param inner motion of the moving frame in M
+     */
+    StackedMotion {
+        Arguments.nonNull("outer", outer);
+        Arguments.nonNull("inner", inner);
+    }
+
     @Override
     public Placement at(double t) {
         return outer.at(t).then(inner.at(t));

@@ -1,7 +1,5 @@
 package dev.noninertial.geodesy;
 
-import java.io.Serializable;
-
 import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
@@ -37,7 +35,7 @@ public interface AttitudeProfile {
      */
     static AttitudeProfile stationary(double heading, double pitch, double roll) {
         AttitudeSample sample = AttitudeSample.stationary(heading, pitch, roll);
-        return (AttitudeProfile & Serializable) t -> sample;
+        return new SteadyAttitudes.Still(sample);
     }
 
     /**
@@ -58,11 +56,7 @@ public interface AttitudeProfile {
                     + start.headingAcceleration() + ", " + start.pitchAcceleration() + ", "
                     + start.rollAcceleration() + ") rad/s^2 (heading, pitch, roll)");
         }
-        double headingRate = start.headingRate();
-        double pitchRate = start.pitchRate();
-        double rollRate = start.rollRate();
-        return (AttitudeProfile & Serializable) t -> new AttitudeSample(start.heading() + headingRate * t,
-                start.pitch() + pitchRate * t, start.roll() + rollRate * t, headingRate, pitchRate, rollRate, 0, 0, 0);
+        return new SteadyAttitudes.Turning(start);
     }
 
     /**
@@ -75,8 +69,7 @@ public interface AttitudeProfile {
      * @return the motion
      */
     default Motion toMotion() {
-        AttitudeProfile profile = this;
-        return (Motion & Serializable) t -> bodyPlacement(profile.at(t));
+        return new SteadyAttitudes.BodyMotion(this);
     }
 
     /**

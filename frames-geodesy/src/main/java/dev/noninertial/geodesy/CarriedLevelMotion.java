@@ -27,6 +27,24 @@ final class CarriedLevelMotion implements Motion, Serializable {
         this.axes = axes;
     }
 
+    /**
+     * Re-checks the fields read from a stream as {@link EarthFrames#carriedLevel} does.
+     *
+     * @param in the stream
+     * @throws java.io.IOException if the stream fails or a field is missing
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            dev.noninertial.frames.Arguments.nonNull("ellipsoid", ellipsoid);
+            dev.noninertial.frames.Arguments.nonNull("path", path);
+            dev.noninertial.frames.Arguments.nonNull("axes", axes);
+        } catch (NullPointerException e) {
+            throw dev.noninertial.frames.Arguments.refusedStream(CarriedLevelMotion.class, e);
+        }
+    }
+
     @Override
     public Placement at(double t) {
         PathSample p = path.at(t);

@@ -67,6 +67,17 @@ final class Courses {
     /** Constant rates of latitude, longitude and height. */
     record ConstantRates(LatLonHeight start, double latitudeRate, double longitudeRate, double heightRate)
             implements GeodeticPath, Serializable {
+        /**
+         * Re-runs the checks of {@link GeodeticPath#constantRates} (records deserialize through
+         * this constructor).
+         */
+        ConstantRates {
+            dev.noninertial.frames.Arguments.nonNull("start", start);
+            dev.noninertial.frames.Arguments.finite("latitudeRate", latitudeRate);
+            dev.noninertial.frames.Arguments.finite("longitudeRate", longitudeRate);
+            dev.noninertial.frames.Arguments.finite("heightRate", heightRate);
+        }
+
         @Override
         public PathSample at(double t) {
             if (!Double.isFinite(t)) {
@@ -109,6 +120,31 @@ final class Courses {
             }
             this.arcToNorthLimit = arc(start.latitude(), limit);
             this.arcToSouthLimit = arc(start.latitude(), -limit);
+        }
+
+        /**
+         * Re-runs the constructor's checks and computations and refuses a stream whose stored
+         * limits disagree with them.
+         *
+         * @param in the stream
+         * @throws java.io.IOException if the stream fails or holds values the factory refuses
+         * @throws ClassNotFoundException if a class of the stream is missing
+         */
+        private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+            in.defaultReadObject();
+            try {
+                dev.noninertial.frames.Arguments.nonNull("ellipsoid", ellipsoid);
+                dev.noninertial.frames.Arguments.nonNull("start", start);
+                dev.noninertial.frames.Arguments.finite("northSpeed", vn);
+                dev.noninertial.frames.Arguments.finite("eastSpeed", ve);
+                Steady fresh = new Steady(ellipsoid, start, vn, ve);
+                if (Double.compare(fresh.arcToNorthLimit, arcToNorthLimit) != 0
+                        || Double.compare(fresh.arcToSouthLimit, arcToSouthLimit) != 0) {
+                    throw new IllegalArgumentException("stored arcs to the pole limits disagree with the course");
+                }
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw dev.noninertial.frames.Arguments.refusedStream(Steady.class, e);
+            }
         }
 
         private double rm(double lat) {

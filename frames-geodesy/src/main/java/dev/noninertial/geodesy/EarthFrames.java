@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.time.Instant;
 import java.util.Locale;
@@ -352,6 +354,16 @@ public final class EarthFrames implements Serializable {
 
         private static final long serialVersionUID = 1L;
 
+        /** Re-runs the checks of {@link EarthFrames#gravitationIn} (records deserialize through it). */
+        GravitationForce {
+            Arguments.nonNull("model", model);
+            Arguments.nonNull("frame", frame);
+            Arguments.nonNull("earthFixed", earthFixed);
+            if (frame.root() != earthFixed.root()) {
+                throw new IllegalArgumentException("frame '" + frame.path() + "' is not in the tree of earthFixed");
+            }
+        }
+
         @Override
         public Vector3D at(double time, PointState state) {
             Placement p = frame.placementIn(earthFixed, time);
@@ -361,6 +373,41 @@ public final class EarthFrames implements Serializable {
         @Override
         public String toString() {
             return "gravitation of " + model + " in " + frame.path();
+        }
+    }
+
+    /**
+     * Reads the fields and re-checks them against what {@link #of(EarthModel, Instant)} builds:
+     * the stored angle must be the Earth rotation angle of the epoch, the inertial frame a root
+     * and the Earth-fixed frame its child spinning at the model's rate from that angle. The frames
+     * themselves are kept (not rebuilt), so frames attached to them in the same stream stay in
+     * this Earth's tree.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or its fields disagree with each other
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("model", model);
+            Arguments.nonNull("epochUt1", epoch);
+            Arguments.nonNull("inertial", inertial);
+            Arguments.nonNull("earthFixed", earthFixed);
+            double angle = EarthRotationAngle.at(epoch);
+            if (Double.compare(angle, angleAtEpoch) != 0) {
+                throw new IllegalArgumentException("angleAtEpoch " + angleAtEpoch
+                        + " rad disagrees with the Earth rotation angle " + angle + " rad of the epoch " + epoch);
+            }
+            if (!inertial.isInertialRoot() || earthFixed.parent().orElse(null) != inertial) {
+                throw new IllegalArgumentException("earthFixed must be a child of the inertial root");
+            }
+            if (!Motions.spin(Vector3D.PLUS_K, angleAtEpoch, model.rotationRate()).equals(earthFixed.motion().get())) {
+                throw new IllegalArgumentException("the motion of earthFixed (" + earthFixed.motion().get()
+                        + ") is not the spin of the model from angleAtEpoch " + angleAtEpoch + " rad");
+            }
+        } catch (IllegalArgumentException | NullPointerException e) {
+            throw Arguments.refusedStream(EarthFrames.class, e);
         }
     }
 

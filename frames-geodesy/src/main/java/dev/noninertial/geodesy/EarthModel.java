@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Locale;
 
@@ -240,15 +242,30 @@ public final class EarthModel implements Serializable {
      * @throws IllegalArgumentException if the position is not finite or too deep
      */
     public Vector3D normalGravityVector(Vector3D position) {
-        double[] c = ellipsoidal(position);
-        double u = c[0];
-        double sb2 = c[1];
-        double cb2 = c[2];
-        double px = position.getX();
-        double py = position.getY();
-        double pz = position.getZ();
+        Arguments.finite("position", position);
+        double[] g = new double[3];
+        normalGravityAt(position.getX(), position.getY(), position.getZ(), g, 0);
+        return new Vector3D(g[0], g[1], g[2]);
+    }
+
+    /**
+     * The exact normal gravity vector at an Earth-fixed point, written into an array: the
+     * allocation-free form of {@link #normalGravityVector(Vector3D)} (same closed form).
+     */
+    private void normalGravityAt(double px, double py, double pz, double[] out, int offset) {
+        double p2 = px * px + py * py;
+        double d = p2 + pz * pz - linear2;
+        double u2 = 0.5 * (d + Math.sqrt(d * d + 4.0 * linear2 * pz * pz));
+        double u = Math.sqrt(u2);
+        if (!(u >= b + MIN_HEIGHT)) {
+            throw new IllegalArgumentException("position (" + px + ", " + py + ", " + pz + ") m is deeper than "
+                    + (-MIN_HEIGHT) + " m below the ellipsoid (ellipsoidal coordinate u = " + u + " m, must be >= "
+                    + (b + MIN_HEIGHT) + " m): the normal field is not defined inside the masses");
+        }
+        double u2e2 = u2 + linear2;
+        double cb2 = p2 / u2e2;
+        double sb2 = pz * pz / u2;
         double x = linear / u;
-        double u2e2 = u * u + linear2;
         double w2 = omega * omega;
         // dq/du = Q'(x) dx/du with x = E/u
         double dqdu = -qDerivative(x) * linear / (u * u);
@@ -259,7 +276,9 @@ public final class EarthModel implements Serializable {
         double cb = kb / metric;                           // multiplies dr/dbeta / (sin cos)
         double sinBeta = pz / u;
         double radial = ca * u / u2e2 - cb * sb2;
-        return new Vector3D(radial * px, radial * py, ca * sinBeta + cb * u * sinBeta * cb2);
+        out[offset] = radial * px;
+        out[offset + 1] = radial * py;
+        out[offset + 2] = ca * sinBeta + cb * u * sinBeta * cb2;
     }
 
     /**
@@ -316,13 +335,48 @@ public final class EarthModel implements Serializable {
      * @return normal gravity (m/s^2) in the chosen local axes; mostly along "down"
      */
     public Vector3D normalGravityIn(LatLonHeight position, LocalAxes axes) {
-        Vector3D g = normalGravityVector(ellipsoid.toCartesian(position));
-        double[][] rows = Ellipsoid.localRows(position.latitude(), position.longitude(), axes);
-        return new Vector3D(dot(rows[0], g), dot(rows[1], g), dot(rows[2], g));
+        Arguments.nonNull("position", position);
+        Arguments.nonNull("axes", axes);
+        double[] g = new double[3];
+        normalGravityIn(position.latitude(), position.height(), axes, g, 0);
+        return new Vector3D(g[0], g[1], g[2]);
     }
 
-    private static double dot(double[] r, Vector3D v) {
-        return r[0] * v.getX() + r[1] * v.getY() + r[2] * v.getZ();
+    /**
+     * Exact normal gravity in local-level axes, written into an array without allocating: the
+     * primitive form of {@link #normalGravityIn(LatLonHeight, LocalAxes)} for hot paths (the
+     * field is symmetric about the polar axis, so the longitude plays no part). The point is
+     * carried to Earth-fixed axes at longitude 0 by {@link Ellipsoid#toCartesian(double, double,
+     * double, double[], int)}, the closed form of {@link #normalGravityVector(Vector3D)} is
+     * evaluated there and resolved in the local axes (rows of {@link Ellipsoid#localOrientation}).
+     *
+     * @param latitude geodetic latitude (rad), in [-pi/2, pi/2]
+     * @param height ellipsoidal height (m), above about -20 km
+     * @param axes ENU (x east, y north, z up) or NED (x north, y east, z down)
+     * @param out receives the three components (m/s^2) in the chosen local axes
+     * @param offset index of the first component in {@code out}
+     * @throws IllegalArgumentException if the latitude is out of range or the point too deep
+     */
+    public void normalGravityIn(double latitude, double height, LocalAxes axes, double[] out, int offset) {
+        Ellipsoid.checkLatitude(latitude);
+        ellipsoid.toCartesian(latitude, 0.0, height, out, offset);
+        normalGravityAt(out[offset], 0.0, out[offset + 2], out, offset);
+        double gx = out[offset];
+        double gz = out[offset + 2];
+        double s = Math.sin(latitude);
+        double c = Math.cos(latitude);
+        // at longitude 0: north (-s, 0, c), east (0, 1, 0), up (c, 0, s); the y component is 0
+        double north = -s * gx + c * gz;
+        double up = c * gx + s * gz;
+        if (axes == LocalAxes.ENU) {
+            out[offset] = 0.0;
+            out[offset + 1] = north;
+            out[offset + 2] = up;
+        } else {
+            out[offset] = north;
+            out[offset + 1] = 0.0;
+            out[offset + 2] = -up;
+        }
     }
 
     // ------------------------------------------------------------------ rates
@@ -347,11 +401,35 @@ public final class EarthModel implements Serializable {
      * @return angular velocity of the Earth-fixed frame relative to inertial space (rad/s), in local axes
      */
     public Vector3D earthRateIn(double latitude, LocalAxes axes) {
+        double[] w = new double[3];
+        earthRateIn(latitude, axes, w, 0);
+        return new Vector3D(w[0], w[1], w[2]);
+    }
+
+    /**
+     * Earth rotation rate in local-level axes, written into an array without allocating: the
+     * primitive form of {@link #earthRateIn(double, LocalAxes)} (same formula).
+     *
+     * @param latitude geodetic latitude (rad), in [-pi/2, pi/2]
+     * @param axes local axis order
+     * @param out receives the three components (rad/s)
+     * @param offset index of the first component in {@code out}
+     * @throws IllegalArgumentException if the latitude is out of range
+     */
+    public void earthRateIn(double latitude, LocalAxes axes, double[] out, int offset) {
         Ellipsoid.checkLatitude(latitude);
         Arguments.nonNull("axes", axes);
         double c = omega * Math.cos(latitude);
         double s = omega * Math.sin(latitude);
-        return axes == LocalAxes.ENU ? new Vector3D(0.0, c, s) : new Vector3D(c, 0.0, -s);
+        if (axes == LocalAxes.ENU) {
+            out[offset] = 0.0;
+            out[offset + 1] = c;
+            out[offset + 2] = s;
+        } else {
+            out[offset] = c;
+            out[offset + 1] = 0.0;
+            out[offset + 2] = -s;
+        }
     }
 
     /**
@@ -373,15 +451,54 @@ public final class EarthModel implements Serializable {
         Arguments.finite("groundVelocity", groundVelocity);
         Arguments.nonNull("axes", axes);
         double lat = refusePole(position);
-        double north = northComponent(groundVelocity, axes);
-        double east = eastComponent(groundVelocity, axes);
-        double rm = ellipsoid.meridianRadius(lat) + position.height();
-        double rn = ellipsoid.primeVerticalRadius(lat) + position.height();
+        double[] v = {groundVelocity.getX(), groundVelocity.getY(), groundVelocity.getZ()};
+        double[] w = new double[3];
+        transportRate(lat, position.height(), v, 0, axes, w, 0);
+        return new Vector3D(w[0], w[1], w[2]);
+    }
+
+    /**
+     * Transport rate written into an array without allocating: the primitive form of
+     * {@link #transportRate(LatLonHeight, Vector3D, LocalAxes)} (same formula, same refusal at the
+     * poles), with the radii of curvature of {@link Ellipsoid#meridianRadius} and
+     * {@link Ellipsoid#primeVerticalRadius}. The velocity and the result are resolved in the same
+     * stated axes; the vertical component does not enter.
+     *
+     * @param latitude geodetic latitude (rad), strictly inside (-pi/2, pi/2)
+     * @param height ellipsoidal height (m)
+     * @param groundVelocity holds the velocity relative to the Earth (m/s), resolved in {@code axes}
+     * @param velocityOffset index of its first component in {@code groundVelocity}
+     * @param axes local axis order of the velocity and of the result
+     * @param out receives the three components (rad/s)
+     * @param offset index of the first component in {@code out}
+     * @throws IllegalArgumentException at a pole or for non-finite values
+     */
+    public void transportRate(double latitude, double height, double[] groundVelocity, int velocityOffset,
+                              LocalAxes axes, double[] out, int offset) {
+        Arguments.nonNull("axes", axes);
+        double north = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 1 : 0)];
+        double east = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 0 : 1)];
+        Arguments.finite("groundVelocity north component (m/s)", north);
+        Arguments.finite("groundVelocity east component (m/s)", east);
+        Arguments.finite("height (m)", height);
+        if (!(Math.abs(latitude) < 0.5 * Math.PI)) {
+            throw new IllegalArgumentException("latitude must be strictly inside (-90, 90) deg for a "
+                    + "north-aligned frame, got " + Math.toDegrees(latitude) + " deg");
+        }
+        double rm = ellipsoid.meridianRadius(latitude) + height;
+        double rn = ellipsoid.primeVerticalRadius(latitude) + height;
         double aboutEast = -north / rm;
         double aboutNorth = east / rn;
-        double aboutUp = east * Math.tan(lat) / rn;
-        return axes == LocalAxes.ENU ? new Vector3D(aboutEast, aboutNorth, aboutUp)
-                : new Vector3D(aboutNorth, aboutEast, -aboutUp);
+        double aboutUp = east * Math.tan(latitude) / rn;
+        if (axes == LocalAxes.ENU) {
+            out[offset] = aboutEast;
+            out[offset + 1] = aboutNorth;
+            out[offset + 2] = aboutUp;
+        } else {
+            out[offset] = aboutNorth;
+            out[offset + 1] = aboutEast;
+            out[offset + 2] = -aboutUp;
+        }
     }
 
     /**
@@ -517,6 +634,51 @@ public final class EarthModel implements Serializable {
     @Override
     public int hashCode() {
         return (ellipsoid.hashCode() * 31 + Double.hashCode(gm)) * 31 + Double.hashCode(omega);
+    }
+
+    /**
+     * Replaces this model in a stream by its defining constants.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        return new Proxy(ellipsoid, gm, omega);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy (it could hold derived constants that disagree
+     * with the defining ones).
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("an EarthModel is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form: the defining constants; reading calls
+     * {@link #of(Ellipsoid, double, double)}.
+     *
+     * @param ellipsoid the level ellipsoid
+     * @param gm GM (m^3/s^2)
+     * @param rotationRate w (rad/s)
+     */
+    private record Proxy(Ellipsoid ellipsoid, double gm, double rotationRate) implements Serializable {
+
+        /**
+         * Rebuilds the model with the checks of {@link EarthModel#of(Ellipsoid, double, double)}.
+         *
+         * @return the model
+         * @throws InvalidObjectException if the constants are refused
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                return of(ellipsoid, gm, rotationRate);
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(EarthModel.class, e);
+            }
+        }
     }
 
     @Override

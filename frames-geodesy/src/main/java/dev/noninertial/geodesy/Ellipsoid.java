@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Locale;
 
@@ -175,13 +177,30 @@ public final class Ellipsoid implements Serializable {
      */
     public Vector3D toCartesian(LatLonHeight position) {
         Arguments.nonNull("position", position);
-        double sLat = Math.sin(position.latitude());
-        double cLat = Math.cos(position.latitude());
+        double[] x = new double[3];
+        toCartesian(position.latitude(), position.longitude(), position.height(), x, 0);
+        return new Vector3D(x[0], x[1], x[2]);
+    }
+
+    /**
+     * Geodetic to Earth-fixed Cartesian, written into an array without allocating: the primitive
+     * form of {@link #toCartesian(LatLonHeight)} (same formula) for hot paths. The arguments are
+     * not checked.
+     *
+     * @param latitude geodetic latitude (rad)
+     * @param longitude longitude (rad)
+     * @param height ellipsoidal height (m)
+     * @param out receives x, y, z (m), ECEF axes
+     * @param offset index of x in {@code out}
+     */
+    public void toCartesian(double latitude, double longitude, double height, double[] out, int offset) {
+        double sLat = Math.sin(latitude);
+        double cLat = Math.cos(latitude);
         double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);
-        double h = position.height();
-        double rp = (n + h) * cLat;
-        return new Vector3D(rp * Math.cos(position.longitude()), rp * Math.sin(position.longitude()),
-                (n * (1.0 - e2) + h) * sLat);
+        double rp = (n + height) * cLat;
+        out[offset] = rp * Math.cos(longitude);
+        out[offset + 1] = rp * Math.sin(longitude);
+        out[offset + 2] = (n * (1.0 - e2) + height) * sLat;
     }
 
     /**
@@ -602,6 +621,49 @@ public final class Ellipsoid implements Serializable {
     @Override
     public int hashCode() {
         return 31 * Double.hashCode(a) + Double.hashCode(f);
+    }
+
+    /**
+     * Replaces this ellipsoid in a stream by its defining constants.
+     *
+     * @return the proxy
+     */
+    private Object writeReplace() {
+        return new Proxy(a, f);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy (it could hold derived constants that disagree
+     * with a and f).
+     *
+     * @param in the stream
+     * @throws InvalidObjectException always
+     */
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("an Ellipsoid is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form: semi-major axis and flattening; reading calls {@link #of(double, double)}.
+     *
+     * @param semiMajorAxis a (m)
+     * @param flattening f
+     */
+    private record Proxy(double semiMajorAxis, double flattening) implements Serializable {
+
+        /**
+         * Rebuilds the ellipsoid with the checks of {@link Ellipsoid#of(double, double)}.
+         *
+         * @return the ellipsoid
+         * @throws InvalidObjectException if the constants are refused
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                return of(semiMajorAxis, flattening);
+            } catch (IllegalArgumentException e) {
+                throw Arguments.refusedStream(Ellipsoid.class, e);
+            }
+        }
     }
 
     @Override

@@ -1,5 +1,7 @@
 package dev.noninertial.geodesy;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Arrays;
 
@@ -168,6 +170,33 @@ public final class GeodeticUncertainty implements Serializable {
 
     private static RealMatrix local(LatLonHeight position, LocalAxes axes) {
         return MatrixUtils.createRealMatrix(Ellipsoid.localRows(position.latitude(), position.longitude(), axes));
+    }
+
+    /**
+     * Reads the fields and re-checks them as {@link #of(Ellipsoid, LatLonHeight, RealMatrix)} does.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds values the factory refuses
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("ellipsoid", ellipsoid);
+            Arguments.nonNull("position", position);
+            Arguments.nonNull("covariance", covariance);
+            if (covariance.length != 3) {
+                throw new IllegalArgumentException("covariance must be 3x3, got " + covariance.length + " rows");
+            }
+            for (double[] row : covariance) {
+                if (row == null || row.length != 3) {
+                    throw new IllegalArgumentException("covariance must be 3x3");
+                }
+            }
+            CovarianceCheck.check("covariance", MatrixUtils.createRealMatrix(covariance), 3);
+        } catch (IllegalArgumentException | NullPointerException e) {
+            throw Arguments.refusedStream(GeodeticUncertainty.class, e);
+        }
     }
 
     private static double[][] symmetric(double[][] m) {

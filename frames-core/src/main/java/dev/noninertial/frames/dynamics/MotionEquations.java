@@ -41,31 +41,18 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
     @Override
     public double[] computeDerivatives(double t, double[] y) {
         checkState(t, y);
-        Vector3D f = realForce(t, y);
-        Placement p = placement(t, y);
-        Vector3D w = p.angularVelocity();
-        Vector3D al = p.angularAcceleration();
-        // R o'': the frame origin's inertial acceleration in F axes; it enters with a minus sign
-        Vector3D ro = p.vectorFromBase(p.originAcceleration());
-        double wx = w.getX();
-        double wy = w.getY();
-        double wz = w.getZ();
-        double x = y[0];
-        double yy = y[1];
-        double z = y[2];
-        double vx = y[3];
-        double vy = y[4];
-        double vz = y[5];
-        double cx = wy * z - wz * yy;
-        double cy = wz * x - wx * z;
-        double cz = wx * yy - wy * x;
-        double ax = f.getX() - ro.getX() - (al.getY() * z - al.getZ() * yy) - 2 * (wy * vz - wz * vy)
-                - (wy * cz - wz * cy);
-        double ay = f.getY() - ro.getY() - (al.getZ() * x - al.getX() * z) - 2 * (wz * vx - wx * vz)
-                - (wz * cx - wx * cz);
-        double az = f.getZ() - ro.getZ() - (al.getX() * yy - al.getY() * x) - 2 * (wx * vy - wy * vx)
-                - (wx * cy - wy * cx);
-        return new double[] {vx, vy, vz, ax, ay, az};
+        PointState s = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
+        Vector3D f = realForce(t, y, s);
+        // the four terms come from the kinematics kernel, the one formula of the library
+        FictitiousAccelerations k = placement(t, y).fictitious(s);
+        Vector3D fr = k.frameAcceleration();
+        Vector3D eu = k.euler();
+        Vector3D co = k.coriolis();
+        Vector3D ce = k.centrifugal();
+        return new double[] {y[3], y[4], y[5],
+            f.getX() + fr.getX() + eu.getX() + co.getX() + ce.getX(),
+            f.getY() + fr.getY() + eu.getY() + co.getY() + ce.getY(),
+            f.getZ() + fr.getZ() + eu.getZ() + co.getZ() + ce.getZ()};
     }
 
     /** The point with its acceleration from the equations of motion, tagged with F and t. */
@@ -77,19 +64,23 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
     /** Full breakdown at (t, y). */
     TrajectorySample sample(double t, double[] y) {
         checkState(t, y);
-        Vector3D f = realForce(t, y);
         PointState bare = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
+        Vector3D f = realForce(t, y, bare);
         FictitiousAccelerations fict = placement(t, y).fictitious(bare);
         PointState full = bare.withAcceleration(f.add(fict.total()));
         return new TrajectorySample(FramedState.of(frame, t, full), f, fict);
     }
 
-    /** Sum of the real forces, refused with time and state when a force misbehaves. */
+    /** Sum of the real forces at (t, y). */
     Vector3D realForce(double t, double[] y) {
+        return realForce(t, y, PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5])));
+    }
+
+    /** Sum of the real forces, refused with time and state when a force misbehaves. */
+    Vector3D realForce(double t, double[] y, PointState s) {
         if (forces.length == 0) {
             return Vector3D.ZERO;
         }
-        PointState s = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
         double fx = 0;
         double fy = 0;
         double fz = 0;

@@ -149,110 +149,17 @@ public final class Motions {
     }
 
     /**
-     * Writes the placement of a turn by angle {@code th} about the unit axis {@code (nx, ny, nz)}
-     * with rate {@code th1} and acceleration {@code th2} (origin at rest at zero) in the layout of
-     * {@link Placement#toArray(double[], int)}, with exactly the arithmetic of {@link Placement#ofQuaternion} so that
-     * both paths give identical bits. No checks.
+     * Writes the placement of a turn by angle {@code th} about the unit axis {@code n} with rate
+     * {@code th1} and acceleration {@code th2} (origin at rest at zero) in the matrix layout of
+     * {@link Placement#toArray(double[], int)}, with the checks and bits of {@link #turn}.
      */
-    @SuppressWarnings("checkstyle:ParameterNumber")
-    private static void writeTurn(double nx, double ny, double nz, double th, double th1, double th2,
-                          double[] target, int o) {
+    private static void turn(Vector3D n, double th, double th1, double th2, double[] target, int offset) {
         double half = 0.5 * th;
         double s = Math.sin(half);
-        double q0 = Math.cos(half);
-        double q1 = s * nx;
-        double q2 = s * ny;
-        double q3 = s * nz;
-        double q0q0 = q0 * q0;
-        double q0q1 = q0 * q1;
-        double q0q2 = q0 * q2;
-        double q0q3 = q0 * q3;
-        double q1q1 = q1 * q1;
-        double q1q2 = q1 * q2;
-        double q1q3 = q1 * q3;
-        double q2q2 = q2 * q2;
-        double q2q3 = q2 * q3;
-        double q3q3 = q3 * q3;
-        for (int k = 0; k < 9; k++) {
-            target[o + k] = 0.0;
-        }
-        target[o + 9] = 2.0 * (q0q0 + q1q1) - 1.0;
-        target[o + 10] = 2.0 * (q1q2 + q0q3);
-        target[o + 11] = 2.0 * (q1q3 - q0q2);
-        target[o + 12] = 2.0 * (q1q2 - q0q3);
-        target[o + 13] = 2.0 * (q0q0 + q2q2) - 1.0;
-        target[o + 14] = 2.0 * (q2q3 + q0q1);
-        target[o + 15] = 2.0 * (q1q3 + q0q2);
-        target[o + 16] = 2.0 * (q2q3 - q0q1);
-        target[o + 17] = 2.0 * (q0q0 + q3q3) - 1.0;
-        target[o + 18] = th1 * nx;
-        target[o + 19] = th1 * ny;
-        target[o + 20] = th1 * nz;
-        target[o + 21] = th2 * nx;
-        target[o + 22] = th2 * ny;
-        target[o + 23] = th2 * nz;
-    }
-
-    /**
-     * Writes a pure translation (identity orientation, no rotation rates) in the layout of
-     * {@link Placement#toArray(double[], int)}. No checks.
-     */
-    @SuppressWarnings("checkstyle:ParameterNumber")
-    private static void writeTranslation(double px, double py, double pz, double vx, double vy, double vz,
-                                 double ax, double ay, double az, double[] target, int o) {
-        target[o] = px;
-        target[o + 1] = py;
-        target[o + 2] = pz;
-        target[o + 3] = vx;
-        target[o + 4] = vy;
-        target[o + 5] = vz;
-        target[o + 6] = ax;
-        target[o + 7] = ay;
-        target[o + 8] = az;
-        for (int k = 9; k < Placement.COMPONENTS; k++) {
-            target[o + k] = 0.0;
-        }
-        target[o + 9] = 1.0;
-        target[o + 13] = 1.0;
-        target[o + 17] = 1.0;
-    }
-
-    private static void checkTarget(double[] target, int offset) {
-        Arguments.nonNull("target", target);
-        if (offset < 0 || offset > target.length - Placement.COMPONENTS) {
-            throw new IllegalArgumentException("offset must be in [0, " + (target.length - Placement.COMPONENTS)
-                    + "] for an array of length " + target.length + ", got " + offset);
-        }
-    }
-
-    /** Range checks of the bulk conversions, with the messages of {@link Motion#toBase}. */
-    @SuppressWarnings("checkstyle:ParameterNumber")
-    private static void checkBulk(double[] times, int timeOffset, double[] source, int sourceOffset,
-                                  double[] target, int targetOffset, int count) {
-        Arguments.nonNull("source", source);
-        Arguments.nonNull("target", target);
-        Arguments.nonNull("times", times);
-        if (count < 0) {
-            throw new IllegalArgumentException("count must be >= 0, got " + count);
-        }
-        long span = (long) count * 9;
-        if (sourceOffset < 0 || sourceOffset + span > source.length) {
-            throw new IllegalArgumentException("sourceOffset must be in [0, " + (source.length - span)
-                    + "] for " + count + " states, got " + sourceOffset);
-        }
-        if (targetOffset < 0 || targetOffset + span > target.length) {
-            throw new IllegalArgumentException("targetOffset must be in [0, " + (target.length - span)
-                    + "] for " + count + " states, got " + targetOffset);
-        }
-        if (source == target && sourceOffset != targetOffset
-                && Math.abs((long) sourceOffset - targetOffset) < span) {
-            throw new IllegalArgumentException("source and target ranges overlap with different offsets ("
-                    + sourceOffset + " and " + targetOffset + ")");
-        }
-        if (timeOffset < 0 || (long) timeOffset + count > times.length) {
-            throw new IllegalArgumentException("timeOffset must be in [0, " + (times.length - count)
-                    + "] for " + count + " states, got " + timeOffset);
-        }
+        Placement.ofQuaternion(0, 0, 0, 0, 0, 0, 0, 0, 0,
+                Math.cos(half), s * n.getX(), s * n.getY(), s * n.getZ(),
+                th1 * n.getX(), th1 * n.getY(), th1 * n.getZ(),
+                th2 * n.getX(), th2 * n.getY(), th2 * n.getZ(), target, offset);
     }
 
     private static void checkTime(double t) {
@@ -261,7 +168,24 @@ public final class Motions {
         }
     }
 
+    /**
+     * Re-checks the parameters of a motion record: records of this class are also built by
+     * deserialization, through their canonical constructor, so a stream meets the checks of the
+     * factories.
+     */
+    private static void checkUnitAxis(String name, Vector3D axis) {
+        Arguments.finite(name, axis);
+        double norm = axis.getNorm();
+        if (!(Math.abs(norm - 1.0) <= 1e-12)) {
+            throw new IllegalArgumentException(name + " must be a unit vector (within 1e-12), got norm " + norm);
+        }
+    }
+
     private record Fixed(Placement placement) implements Motion, Serializable {
+        Fixed {
+            Arguments.nonNull("placement", placement);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -282,6 +206,13 @@ public final class Motions {
 
     private record Spin(Vector3D axis, double angleAtZero, double rateAtZero, double angularAcceleration)
             implements Motion, Serializable {
+        Spin {
+            checkUnitAxis("axis", axis);
+            Arguments.finite("angleAtZero", angleAtZero);
+            Arguments.finite("rateAtZero", rateAtZero);
+            Arguments.finite("angularAcceleration", angularAcceleration);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -292,85 +223,11 @@ public final class Motions {
         @Override
         public void at(double t, double[] target, int offset) {
             checkTime(t);
-            checkTarget(target, offset);
             double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
             if (!Double.isFinite(angle)) {
                 throw new IllegalArgumentException("spin angle overflows at t = " + t + ": it must stay finite");
             }
-            writeTurn(axis.getX(), axis.getY(), axis.getZ(), angle, rateAtZero + angularAcceleration * t,
-                    angularAcceleration, target, offset);
-        }
-
-        // Bulk conversion F to B specialised for a spin: the placement stays in registers and the zero
-        // origin terms are skipped. Same arithmetic as the generic path (which adds the zero
-        // origin), so the same values; only the sign of a zero result may differ.
-        @Override
-        public void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
-                           double[] target, int targetOffset, int count) {
-            checkBulk(times, timeOffset, source, sourceOffset, target, targetOffset, count);
-            double nx = axis.getX();
-            double ny = axis.getY();
-            double nz = axis.getZ();
-            double alx = angularAcceleration * nx;
-            double aly = angularAcceleration * ny;
-            double alz = angularAcceleration * nz;
-            for (int k = 0; k < count; k++) {
-                double t = times[timeOffset + k];
-                checkTime(t);
-                double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
-                if (!Double.isFinite(angle)) {
-                    throw new IllegalArgumentException("spin angle overflows at t = " + t + ": it must stay finite");
-                }
-                double rate = rateAtZero + angularAcceleration * t;
-                double half = 0.5 * angle;
-                double sh = Math.sin(half);
-                double q0 = Math.cos(half);
-                double q1 = sh * nx;
-                double q2 = sh * ny;
-                double q3 = sh * nz;
-                double q0q0 = q0 * q0;
-                double r00 = 2.0 * (q0q0 + q1 * q1) - 1.0;
-                double r01 = 2.0 * (q1 * q2 + q0 * q3);
-                double r02 = 2.0 * (q1 * q3 - q0 * q2);
-                double r10 = 2.0 * (q1 * q2 - q0 * q3);
-                double r11 = 2.0 * (q0q0 + q2 * q2) - 1.0;
-                double r12 = 2.0 * (q2 * q3 + q0 * q1);
-                double r20 = 2.0 * (q1 * q3 + q0 * q2);
-                double r21 = 2.0 * (q2 * q3 - q0 * q1);
-                double r22 = 2.0 * (q0q0 + q3 * q3) - 1.0;
-                double wx = rate * nx;
-                double wy = rate * ny;
-                double wz = rate * nz;
-                int i = sourceOffset + 9 * k;
-                int j = targetOffset + 9 * k;
-                double x = source[i];
-                double y = source[i + 1];
-                double z = source[i + 2];
-                double vx = source[i + 3];
-                double vy = source[i + 4];
-                double vz = source[i + 5];
-                double ax = source[i + 6];
-                double ay = source[i + 7];
-                double az = source[i + 8];
-                double cx = wy * z - wz * y;
-                double cy = wz * x - wx * z;
-                double cz = wx * y - wy * x;
-                double vfx = vx + cx;
-                double vfy = vy + cy;
-                double vfz = vz + cz;
-                double afx = ax + (aly * z - alz * y) + 2 * (wy * vz - wz * vy) + (wy * cz - wz * cy);
-                double afy = ay + (alz * x - alx * z) + 2 * (wz * vx - wx * vz) + (wz * cx - wx * cz);
-                double afz = az + (alx * y - aly * x) + 2 * (wx * vy - wy * vx) + (wx * cy - wy * cx);
-                target[j] = r00 * x + r10 * y + r20 * z;
-                target[j + 1] = r01 * x + r11 * y + r21 * z;
-                target[j + 2] = r02 * x + r12 * y + r22 * z;
-                target[j + 3] = r00 * vfx + r10 * vfy + r20 * vfz;
-                target[j + 4] = r01 * vfx + r11 * vfy + r21 * vfz;
-                target[j + 5] = r02 * vfx + r12 * vfy + r22 * vfz;
-                target[j + 6] = r00 * afx + r10 * afy + r20 * afz;
-                target[j + 7] = r01 * afx + r11 * afy + r21 * afz;
-                target[j + 8] = r02 * afx + r12 * afy + r22 * afz;
-            }
+            turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration, target, offset);
         }
 
         @Override
@@ -383,6 +240,13 @@ public final class Motions {
 
     private record AngleOscillation(Vector3D axis, double amplitude, double angularFrequency, double phase)
             implements Motion, Serializable {
+        AngleOscillation {
+            checkUnitAxis("axis", axis);
+            Arguments.finite("amplitude", amplitude);
+            Arguments.finite("angularFrequency", angularFrequency);
+            Arguments.finite("phase", phase);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -396,11 +260,10 @@ public final class Motions {
         @Override
         public void at(double t, double[] target, int offset) {
             checkTime(t);
-            checkTarget(target, offset);
             double arg = angularFrequency * t + phase;
             double s = Math.sin(arg);
             double c = Math.cos(arg);
-            writeTurn(axis.getX(), axis.getY(), axis.getZ(), amplitude * s, amplitude * angularFrequency * c,
+            turn(axis, amplitude * s, amplitude * angularFrequency * c,
                     -amplitude * angularFrequency * angularFrequency * s, target, offset);
         }
 
@@ -414,6 +277,13 @@ public final class Motions {
 
     private record Heave(Vector3D direction, double amplitude, double angularFrequency, double phase)
             implements Motion, Serializable {
+        Heave {
+            checkUnitAxis("direction", direction);
+            Arguments.finite("amplitude", amplitude);
+            Arguments.finite("angularFrequency", angularFrequency);
+            Arguments.finite("phase", phase);
+        }
+
         @Override
         public Placement at(double t) {
             checkTime(t);
@@ -431,7 +301,6 @@ public final class Motions {
         @Override
         public void at(double t, double[] target, int offset) {
             checkTime(t);
-            checkTarget(target, offset);
             double arg = angularFrequency * t + phase;
             double p = amplitude * Math.sin(arg);
             double v = amplitude * angularFrequency * Math.cos(arg);
@@ -439,7 +308,8 @@ public final class Motions {
             double dx = direction.getX();
             double dy = direction.getY();
             double dz = direction.getZ();
-            writeTranslation(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz, target, offset);
+            Placement.ofQuaternion(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz,
+                    1, 0, 0, 0, 0, 0, 0, 0, 0, 0, target, offset);
         }
 
         @Override
@@ -457,6 +327,29 @@ public final class Motions {
 
         Polynomial(double[] c) {
             this.c = c;
+        }
+
+        /**
+         * Re-checks the coefficients read from a stream as {@link Motions#translation} does.
+         *
+         * @param in the stream
+         * @throws java.io.IOException if the stream fails or the coefficients are refused
+         * @throws ClassNotFoundException if a class of the stream is missing
+         */
+        private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+            in.defaultReadObject();
+            try {
+                Arguments.nonNull("coefficients", c);
+                if (c.length == 0 || c.length % 3 != 0) {
+                    throw new IllegalArgumentException("coefficients must hold whole vectors, got " + c.length
+                            + " values");
+                }
+                for (int k = 0; k < c.length; k++) {
+                    Arguments.finite("coefficients[" + k / 3 + "]", c[k]);
+                }
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(Polynomial.class, e);
+            }
         }
 
         @Override
@@ -485,8 +378,7 @@ public final class Motions {
         @Override
         public void at(double t, double[] target, int offset) {
             checkTime(t);
-            checkTarget(target, offset);
-            writeTranslation(0, 0, 0, 0, 0, 0, 0, 0, 0, target, offset);
+            Arguments.fromIndexSize("target", target, "offset", offset, Placement.COMPONENTS);
             int degree = c.length / 3 - 1;
             // same Horner recurrences as at(t), written straight into the target
             for (int axis = 0; axis < 3; axis++) {
@@ -506,6 +398,11 @@ public final class Motions {
                 target[offset + 3 + axis] = d1;
                 target[offset + 6 + axis] = d2;
             }
+            // the origin terms are in place: add the identity orientation and zero rates
+            double[] o = target;
+            int k = offset;
+            Placement.ofQuaternion(o[k], o[k + 1], o[k + 2], o[k + 3], o[k + 4], o[k + 5], o[k + 6], o[k + 7],
+                    o[k + 8], 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, target, offset);
         }
 
         @Override

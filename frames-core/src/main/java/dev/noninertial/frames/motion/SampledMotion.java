@@ -75,10 +75,17 @@ import dev.noninertial.frames.Placement;
  * rounding of them would be amplified by the inverse sample interval.
  *
  * <p>Immutable, thread-safe and serializable. A query finds its interval from the index a uniform
- * record would have (then galloping and bisection, O(log n) at worst), costs a few hundred
- * floating-point operations and allocates only its {@link Placement}.
+ * record would have (then galloping and bisection, O(log n) at worst) and costs a few hundred
+ * floating-point operations: one Hermite routine runs over the seven channels (three position
+ * axes, four quaternion components) with the stencil weights computed once per query.
+ * {@link #at(double)} allocates its {@link Placement} and one scratch array of 21 doubles;
+ * {@link #at(double, double[], int)} allocates nothing, so the bulk conversions of
+ * {@link Motion} allocate nothing per state.
  */
 public final class SampledMotion implements Motion, Serializable {
+
+    /** Doubles of the scratch of one query: 19 of the quaternion layout and 2 more while evaluating. */
+    private static final int SCRATCH = 21;
 
     /** Largest turn of the attitude between consecutive samples, in radians (90 degrees). */
     public static final double MAX_TURN_BETWEEN_SAMPLES = 0.5 * Math.PI;
@@ -357,6 +364,36 @@ public final class SampledMotion implements Motion, Serializable {
      */
     @Override
     public Placement at(double t) {
+        double[] q = new double[SCRATCH];
+        evaluate(segmentAt(t), t, q, 0);
+        return Placement.fromQuaternionArray(q, 0);
+    }
+
+    /**
+     * The placement at {@code t} in the matrix layout of {@link Placement#toArray(double[], int)},
+     * the same bits as {@link #at(double)}, allocating nothing.
+     *
+     * @param t time (s), as for {@link #at(double)}
+     * @param target destination array
+     * @param offset index where o's x component is written
+     * @throws NullPointerException if {@code target} is null
+     * @throws IllegalArgumentException if {@code t} is refused as by {@link #at(double)}, or the
+     *         range does not fit the array
+     */
+    @Override
+    public void at(double t, double[] target, int offset) {
+        Arguments.fromIndexSize("target", target, "offset", offset, Placement.COMPONENTS);
+        evaluate(segmentAt(t), t, target, offset);
+        double[] c = target;
+        int o = offset;
+        // the quaternion layout written by evaluate becomes the matrix layout, in place
+        Placement.ofQuaternion(c[o], c[o + 1], c[o + 2], c[o + 3], c[o + 4], c[o + 5], c[o + 6], c[o + 7], c[o + 8],
+                c[o + 9], c[o + 10], c[o + 11], c[o + 12], c[o + 13], c[o + 14], c[o + 15], c[o + 16], c[o + 17],
+                c[o + 18], target, offset);
+    }
+
+    /** The segment to evaluate t on, or the refusal of t. */
+    private int segmentAt(double t) {
         int n = times.length;
         if (!(t >= times[0] && t <= times[n - 1])) {
             throw new IllegalArgumentException("t must be within the recorded span [" + times[0] + ", "
@@ -366,7 +403,7 @@ public final class SampledMotion implements Motion, Serializable {
         if (i < 0) {
             throw gapRefusal(t, -i - 1);
         }
-        return evaluate(i, t);
+        return i;
     }
 
     /**
@@ -452,8 +489,7 @@ public final class SampledMotion implements Motion, Serializable {
 
     // ------------------------------------------------------------------ interpolation
 
-    @SuppressWarnings("checkstyle:MethodLength")
-    private Placement evaluate(int i, double t) {
+    private void evaluate(int i, double t, double[] out, int o) {
         int j = i + 1;
         double tI = times[i];
         double tJ = times[j];
@@ -524,122 +560,66 @@ public final class SampledMotion implements Motion, Serializable {
         double e3 = -2.0 * c3 * (xS - xi3);
         double e4 = -2.0 * c4 * (xS - xi4);
 
-        // ---- position: per axis the quintic Hermite on s in [0, 1] matching value, first and
-        // second derivative at both ends: y0 + a1 s + a2 s^2 + k3 s^3 + k4 s^4 + k5 s^5
-        double[] p = positions;
-        double[] v = velocities;
-        double f0x = v == null ? weigh(p, 3, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 0];
-        double f1x = v == null ? weigh(p, 3, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 0];
-        double g0x = v == null ? weigh(p, 3, 0, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double g1x = v == null ? weigh(p, 3, 0, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double hxa1 = h * f0x;
-        double hxa2 = 0.5 * hh * g0x;
-        double hxdv = p[3 * j + 0] - p[3 * i + 0] - hxa1 - hxa2;
-        double hxds = h * f1x - hxa1 - 2 * hxa2;
-        double hxdc = hh * g1x - 2 * hxa2;
-        double hxk3 = 10 * hxdv - 4 * hxds + 0.5 * hxdc;
-        double hxk4 = -15 * hxdv + 7 * hxds - hxdc;
-        double hxk5 = 6 * hxdv - 3 * hxds + 0.5 * hxdc;
-        double px = p[3 * i + 0] + s * (hxa1 + s * (hxa2 + s * (hxk3 + s * (hxk4 + s * hxk5))));
-        double vx = (hxa1 + s * (2 * hxa2 + s * (3 * hxk3 + s * (4 * hxk4 + s * 5 * hxk5)))) * invH;
-        double ax = (2 * hxa2 + s * (6 * hxk3 + s * (12 * hxk4 + s * 20 * hxk5))) * invHH;
-        double f0y = v == null ? weigh(p, 3, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 1];
-        double f1y = v == null ? weigh(p, 3, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 1];
-        double g0y = v == null ? weigh(p, 3, 1, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double g1y = v == null ? weigh(p, 3, 1, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double hya1 = h * f0y;
-        double hya2 = 0.5 * hh * g0y;
-        double hydv = p[3 * j + 1] - p[3 * i + 1] - hya1 - hya2;
-        double hyds = h * f1y - hya1 - 2 * hya2;
-        double hydc = hh * g1y - 2 * hya2;
-        double hyk3 = 10 * hydv - 4 * hyds + 0.5 * hydc;
-        double hyk4 = -15 * hydv + 7 * hyds - hydc;
-        double hyk5 = 6 * hydv - 3 * hyds + 0.5 * hydc;
-        double py = p[3 * i + 1] + s * (hya1 + s * (hya2 + s * (hyk3 + s * (hyk4 + s * hyk5))));
-        double vy = (hya1 + s * (2 * hya2 + s * (3 * hyk3 + s * (4 * hyk4 + s * 5 * hyk5)))) * invH;
-        double ay = (2 * hya2 + s * (6 * hyk3 + s * (12 * hyk4 + s * 20 * hyk5))) * invHH;
-        double f0z = v == null ? weigh(p, 3, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : v[3 * i + 2];
-        double f1z = v == null ? weigh(p, 3, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : v[3 * j + 2];
-        double g0z = v == null ? weigh(p, 3, 2, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4) : weigh(v, 3, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double g1z = v == null ? weigh(p, 3, 2, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4) : weigh(v, 3, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double hza1 = h * f0z;
-        double hza2 = 0.5 * hh * g0z;
-        double hzdv = p[3 * j + 2] - p[3 * i + 2] - hza1 - hza2;
-        double hzds = h * f1z - hza1 - 2 * hza2;
-        double hzdc = hh * g1z - 2 * hza2;
-        double hzk3 = 10 * hzdv - 4 * hzds + 0.5 * hzdc;
-        double hzk4 = -15 * hzdv + 7 * hzds - hzdc;
-        double hzk5 = 6 * hzdv - 3 * hzds + 0.5 * hzdc;
-        double pz = p[3 * i + 2] + s * (hza1 + s * (hza2 + s * (hzk3 + s * (hzk4 + s * hzk5))));
-        double vz = (hza1 + s * (2 * hza2 + s * (3 * hzk3 + s * (4 * hzk4 + s * 5 * hzk5)))) * invH;
-        double az = (2 * hza2 + s * (6 * hzk3 + s * (12 * hzk4 + s * 20 * hzk5))) * invHH;
-
-        // ---- attitude: quintic Hermite per quaternion component: p(t) as r, p' as d, p'' as dd
-        double[] q = attitudes;
-        boolean measured = rates != null;
-        double qf00 = measured ? quaternionRate(0, i) : weigh(q, 4, 0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double qf10 = measured ? quaternionRate(0, j) : weigh(q, 4, 0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double qg00 = measured ? weighRates(0, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 0, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
-        double qg10 = measured ? weighRates(0, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 0, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
-        double q0a1 = h * qf00;
-        double q0a2 = 0.5 * hh * qg00;
-        double q0dv = q[4 * j + 0] - q[4 * i + 0] - q0a1 - q0a2;
-        double q0ds = h * qf10 - q0a1 - 2 * q0a2;
-        double q0dc = hh * qg10 - 2 * q0a2;
-        double q0k3 = 10 * q0dv - 4 * q0ds + 0.5 * q0dc;
-        double q0k4 = -15 * q0dv + 7 * q0ds - q0dc;
-        double q0k5 = 6 * q0dv - 3 * q0ds + 0.5 * q0dc;
-        double r0 = q[4 * i + 0] + s * (q0a1 + s * (q0a2 + s * (q0k3 + s * (q0k4 + s * q0k5))));
-        double d0 = (q0a1 + s * (2 * q0a2 + s * (3 * q0k3 + s * (4 * q0k4 + s * 5 * q0k5)))) * invH;
-        double dd0 = (2 * q0a2 + s * (6 * q0k3 + s * (12 * q0k4 + s * 20 * q0k5))) * invHH;
-        double qf01 = measured ? quaternionRate(1, i) : weigh(q, 4, 1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double qf11 = measured ? quaternionRate(1, j) : weigh(q, 4, 1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double qg01 = measured ? weighRates(1, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 1, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
-        double qg11 = measured ? weighRates(1, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 1, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
-        double q1a1 = h * qf01;
-        double q1a2 = 0.5 * hh * qg01;
-        double q1dv = q[4 * j + 1] - q[4 * i + 1] - q1a1 - q1a2;
-        double q1ds = h * qf11 - q1a1 - 2 * q1a2;
-        double q1dc = hh * qg11 - 2 * q1a2;
-        double q1k3 = 10 * q1dv - 4 * q1ds + 0.5 * q1dc;
-        double q1k4 = -15 * q1dv + 7 * q1ds - q1dc;
-        double q1k5 = 6 * q1dv - 3 * q1ds + 0.5 * q1dc;
-        double r1 = q[4 * i + 1] + s * (q1a1 + s * (q1a2 + s * (q1k3 + s * (q1k4 + s * q1k5))));
-        double d1 = (q1a1 + s * (2 * q1a2 + s * (3 * q1k3 + s * (4 * q1k4 + s * 5 * q1k5)))) * invH;
-        double dd1 = (2 * q1a2 + s * (6 * q1k3 + s * (12 * q1k4 + s * 20 * q1k5))) * invHH;
-        double qf02 = measured ? quaternionRate(2, i) : weigh(q, 4, 2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double qf12 = measured ? quaternionRate(2, j) : weigh(q, 4, 2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double qg02 = measured ? weighRates(2, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 2, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
-        double qg12 = measured ? weighRates(2, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 2, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
-        double q2a1 = h * qf02;
-        double q2a2 = 0.5 * hh * qg02;
-        double q2dv = q[4 * j + 2] - q[4 * i + 2] - q2a1 - q2a2;
-        double q2ds = h * qf12 - q2a1 - 2 * q2a2;
-        double q2dc = hh * qg12 - 2 * q2a2;
-        double q2k3 = 10 * q2dv - 4 * q2ds + 0.5 * q2dc;
-        double q2k4 = -15 * q2dv + 7 * q2ds - q2dc;
-        double q2k5 = 6 * q2dv - 3 * q2ds + 0.5 * q2dc;
-        double r2 = q[4 * i + 2] + s * (q2a1 + s * (q2a2 + s * (q2k3 + s * (q2k4 + s * q2k5))));
-        double d2 = (q2a1 + s * (2 * q2a2 + s * (3 * q2k3 + s * (4 * q2k4 + s * 5 * q2k5)))) * invH;
-        double dd2 = (2 * q2a2 + s * (6 * q2k3 + s * (12 * q2k4 + s * 20 * q2k5))) * invHH;
-        double qf03 = measured ? quaternionRate(3, i) : weigh(q, 4, 3, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
-        double qf13 = measured ? quaternionRate(3, j) : weigh(q, 4, 3, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
-        double qg03 = measured ? weighRates(3, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4) : weigh(q, 4, 3, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
-        double qg13 = measured ? weighRates(3, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4) : weigh(q, 4, 3, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
-        double q3a1 = h * qf03;
-        double q3a2 = 0.5 * hh * qg03;
-        double q3dv = q[4 * j + 3] - q[4 * i + 3] - q3a1 - q3a2;
-        double q3ds = h * qf13 - q3a1 - 2 * q3a2;
-        double q3dc = hh * qg13 - 2 * q3a2;
-        double q3k3 = 10 * q3dv - 4 * q3ds + 0.5 * q3dc;
-        double q3k4 = -15 * q3dv + 7 * q3ds - q3dc;
-        double q3k5 = 6 * q3dv - 3 * q3ds + 0.5 * q3dc;
-        double r3 = q[4 * i + 3] + s * (q3a1 + s * (q3a2 + s * (q3k3 + s * (q3k4 + s * q3k5))));
-        double d3 = (q3a1 + s * (2 * q3a2 + s * (3 * q3k3 + s * (4 * q3k4 + s * 5 * q3k5)))) * invH;
-        double dd3 = (2 * q3a2 + s * (6 * q3k3 + s * (12 * q3k4 + s * 20 * q3k5))) * invHH;
+        // ---- one quintic Hermite per channel on s in [0, 1], matching value, first and second
+        // derivative at both ends: y0 + a1 s + a2 s^2 + k3 s^3 + k4 s^4 + k5 s^5. Channels 0 to 2
+        // are the position axes (value, rate and acceleration go to out[o + c], [o + 3 + c],
+        // [o + 6 + c]); channels 3 to 6 the quaternion components p, p', p'' (to out[o + 9 + k],
+        // [o + 13 + k], [o + 17 + k]). The stencil weights above serve every channel.
+        for (int ch = 0; ch < 7; ch++) {
+            boolean position = ch < 3;
+            int comp = position ? ch : ch - 3;
+            double[] y = position ? positions : attitudes;
+            int stride = position ? 3 : 4;
+            double f0;
+            double f1;
+            double g0;
+            double g1;
+            if (position ? velocities == null : rates == null) {
+                f0 = weigh(y, stride, comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+                f1 = weigh(y, stride, comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+                g0 = weigh(y, stride, comp, iK, i1, i2, i3, i4, bK, b1, b2, b3, b4);
+                g1 = weigh(y, stride, comp, jK, j1, j2, j3, j4, eK, e1, e2, e3, e4);
+            } else if (position) {
+                f0 = velocities[3 * i + comp];
+                f1 = velocities[3 * j + comp];
+                g0 = weigh(velocities, 3, comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+                g1 = weigh(velocities, 3, comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+            } else {
+                f0 = quaternionRate(comp, i);
+                f1 = quaternionRate(comp, j);
+                g0 = weighRates(comp, iK, i1, i2, i3, i4, aK, a1, a2, a3, a4);
+                g1 = weighRates(comp, jK, j1, j2, j3, j4, cK, c1, c2, c3, c4);
+            }
+            double y0 = y[stride * i + comp];
+            double ha1 = h * f0;
+            double ha2 = 0.5 * hh * g0;
+            double dv = y[stride * j + comp] - y0 - ha1 - ha2;
+            double ds = h * f1 - ha1 - 2 * ha2;
+            double dc = hh * g1 - 2 * ha2;
+            double k3 = 10 * dv - 4 * ds + 0.5 * dc;
+            double k4 = -15 * dv + 7 * ds - dc;
+            double k5 = 6 * dv - 3 * ds + 0.5 * dc;
+            int at = position ? o + ch : o + 9 + comp;
+            int step = position ? 3 : 4;
+            out[at] = y0 + s * (ha1 + s * (ha2 + s * (k3 + s * (k4 + s * k5))));
+            out[at + step] = (ha1 + s * (2 * ha2 + s * (3 * k3 + s * (4 * k4 + s * 5 * k5)))) * invH;
+            out[at + 2 * step] = (2 * ha2 + s * (6 * k3 + s * (12 * k4 + s * 20 * k5))) * invHH;
+        }
 
         // q = p / |p|; w = 2 vec(p* p') / |p|^2; al = 2 vec(p* p'') / |p|^2 - 2 (p . p') w / |p|^2,
         // with vec(a* b) = a0 b_v - b0 a_v - a_v x b_v
+        double r0 = out[o + 9];
+        double r1 = out[o + 10];
+        double r2 = out[o + 11];
+        double r3 = out[o + 12];
+        double d0 = out[o + 13];
+        double d1 = out[o + 14];
+        double d2 = out[o + 15];
+        double d3 = out[o + 16];
+        double dd0 = out[o + 17];
+        double dd1 = out[o + 18];
+        double dd2 = out[o + 19];
+        double dd3 = out[o + 20];
         double n2 = r0 * r0 + r1 * r1 + r2 * r2 + r3 * r3;
         double inv2 = 2.0 / n2;
         double invN = 1.0 / Math.sqrt(n2);
@@ -647,11 +627,16 @@ public final class SampledMotion implements Motion, Serializable {
         double wy = inv2 * (r0 * d2 - d0 * r2 - (r3 * d1 - r1 * d3));
         double wz = inv2 * (r0 * d3 - d0 * r3 - (r1 * d2 - r2 * d1));
         double dot = inv2 * (r0 * d0 + r1 * d1 + r2 * d2 + r3 * d3);
-        double alx = inv2 * (r0 * dd1 - dd0 * r1 - (r2 * dd3 - r3 * dd2)) - dot * wx;
-        double aly = inv2 * (r0 * dd2 - dd0 * r2 - (r3 * dd1 - r1 * dd3)) - dot * wy;
-        double alz = inv2 * (r0 * dd3 - dd0 * r3 - (r1 * dd2 - r2 * dd1)) - dot * wz;
-        return Placement.ofQuaternion(px, py, pz, vx, vy, vz, ax, ay, az,
-                r0 * invN, r1 * invN, r2 * invN, r3 * invN, wx, wy, wz, alx, aly, alz);
+        out[o + 9] = r0 * invN;
+        out[o + 10] = r1 * invN;
+        out[o + 11] = r2 * invN;
+        out[o + 12] = r3 * invN;
+        out[o + 13] = wx;
+        out[o + 14] = wy;
+        out[o + 15] = wz;
+        out[o + 16] = inv2 * (r0 * dd1 - dd0 * r1 - (r2 * dd3 - r3 * dd2)) - dot * wx;
+        out[o + 17] = inv2 * (r0 * dd2 - dd0 * r2 - (r3 * dd1 - r1 * dd3)) - dot * wy;
+        out[o + 18] = inv2 * (r0 * dd3 - dd0 * r3 - (r1 * dd2 - r2 * dd1)) - dot * wz;
     }
 
     /** Weight of the node at offset ua in the first derivative at offset 0 (Lagrange basis). */
@@ -700,7 +685,6 @@ public final class SampledMotion implements Motion, Serializable {
         return hi - lo + 1;
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private static double weigh(double[] data, int stride, int comp, int k0, int k1, int k2, int k3, int k4,
                                 double w0, double w1, double w2, double w3, double w4) {
         return w0 * data[stride * k0 + comp] + w1 * data[stride * k1 + comp] + w2 * data[stride * k2 + comp]
@@ -724,7 +708,6 @@ public final class SampledMotion implements Motion, Serializable {
         }
     }
 
-    @SuppressWarnings("checkstyle:ParameterNumber")
     private double weighRates(int comp, int k0, int k1, int k2, int k3, int k4,
                               double w0, double w1, double w2, double w3, double w4) {
         return w0 * quaternionRate(comp, k0) + w1 * quaternionRate(comp, k1) + w2 * quaternionRate(comp, k2)
@@ -797,7 +780,9 @@ public final class SampledMotion implements Motion, Serializable {
                         + ", " + q3 + ") must be finite and unit (|norm - 1| <= "
                         + Orientations.UNIT_QUATERNION_TOLERANCE + "), got norm " + norm);
             }
-            double sign = 1.0 / norm;
+            // a quaternion unit to rounding (within 2 ulps of 1) is kept as it is, so normalising is
+            // idempotent: a motion read back from a stream keeps the bits it was written with
+            double sign = Math.abs(norm - 1.0) <= 2 * Math.ulp(1.0) ? 1.0 : 1.0 / norm;
             if (i > 0) {
                 double dot = q0 * quaternions[4 * i - 4] + q1 * quaternions[4 * i - 3]
                         + q2 * quaternions[4 * i - 2] + q3 * quaternions[4 * i - 1];
@@ -836,36 +821,87 @@ public final class SampledMotion implements Motion, Serializable {
     }
 
     /**
-     * Re-checks a deserialized motion like any other source of samples.
+     * Replaces this motion in a stream by its proxy.
+     *
+     * @return the proxy holding the sample arrays
+     */
+    private Object writeReplace() {
+        return new Proxy(times, positions, attitudes, velocities, rates, maxGap);
+    }
+
+    /**
+     * Refuses a stream that bypasses the proxy.
      *
      * @param in the stream
-     * @throws IOException if the stream fails
-     * @throws ClassNotFoundException if a class of the stream is missing
+     * @throws InvalidObjectException always
      */
-    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
-        in.defaultReadObject();
-        // a stream is untrusted input: check it like any other source of samples
-        try {
-            if (times == null || positions == null || attitudes == null) {
-                throw new IllegalArgumentException("missing sample arrays");
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("a SampledMotion is read only through its serialization proxy");
+    }
+
+    /**
+     * The serialized form of a sampled motion: its sample arrays and max gap. Reading rebuilds the
+     * motion through the same checks as the factories, and the motion keeps the arrays those
+     * checks normalised and sign-aligned (a stream is untrusted input like any other source of
+     * samples).
+     */
+    private static final class Proxy implements Serializable {
+
+        private static final long serialVersionUID = 1L;
+
+        /** Sample times (s). */
+        private final double[] times;
+        /** Positions, x, y, z per sample (m). */
+        private final double[] positions;
+        /** Quaternions, q0..q3 per sample. */
+        private final double[] attitudes;
+        /** Measured origin velocities (m/s), or null. */
+        private final double[] velocities;
+        /** Measured angular rates (rad/s), or null. */
+        private final double[] rates;
+        /** Longest interpolated interval (s). */
+        private final double maxGap;
+
+        Proxy(double[] times, double[] positions, double[] attitudes, double[] velocities, double[] rates,
+              double maxGap) {
+            this.times = times;
+            this.positions = positions;
+            this.attitudes = attitudes;
+            this.velocities = velocities;
+            this.rates = rates;
+            this.maxGap = maxGap;
+        }
+
+        /**
+         * Rebuilds the motion with the checks of the factories.
+         *
+         * @return the motion, holding the arrays it validated
+         * @throws InvalidObjectException if a check refuses the samples
+         */
+        private Object readResolve() throws InvalidObjectException {
+            try {
+                Arguments.nonNull("times", times);
+                Arguments.nonNull("positions", positions);
+                Arguments.nonNull("quaternions", attitudes);
+                checkLength("positions", positions.length, 3, times.length);
+                checkLength("quaternions", attitudes.length, 4, times.length);
+                if (velocities != null) {
+                    checkLength("originVelocities", velocities.length, 3, times.length);
+                }
+                if (rates != null) {
+                    checkLength("angularVelocities", rates.length, 3, times.length);
+                }
+                if (!(maxGap > 0)) {
+                    throw new IllegalArgumentException("seconds (max gap) must be positive, got " + maxGap);
+                }
+                // copies, since a crafted stream may share one array between fields or objects; build
+                // checks, normalises and sign-aligns the copies and the motion keeps exactly those
+                return build(times.clone(), positions.clone(), attitudes.clone(),
+                        velocities == null ? null : velocities.clone(), rates == null ? null : rates.clone(),
+                        maxGap, SampledMotion::sampleLabel);
+            } catch (IllegalArgumentException | NullPointerException e) {
+                throw Arguments.refusedStream(SampledMotion.class, e);
             }
-            checkLength("positions", positions.length, 3, times.length);
-            checkLength("attitudes", attitudes.length, 4, times.length);
-            if (velocities != null) {
-                checkLength("velocities", velocities.length, 3, times.length);
-            }
-            if (rates != null) {
-                checkLength("rates", rates.length, 3, times.length);
-            }
-            if (!(maxGap > 0)) {
-                throw new IllegalArgumentException("max gap must be positive, got " + maxGap);
-            }
-            build(times.clone(), positions.clone(), attitudes.clone(), velocities, rates, maxGap,
-                    SampledMotion::sampleLabel);
-        } catch (IllegalArgumentException e) {
-            InvalidObjectException failure = new InvalidObjectException("corrupt sampled motion: " + e.getMessage());
-            failure.initCause(e);
-            throw failure;
         }
     }
 

@@ -69,6 +69,25 @@ public final class CovarianceCheck {
         return p;
     }
 
+    /** Checks an array read from a stream: present, {@code size} square, then as {@link #checkEntries}. */
+    static void checkStored(String name, double[][] p, int size) {
+        Arguments.nonNull(name, p);
+        if (p.length != size) {
+            throw new IllegalArgumentException(name + " must be " + size + "x" + size + ", got " + p.length + " rows");
+        }
+        for (int i = 0; i < size; i++) {
+            if (p[i] == null || p[i].length != size) {
+                throw new IllegalArgumentException(name + " row " + i + " must hold " + size + " values");
+            }
+            for (int j = 0; j < i; j++) {
+                if (p[i] == p[j]) {
+                    throw new IllegalArgumentException(name + " rows " + j + " and " + i + " must not be one array");
+                }
+            }
+        }
+        checkEntries(name, p);
+    }
+
     /** Checks a square array already known to have the right size. */
     static void checkEntries(String name, double[][] p) {
         int n = p.length;

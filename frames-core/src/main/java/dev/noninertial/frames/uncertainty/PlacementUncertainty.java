@@ -1,5 +1,7 @@
 package dev.noninertial.frames.uncertainty;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Arrays;
 
@@ -93,12 +95,21 @@ public final class PlacementUncertainty implements Serializable {
         return MatrixUtils.createRealMatrix(origin);
     }
 
-    double[][] attitudeRef() {
-        return attitude;
-    }
-
-    double[][] originRef() {
-        return origin;
+    /**
+     * Reads the fields and re-checks both covariances as {@link #of(RealMatrix, RealMatrix)} does.
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds a covariance the factory refuses
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            CovarianceCheck.checkStored("attitudeCovariance", attitude, 3);
+            CovarianceCheck.checkStored("originCovariance", origin, 3);
+        } catch (IllegalArgumentException | NullPointerException e) {
+            throw Arguments.refusedStream(PlacementUncertainty.class, e);
+        }
     }
 
     @Override

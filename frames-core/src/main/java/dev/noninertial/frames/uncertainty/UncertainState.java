@@ -1,5 +1,7 @@
 package dev.noninertial.frames.uncertainty;
 
+import java.io.IOException;
+import java.io.ObjectInputStream;
 import java.io.Serializable;
 import java.util.Arrays;
 import java.util.Optional;
@@ -194,8 +196,8 @@ public final class UncertainState implements Serializable {
                     : StateJacobians.attitudeFromBase(placement, state, layout);
             RealMatrix jd = toBase ? StateJacobians.originToBase(placement, layout)
                     : StateJacobians.originFromBase(placement, layout);
-            out = out.add(je.multiply(MatrixUtils.createRealMatrix(uncertainty.attitudeRef())).multiplyTransposed(je))
-                    .add(jd.multiply(MatrixUtils.createRealMatrix(uncertainty.originRef())).multiplyTransposed(jd));
+            out = out.add(je.multiply(uncertainty.attitudeCovariance()).multiplyTransposed(je))
+                    .add(jd.multiply(uncertainty.originCovariance()).multiplyTransposed(jd));
         }
         double[][] m = out.getData();
         for (int i = 0; i < m.length; i++) {
@@ -207,6 +209,26 @@ public final class UncertainState implements Serializable {
         }
         PointState converted = toBase ? placement.toBase(state) : placement.fromBase(state);
         return new UncertainState(FramedState.of(target, time(), converted), layout, m);
+    }
+
+    /**
+     * Reads the fields and re-checks them as {@link #of(FramedState, RealMatrix)} does: a mean, a
+     * layout matching the covariance's size, and a covariance that {@link CovarianceCheck} accepts
+     * (finite, non-negative variances, symmetric, positive semidefinite).
+     *
+     * @param in the stream
+     * @throws IOException if the stream fails or holds a state the factory refuses
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
+    private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("mean", mean);
+            Arguments.nonNull("layout", layout);
+            CovarianceCheck.checkStored("covariance", covariance, layout.size());
+        } catch (IllegalArgumentException | NullPointerException e) {
+            throw Arguments.refusedStream(UncertainState.class, e);
+        }
     }
 
     @Override
