@@ -13,3 +13,4 @@ import dev.noninertial.frames.uncertainty.*;
 import dev.noninertial.frames.dispersion.*;
 import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;
+import dev.noninertial.geodesy.air.*;

@@ -89,6 +89,9 @@ public final class BenchmarkReport {
         r.add(new Ratio("one integrator step, library / (b) same integrator, primitive equations", d + "stepLibrary", d + "stepPrimitives", "", Double.NaN));
         r.add(new Ratio("100 s trajectory, library / (a)", d + "trajectoryLibrary", d + "trajectoryObjects", "", Double.NaN));
         r.add(new Ratio("100 s trajectory, library / (b)", d + "trajectoryLibrary", d + "trajectoryPrimitives", "", Double.NaN));
+        String air = "AirBenchmark.";
+        r.add(new Ratio("air drag evaluation, library / (b) primitives", air + "dragLibrary", air + "dragPrimitives", "", Double.NaN));
+        r.add(new Ratio("one step with gravitation and drag, library / (b) same integrator, primitive drag", air + "stepLibrary", air + "stepPrimitives", "", Double.NaN));
         return r;
     }
 

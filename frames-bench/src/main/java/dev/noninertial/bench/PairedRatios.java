@@ -83,6 +83,12 @@ public final class PairedRatios {
         ops.put(k + "trajectoryLibrary", () -> sinkObject = d.trajectoryLibrary());
         ops.put(k + "trajectoryObjects", () -> sinkObject = d.trajectoryObjects());
         ops.put(k + "trajectoryPrimitives", () -> sinkObject = d.trajectoryPrimitives());
+        AirBenchmark air = new AirBenchmark();
+        k = "AirBenchmark.";
+        ops.put(k + "dragLibrary", () -> sinkObject = air.dragLibrary());
+        ops.put(k + "dragPrimitives", () -> sinkObject = air.dragPrimitives());
+        ops.put(k + "stepLibrary", () -> sinkObject = air.stepLibrary());
+        ops.put(k + "stepPrimitives", () -> sinkObject = air.stepPrimitives());
         return ops;
     }
 

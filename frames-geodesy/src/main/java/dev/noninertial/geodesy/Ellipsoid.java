@@ -587,28 +587,42 @@ public final class Ellipsoid implements Serializable {
     public Vector3D localToEarthFixed(LatLonHeight position, LocalAxes axes, Vector3D local) {
         Arguments.nonNull("position", position);
         Arguments.finite("local", local);
-        double[][] r = localRows(position.latitude(), position.longitude(), axes);
+        double[] r = new double[9];
+        localRows(position.latitude(), position.longitude(), axes, r);
         double x = local.getX();
         double y = local.getY();
         double z = local.getZ();
-        return new Vector3D(r[0][0] * x + r[1][0] * y + r[2][0] * z, r[0][1] * x + r[1][1] * y + r[2][1] * z,
-                r[0][2] * x + r[1][2] * y + r[2][2] * z);
+        return new Vector3D(r[0] * x + r[3] * y + r[6] * z, r[1] * x + r[4] * y + r[7] * z,
+                r[2] * x + r[5] * y + r[8] * z);
     }
 
     /** Rows of the ECEF-to-local matrix at (lat, lon). */
     static double[][] localRows(double lat, double lon, LocalAxes axes) {
+        double[] r = new double[9];
+        localRows(lat, lon, axes, r);
+        return new double[][] {{r[0], r[1], r[2]}, {r[3], r[4], r[5]}, {r[6], r[7], r[8]}};
+    }
+
+    /** Rows of the ECEF-to-local matrix at (lat, lon), row by row into out[0..8]. */
+    private static void localRows(double lat, double lon, LocalAxes axes, double[] out) {
         Arguments.nonNull("axes", axes);
         double sLat = Math.sin(lat);
         double cLat = Math.cos(lat);
         double sLon = Math.sin(lon);
         double cLon = Math.cos(lon);
-        double[] east = {-sLon, cLon, 0.0};
-        double[] north = {-sLat * cLon, -sLat * sLon, cLat};
-        double[] up = {cLat * cLon, cLat * sLon, sLat};
-        if (axes == LocalAxes.ENU) {
-            return new double[][] {east, north, up};
-        }
-        return new double[][] {north, east, {-up[0], -up[1], -up[2]}};
+        // east e, north n, up u: rows (e, n, u) for ENU, (n, e, -u) for NED
+        int e = axes == LocalAxes.ENU ? 0 : 3;
+        int n = axes == LocalAxes.ENU ? 3 : 0;
+        double up = axes == LocalAxes.ENU ? 1.0 : -1.0;
+        out[e] = -sLon;
+        out[e + 1] = cLon;
+        out[e + 2] = 0.0;
+        out[n] = -sLat * cLon;
+        out[n + 1] = -sLat * sLon;
+        out[n + 2] = cLat;
+        out[6] = up * (cLat * cLon);
+        out[7] = up * (cLat * sLon);
+        out[8] = up * sLat;
     }
 
     @Override

@@ -1,6 +1,8 @@
 package dev.noninertial.frames.dynamics;
 
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -22,11 +24,20 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
     private final ReferenceFrame frame;
     private final ReferenceFrame root;
     private final SpecificForce[] forces;
+    /** Inertial terms left out (budget runs only; empty for physical runs). */
+    private final Set<InertialTerm> omitted;
 
     MotionEquations(ReferenceFrame frame, List<SpecificForce> forces) {
+        this(frame, forces, EnumSet.allOf(InertialTerm.class));
+    }
+
+    MotionEquations(ReferenceFrame frame, List<SpecificForce> forces, Set<InertialTerm> included) {
         this.frame = frame;
         this.root = frame.root();
         this.forces = forces.toArray(new SpecificForce[0]);
+        EnumSet<InertialTerm> out = EnumSet.allOf(InertialTerm.class);
+        out.removeAll(included);
+        this.omitted = out;
     }
 
     ReferenceFrame frame() {
@@ -44,7 +55,8 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
         PointState s = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
         Vector3D f = realForce(t, y, s);
         // the four terms come from the kinematics kernel, the one formula of the library
-        FictitiousAccelerations k = placement(t, y).fictitious(s);
+        // left-out terms (budget runs only) are zero here
+        FictitiousAccelerations k = kept(placement(t, y).fictitious(s));
         Vector3D fr = k.frameAcceleration();
         Vector3D eu = k.euler();
         Vector3D co = k.coriolis();
@@ -53,6 +65,18 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
             f.getX() + fr.getX() + eu.getX() + co.getX() + ce.getX(),
             f.getY() + fr.getY() + eu.getY() + co.getY() + ce.getY(),
             f.getZ() + fr.getZ() + eu.getZ() + co.getZ() + ce.getZ()};
+    }
+
+    /** The four terms with the left-out ones set to zero. */
+    private FictitiousAccelerations kept(FictitiousAccelerations f) {
+        if (omitted.isEmpty()) {
+            return f;
+        }
+        return new FictitiousAccelerations(
+                omitted.contains(InertialTerm.FRAME_ACCELERATION) ? Vector3D.ZERO : f.frameAcceleration(),
+                omitted.contains(InertialTerm.EULER) ? Vector3D.ZERO : f.euler(),
+                omitted.contains(InertialTerm.CORIOLIS) ? Vector3D.ZERO : f.coriolis(),
+                omitted.contains(InertialTerm.CENTRIFUGAL) ? Vector3D.ZERO : f.centrifugal());
     }
 
     /** The point with its acceleration from the equations of motion, tagged with F and t. */
@@ -66,7 +90,7 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
         checkState(t, y);
         PointState bare = PointState.of(new Vector3D(y[0], y[1], y[2]), new Vector3D(y[3], y[4], y[5]));
         Vector3D f = realForce(t, y, bare);
-        FictitiousAccelerations fict = placement(t, y).fictitious(bare);
+        FictitiousAccelerations fict = kept(placement(t, y).fictitious(bare));
         PointState full = bare.withAcceleration(f.add(fict.total()));
         return new TrajectorySample(FramedState.of(frame, t, full), f, fict);
     }

@@ -1,7 +1,10 @@
 package dev.noninertial.frames.dynamics;
 
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.function.Supplier;
 
 import org.hipparchus.analysis.UnivariateFunction;
@@ -88,11 +91,15 @@ public final class TrajectorySolver {
     private final int maxEvaluations;
     private final IntegrationScheme scheme;
     private final Supplier<? extends ODEIntegrator> custom;
+    /** Inertial terms added (all four unless a budget leaves some out). */
+    private final Set<InertialTerm> included;
+
+    private static final Set<InertialTerm> ALL_TERMS = Collections.unmodifiableSet(EnumSet.allOf(InertialTerm.class));
 
     private TrajectorySolver(ReferenceFrame frame, List<SpecificForce> forces, List<TrajectoryEvent> events,
                              double positionTolerance, double velocityTolerance, double relativeTolerance,
                              double minStep, double maxStep, int maxEvaluations, IntegrationScheme scheme,
-                             Supplier<? extends ODEIntegrator> custom) {
+                             Supplier<? extends ODEIntegrator> custom, Set<InertialTerm> included) {
         this.frame = frame;
         this.forces = List.copyOf(forces);
         this.events = List.copyOf(events);
@@ -104,6 +111,7 @@ public final class TrajectorySolver {
         this.maxEvaluations = maxEvaluations;
         this.scheme = scheme;
         this.custom = custom;
+        this.included = included;
     }
 
     /**
@@ -118,7 +126,7 @@ public final class TrajectorySolver {
         Arguments.nonNull("frame", frame);
         return new TrajectorySolver(frame, List.of(), List.of(), DEFAULT_POSITION_TOLERANCE,
                 DEFAULT_VELOCITY_TOLERANCE, DEFAULT_RELATIVE_TOLERANCE, 0.0, Double.NaN, DEFAULT_MAX_EVALUATIONS,
-                IntegrationScheme.DORMAND_PRINCE_853, null);
+                IntegrationScheme.DORMAND_PRINCE_853, null, ALL_TERMS);
     }
 
     /**
@@ -134,7 +142,7 @@ public final class TrajectorySolver {
         List<SpecificForce> more = new ArrayList<>(forces);
         more.add(force);
         return new TrajectorySolver(frame, more, events, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom, included);
     }
 
     /**
@@ -149,7 +157,7 @@ public final class TrajectorySolver {
         List<TrajectoryEvent> more = new ArrayList<>(events);
         more.add(event);
         return new TrajectorySolver(frame, forces, more, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom, included);
     }
 
     /**
@@ -179,7 +187,7 @@ public final class TrajectorySolver {
         return new TrajectorySolver(frame, forces, events,
                 Arguments.positive("positionTolerance", positionTolerance),
                 Arguments.positive("velocityTolerance", velocityTolerance),
-                Arguments.positive("relative", relative), minStep, maxStep, maxEvaluations, scheme, custom);
+                Arguments.positive("relative", relative), minStep, maxStep, maxEvaluations, scheme, custom, included);
     }
 
     /**
@@ -196,7 +204,7 @@ public final class TrajectorySolver {
      */
     public TrajectorySolver withMaxStep(double seconds) {
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, Arguments.positive("seconds", seconds), maxEvaluations, scheme, custom);
+                relativeTolerance, minStep, Arguments.positive("seconds", seconds), maxEvaluations, scheme, custom, included);
     }
 
     /**
@@ -211,7 +219,7 @@ public final class TrajectorySolver {
      */
     public TrajectorySolver withMinStep(double seconds) {
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, Arguments.positive("seconds", seconds), maxStep, maxEvaluations, scheme, custom);
+                relativeTolerance, Arguments.positive("seconds", seconds), maxStep, maxEvaluations, scheme, custom, included);
     }
 
     /**
@@ -227,7 +235,7 @@ public final class TrajectorySolver {
             throw new IllegalArgumentException("count must be in [1, " + Integer.MAX_VALUE + "], got " + count);
         }
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, maxStep, count, scheme, custom);
+                relativeTolerance, minStep, maxStep, count, scheme, custom, included);
     }
 
     /**
@@ -240,7 +248,7 @@ public final class TrajectorySolver {
     public TrajectorySolver withScheme(IntegrationScheme newScheme) {
         Arguments.nonNull("newScheme", newScheme);
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, maxStep, maxEvaluations, newScheme, null);
+                relativeTolerance, minStep, maxStep, maxEvaluations, newScheme, null, included);
     }
 
     /**
@@ -256,7 +264,49 @@ public final class TrajectorySolver {
     public TrajectorySolver withIntegrator(Supplier<? extends ODEIntegrator> supplier) {
         Arguments.nonNull("supplier", supplier);
         return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
-                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, supplier);
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, supplier, included);
+    }
+
+    /**
+     * A copy that leaves one inertial term out of the equations of motion. The result is not a
+     * physical motion: use it only to see how much the term matters (for a whole budget see
+     * {@link TermBudget}). Trajectories of the copy report the left-out term as zero in their
+     * breakdown.
+     *
+     * @param term the term to leave out
+     * @return the copy
+     * @throws NullPointerException if {@code term} is null
+     */
+    public TrajectorySolver withoutTerm(InertialTerm term) {
+        Arguments.nonNull("term", term);
+        EnumSet<InertialTerm> fewer = EnumSet.noneOf(InertialTerm.class);
+        fewer.addAll(included);
+        fewer.remove(term);
+        return withTerms(fewer);
+    }
+
+    /**
+     * A copy that adds exactly the given inertial terms (all four is the physical case, the
+     * default).
+     *
+     * @param terms the terms to add; any subset, the empty set included
+     * @return the copy
+     * @throws NullPointerException if {@code terms} or an element is null
+     */
+    public TrajectorySolver withTerms(Set<InertialTerm> terms) {
+        Arguments.nonNull("terms", terms);
+        EnumSet<InertialTerm> copy = EnumSet.noneOf(InertialTerm.class);
+        for (InertialTerm t : terms) {
+            copy.add(Arguments.nonNull("terms element", t));
+        }
+        return new TrajectorySolver(frame, forces, events, positionTolerance, velocityTolerance,
+                relativeTolerance, minStep, maxStep, maxEvaluations, scheme, custom,
+                Collections.unmodifiableSet(copy));
+    }
+
+    /** @return the inertial terms this solver adds (all four unless some were left out) */
+    public Set<InertialTerm> terms() {
+        return included;
     }
 
     /** @return the integration frame */
@@ -314,7 +364,7 @@ public final class TrajectorySolver {
             throw new IllegalArgumentException("endTime must be after startTime = " + startTime + " s, got "
                     + endTime + " s");
         }
-        MotionEquations equations = new MotionEquations(frame, forces);
+        MotionEquations equations = new MotionEquations(frame, forces, included);
         ODEIntegrator integrator = createIntegrator(endTime - startTime);
         integrator.setMaxEvaluations(maxEvaluations);
         List<ODEStateInterpolator> steps = new ArrayList<>();
@@ -376,7 +426,8 @@ public final class TrajectorySolver {
                 + Formats.number(velocityTolerance) + " m/s, relative=" + Formats.number(relativeTolerance)
                 + ", minStep=" + Formats.number(minStep) + " s, maxStep="
                 + (Double.isNaN(maxStep) ? "span" : Formats.number(maxStep) + " s") + ", "
-                + (custom == null ? scheme : "custom integrator") + "}";
+                + (custom == null ? scheme : "custom integrator")
+                + (included.size() == InertialTerm.values().length ? "" : ", inertial terms " + included) + "}";
     }
 
     /** Per-run record of event occurrences. */

@@ -67,6 +67,8 @@ class Atmosphere1976Test {
         // double round-off: temperature and sound are a few operations (~1e-15); pressure chains up
         // to seven layers whose power laws multiply the relative error of their base by the exponent
         // g0 M0/(R* L), up to 34 here: 1e-12 relative leaves a margin of about 10 over that growth
+        System.out.printf("MEASURED Atmosphere1976 vs 40-digit Dfp at %d heights: worst relative T %.2e, p %.2e,"
+                + " rho %.2e, a %.2e%n", n, worstT, worstP, worstRho, worstA);
         double t = worstT;
         double p = worstP;
         double rho = worstRho;

@@ -71,6 +71,8 @@ class EarthAirCaseTest {
         double g = EARTH.model().normalGravity(site.withHeight(h / 2));
         double t = Math.sqrt(2 * h / g);
         double expected = 7.292115e-5 * g * t * t * t * Math.cos(site.latitude()) / 3.0;
+        System.out.printf("MEASURED rotation's effect on a 500 m drop at 45 deg (rotating minus non-rotating Earth):"
+                + " east %.6e m, textbook %.6e m, relative difference %.2e%n", east, expected, (east - expected) / expected);
         assertEquals(expected, east, 0.01 * expected);
     }
 
