@@ -53,7 +53,6 @@ class SparkDispersionTest {
         assertEquals(oneThread, spark);
         // other partitionings give the same table too
         assertEquals(oneThread, SparkDispersion.run(s, session, 7));
-        assertEquals(oneThread, SparkDispersion.run(s, session, 1));
         // and the statistics are the same bits
         assertEquals(Double.doubleToRawLongBits(oneThread.cep("east_m", "north_m")),
                 Double.doubleToRawLongBits(spark.cep("east_m", "north_m")));
