@@ -92,6 +92,9 @@ public final class BenchmarkReport {
         String air = "AirBenchmark.";
         r.add(new Ratio("air drag evaluation, library / (b) primitives", air + "dragLibrary", air + "dragPrimitives", "", Double.NaN));
         r.add(new Ratio("one step with gravitation and drag, library / (b) same integrator, primitive drag", air + "stepLibrary", air + "stepPrimitives", "", Double.NaN));
+        String n = "NavigationBenchmark.";
+        r.add(new Ratio("one strapdown step, library work array / (b) hand-written step", n + "stepLibrary", n + "stepPrimitives", "at most 1.5", 1.5));
+        r.add(new Ratio("one strapdown step, object API / (b) hand-written step", n + "stepObjects", n + "stepPrimitives", "", Double.NaN));
         return r;
     }
 

@@ -145,6 +145,20 @@ public final class HotPathGate {
             }
             SINK[0] = sum;
         }), STATES, -1));
+        NavigationScenario nav = new NavigationScenario();
+        double[][] navRun = nav.run(STATES);
+        double[] navWork = nav.navigator.newWork(nav.start);
+        double[] navTime = {0.0};
+        rows.add(new Allocation("LevelNavigator.advance(work, ...) x STATES", bytes(mx, () -> {
+            for (int k = 0; k < STATES; k++) {
+                navTime[0] += NavigationScenario.STEP;
+                nav.navigator.advance(navWork, navTime[0], nav.dv[0], nav.dv[1], nav.dv[2], nav.da[0], nav.da[1],
+                        nav.da[2]);
+            }
+        }), STATES, 0));
+        // a run allocates its work array and its result (state, position, history): about 0.6 kB
+        rows.add(new Allocation("LevelNavigator.run(start, STATES steps)", bytes(mx,
+                () -> nav.navigator.run(nav.start, navRun[0], navRun[1], navRun[2])), STATES, 1024));
         rows.add(new Allocation("control: one new double[STATES] per call (info: proves the counter)",
                 bytes(mx, () -> CONTROL[0] = new double[STATES]), STATES, -1));
         return rows;
@@ -183,6 +197,23 @@ public final class HotPathGate {
         rows.add(pair("bulk Motion.toBase spin-up, per state", rounds, true,
                 () -> in.spin.toBase(in.times, 0, in.source, 0, in.target, 0, STATES),
                 () -> PrimitiveBaseline.spinUpToBaseAll(in.times, in.source, in.target, STATES)));
+        NavigationScenario nav = new NavigationScenario();
+        double[] navWork = nav.navigator.newWork(nav.start);
+        double[] navBase = nav.baselineState();
+        double[] clock = {0.0, 0.0};
+        rows.add(pair("LevelNavigator.advance(work, ...), per step", rounds, true, () -> {
+            for (int k = 0; k < STATES; k++) {
+                clock[0] += NavigationScenario.STEP;
+                nav.navigator.advance(navWork, clock[0], nav.dv[0], nav.dv[1], nav.dv[2], nav.da[0], nav.da[1],
+                        nav.da[2]);
+            }
+        }, () -> {
+            for (int k = 0; k < STATES; k++) {
+                clock[1] += NavigationScenario.STEP;
+                NavigationBaseline.step(navBase, clock[1], nav.dv[0], nav.dv[1], nav.dv[2], nav.da[0], nav.da[1],
+                        nav.da[2]);
+            }
+        }));
         return rows;
     }
 

@@ -89,6 +89,12 @@ public final class PairedRatios {
         ops.put(k + "dragPrimitives", () -> sinkObject = air.dragPrimitives());
         ops.put(k + "stepLibrary", () -> sinkObject = air.stepLibrary());
         ops.put(k + "stepPrimitives", () -> sinkObject = air.stepPrimitives());
+        NavigationBenchmark nb = new NavigationBenchmark();
+        nb.reset();
+        k = "NavigationBenchmark.";
+        ops.put(k + "stepLibrary", () -> sinkObject = nb.stepLibrary());
+        ops.put(k + "stepPrimitives", () -> sinkObject = nb.stepPrimitives());
+        ops.put(k + "stepObjects", () -> sinkObject = nb.stepObjects());
         return ops;
     }
 

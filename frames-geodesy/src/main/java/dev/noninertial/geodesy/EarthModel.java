@@ -460,8 +460,7 @@ public final class EarthModel implements Serializable {
     /**
      * Transport rate written into an array without allocating: the primitive form of
      * {@link #transportRate(LatLonHeight, Vector3D, LocalAxes)} (same formula, same refusal at the
-     * poles), with the radii of curvature of {@link Ellipsoid#meridianRadius} and
-     * {@link Ellipsoid#primeVerticalRadius}. The velocity and the result are resolved in the same
+     * poles), with the radii of curvature of {@link Ellipsoid#radiiOfCurvature}. The velocity and the result are resolved in the same
      * stated axes; the vertical component does not enter.
      *
      * @param latitude geodetic latitude (rad), strictly inside (-pi/2, pi/2)
@@ -469,7 +468,7 @@ public final class EarthModel implements Serializable {
      * @param groundVelocity holds the velocity relative to the Earth (m/s), resolved in {@code axes}
      * @param velocityOffset index of its first component in {@code groundVelocity}
      * @param axes local axis order of the velocity and of the result
-     * @param out receives the three components (rad/s)
+     * @param out receives the three components (rad/s); must not overlap the velocity
      * @param offset index of the first component in {@code out}
      * @throws IllegalArgumentException at a pole or for non-finite values
      */
@@ -485,8 +484,9 @@ public final class EarthModel implements Serializable {
             throw new IllegalArgumentException("latitude must be strictly inside (-90, 90) deg for a "
                     + "north-aligned frame, got " + Math.toDegrees(latitude) + " deg");
         }
-        double rm = ellipsoid.meridianRadius(latitude) + height;
-        double rn = ellipsoid.primeVerticalRadius(latitude) + height;
+        ellipsoid.radiiOfCurvature(latitude, out, offset);
+        double rm = out[offset] + height;
+        double rn = out[offset + 1] + height;
         double aboutEast = -north / rm;
         double aboutNorth = east / rn;
         double aboutUp = east * Math.tan(latitude) / rn;

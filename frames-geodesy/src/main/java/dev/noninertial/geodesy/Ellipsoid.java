@@ -140,8 +140,35 @@ public final class Ellipsoid implements Serializable {
     public double meridianRadius(double latitude) {
         checkLatitude(latitude);
         double s = Math.sin(latitude);
-        double w2 = 1.0 - e2 * s * s;
+        return meridianRadiusOf(1.0 - e2 * s * s);
+    }
+
+    /** RM from {@code w2 = 1 - e^2 sin^2 lat}: the one copy of the formula. */
+    private double meridianRadiusOf(double w2) {
         return a * (1.0 - e2) / (w2 * Math.sqrt(w2));
+    }
+
+    /** RN from {@code w2 = 1 - e^2 sin^2 lat}: the one copy of the formula. */
+    private double primeVerticalRadiusOf(double w2) {
+        return a / Math.sqrt(w2);
+    }
+
+    /**
+     * Both radii of curvature at once, written into an array without allocating (one sine
+     * instead of two): {@code out[offset] = RM} ({@link #meridianRadius}),
+     * {@code out[offset + 1] = RN} ({@link #primeVerticalRadius}).
+     *
+     * @param latitude geodetic latitude (rad), in [-pi/2, pi/2]
+     * @param out receives RM and RN (m)
+     * @param offset index of RM in {@code out}
+     * @throws IllegalArgumentException if the latitude is out of range or NaN
+     */
+    public void radiiOfCurvature(double latitude, double[] out, int offset) {
+        checkLatitude(latitude);
+        double s = Math.sin(latitude);
+        double w2 = 1.0 - e2 * s * s;
+        out[offset] = meridianRadiusOf(w2);
+        out[offset + 1] = primeVerticalRadiusOf(w2);
     }
 
     /**
@@ -156,7 +183,7 @@ public final class Ellipsoid implements Serializable {
     public double primeVerticalRadius(double latitude) {
         checkLatitude(latitude);
         double s = Math.sin(latitude);
-        return a / Math.sqrt(1.0 - e2 * s * s);
+        return primeVerticalRadiusOf(1.0 - e2 * s * s);
     }
 
     static void checkLatitude(double latitude) {

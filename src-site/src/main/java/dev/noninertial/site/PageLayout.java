@@ -15,8 +15,8 @@ public final class PageLayout {
 
     /** Pages listed first, in this order; any other page follows in file-name order. */
     static final List<String> PREFERRED_ORDER = List.of("index.html", "conventions.html", "examples.html",
-            "earth.html", "dynamics.html", "sampled-motion.html", "uncertainty.html", "accuracy.html",
-            "benchmarks.html");
+            "earth.html", "dynamics.html", "sampled-motion.html", "uncertainty.html", "navigation.html",
+            "accuracy.html", "benchmarks.html");
 
     /** Project name shown in the header. */
     static final String PROJECT = "noninertial frames";

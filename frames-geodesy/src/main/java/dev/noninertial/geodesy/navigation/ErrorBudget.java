@@ -144,6 +144,40 @@ public final class ErrorBudget implements Serializable {
         return new ErrorBudget(end, ends[n - 1] - start.time(), n, Collections.unmodifiableList(effects));
     }
 
+    /**
+     * The budget of increments on a regular time grid in the interleaved layout of an inertial
+     * sensor's bulk output (6 doubles per step: delta-velocity x, y, z, then delta-angle x, y, z,
+     * body axes); step {@code k} ends at {@code start.time() + (k + 1) interval}.
+     *
+     * @param navigator the navigator
+     * @param start the state at the start of the first step
+     * @param interval step length (s), positive
+     * @param count number of steps, at least 1
+     * @param increments the increments, 6 per step from {@code offset}
+     * @param offset index of the first step's delta-velocity x
+     * @return the budget
+     * @throws IllegalArgumentException for a range that does not fit or a refused step
+     */
+    public static ErrorBudget of(LevelNavigator navigator, NavigationState start, double interval, int count,
+                                 double[] increments, int offset) {
+        Arguments.nonNull("start", start);
+        Arguments.positive("interval (s)", interval);
+        Arguments.nonNull("increments", increments);
+        if (count < 1 || offset < 0 || (long) offset + 6L * count > increments.length) {
+            throw new IllegalArgumentException("increments must hold 6 x count = " + 6L * count + " values from offset "
+                    + offset + " (count at least 1), got an array of " + increments.length);
+        }
+        double[] ends = new double[count];
+        double[] dv = new double[3 * count];
+        double[] da = new double[3 * count];
+        for (int k = 0; k < count; k++) {
+            ends[k] = start.time() + (k + 1) * interval;
+            System.arraycopy(increments, offset + 6 * k, dv, 3 * k, 3);
+            System.arraycopy(increments, offset + 6 * k + 3, da, 3 * k, 3);
+        }
+        return of(navigator, start, ends, dv, da);
+    }
+
     /** Angle between two unit quaternions (rad), 2 asin |vector part of a* (x) b|, safe for small angles. */
     private static double angle(double[] a, int i, double[] b, int j) {
         double a0 = a[i];

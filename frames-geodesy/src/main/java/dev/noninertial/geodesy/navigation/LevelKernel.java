@@ -14,7 +14,9 @@ import dev.noninertial.geodesy.LocalAxes;
  * <p>Work array layout ({@link #LENGTH} doubles): time; latitude, longitude, height; vN, vE, vD;
  * quaternion of the body in the NED level frame (scalar first, {@code v_n = q v_b q*});
  * history flag; previous delta-angle (3), previous delta-velocity at the centre (3), previous
- * step length, gravity of the last step (3, NED) (together the history); step count; scratch (9).
+ * step length, gravity, Earth rate and transport rate of the last step's midpoint (3 each, NED),
+ * radii of curvature RM, RN there, body rate estimated at the end of the last step (3) (together
+ * the history); scratch (3); step count.
  */
 final class LevelKernel implements Serializable {
 
@@ -33,13 +35,18 @@ final class LevelKernel implements Serializable {
     static final int PREV_VELOCITY = 15;
     static final int PREV_STEP = 18;
     static final int GRAVITY = 19;
-    static final int STEP = 22;
-    /** Values of the history carried by a {@link NavigationState}: from PREV_ANGLE to GRAVITY + 2. */
-    static final int HISTORY = 10;
-    static final int EARTH = 23;
-    static final int TRANSPORT = 26;
-    static final int VELOCITY = 29;
-    static final int LENGTH = 32;
+    static final int EARTH = 22;
+    static final int TRANSPORT = 25;
+    static final int RADII = 28;
+    static final int RATE = 30;
+    /**
+     * Values of the history carried by a {@link NavigationState}: from HIST (1 after a step with
+     * history, 2 after a first step) to RATE + 2.
+     */
+    static final int HISTORY = 22;
+    static final int VELOCITY = 33;
+    static final int STEP = 36;
+    static final int LENGTH = 37;
 
     /** Number of values written by a step into a terms array. */
     static final int TERMS = 30;
@@ -117,23 +124,45 @@ final class LevelKernel implements Serializable {
         double paz = w[PREV_ANGLE + 2];
 
         // ---- size effect: specific force carried from each accelerometer to the centre
-        // (Savage 1998 part 1, size effect): f_i(r_i) = e_i . (f + dw/dt x r_i + w x (w x r_i)),
-        // with the integral of dw/dt from a rate linear over the previous and this step and the
-        // integral of w x (w x r) from the mean rate of this step
+        // (Savage 1998 part 1, size effect): f_i(r_i) = e_i . (f + dw/dt x r_i + w x (w x r_i)).
+        // The integral of dw/dt over the step is w(t1) - w(t0) with w at the step ends estimated
+        // from a rate linear over the previous and this step, and w(t0) the estimate kept from the
+        // previous step, so that the corrections telescope over a run (no drift from the
+        // estimates); the integral of w x (w x r) from the mean rate of this step. A state
+        // without history has no w(t0): its first step takes no dw/dt term.
         double sex = 0.0;
         double sey = 0.0;
         double sez = 0.0;
         if (sizeEffect) {
+            double ex1 = dax / h;
+            double ey1 = day / h;
+            double ez1 = daz / h;
             double ddx = 0.0;
             double ddy = 0.0;
             double ddz = 0.0;
             if (hist) {
                 double ph = w[PREV_STEP];
-                double k = h / (0.5 * (ph + h));
-                ddx = (dax / h - pax / ph) * k;
-                ddy = (day / h - pay / ph) * k;
-                ddz = (daz / h - paz / ph) * k;
+                double sx = (dax / h - pax / ph) / (0.5 * (ph + h));
+                double sy = (day / h - pay / ph) / (0.5 * (ph + h));
+                double sz = (daz / h - paz / ph) / (0.5 * (ph + h));
+                ex1 += 0.5 * h * sx;
+                ey1 += 0.5 * h * sy;
+                ez1 += 0.5 * h * sz;
+                if (w[HIST] == 2.0) {
+                    // the previous step was the first of the run and took no dw/dt term: start
+                    // from the rate extrapolated back to its start, which covers both steps
+                    ddx = ex1 - (pax / ph - 0.5 * ph * sx);
+                    ddy = ey1 - (pay / ph - 0.5 * ph * sy);
+                    ddz = ez1 - (paz / ph - 0.5 * ph * sz);
+                } else {
+                    ddx = ex1 - w[RATE];
+                    ddy = ey1 - w[RATE + 1];
+                    ddz = ez1 - w[RATE + 2];
+                }
             }
+            w[RATE] = ex1;
+            w[RATE + 1] = ey1;
+            w[RATE + 2] = ez1;
             sex = -sizeTerm(0, 0, ddx, ddy, ddz, dax, day, daz, h);
             sey = -sizeTerm(3, 1, ddx, ddy, ddz, dax, day, daz, h);
             sez = -sizeTerm(6, 2, ddx, ddy, ddz, dax, day, daz, h);
@@ -219,16 +248,19 @@ final class LevelKernel implements Serializable {
         double ky = uy + q0 * ty + (q3 * tx - q1 * tz);
         double kz = uz + q0 * tz + (q1 * ty - q2 * tx);
 
-        // ---- predictor for the midpoint of the step: rates at the start, gravity of the last step
+        // ---- predictor for the midpoint of the step: gravity and rates of the last step's
+        // midpoint (at the start of a run: evaluated at the start); their O(h) lag moves the
+        // predicted midpoint velocity by O(h^2) only
         double lat0 = w[LAT];
         double h0 = w[H];
         double vn0 = w[VN];
         double ve0 = w[VE];
         double vd0 = w[VD];
-        model.earthRateIn(lat0, LocalAxes.NED, w, EARTH);
-        model.transportRate(lat0, h0, w, VN, LocalAxes.NED, w, TRANSPORT);
         if (!hist) {
+            model.earthRateIn(lat0, LocalAxes.NED, w, EARTH);
+            model.transportRate(lat0, h0, w, VN, LocalAxes.NED, w, TRANSPORT);
             gravity(lat0, h0, w);
+            ellipsoid.radiiOfCurvature(lat0, w, RADII);
         }
         double ax = w[GRAVITY];
         double ay = w[GRAVITY + 1];
@@ -241,11 +273,17 @@ final class LevelKernel implements Serializable {
         ax -= oy * vd0 - oz * ve0;
         ay -= oz * vn0 - ox * vd0;
         az -= ox * ve0 - oy * vn0;
-        double vnm = vn0 + 0.5 * (nx + ax * h);
-        double vem = ve0 + 0.5 * (ny + ay * h);
-        double vdm = vd0 + 0.5 * (nz + az * h);
-        double rm0 = ellipsoid.meridianRadius(lat0) + h0;
-        double latm = lat0 + 0.25 * h * (vn0 + vnm) / rm0;
+        // the level frame's turn to first order, from the same lagged rates, so that the
+        // predicted velocity of a body at rest stays zero (else a 1e-12 m/s^2 Coriolis bias)
+        double ke0 = earthRate ? 0.5 * h : 0.0;
+        double kr0 = transportRate ? 0.5 * h : 0.0;
+        double yx = ke0 * w[EARTH] + kr0 * w[TRANSPORT];
+        double yy = ke0 * w[EARTH + 1] + kr0 * w[TRANSPORT + 1];
+        double yz = ke0 * w[EARTH + 2] + kr0 * w[TRANSPORT + 2];
+        double vnm = vn0 + 0.5 * (nx - (yy * mz - yz * my) + ax * h);
+        double vem = ve0 + 0.5 * (ny - (yz * mx - yx * mz) + ay * h);
+        double vdm = vd0 + 0.5 * (nz - (yx * my - yy * mx) + az * h);
+        double latm = lat0 + 0.25 * h * (vn0 + vnm) / (w[RADII] + h0);
         double hm = h0 - 0.25 * h * (vd0 + vdm);
         if (!(Math.abs(latm) < maxLatitude)) {
             throw poleRefusal(step, t0, end, latm);
@@ -305,8 +343,9 @@ final class LevelKernel implements Serializable {
         double vd1 = vd0 + fz + (gz + ccz + ttz) * h;
 
         // ---- position from the mean velocity with the radii of curvature at the midpoint
-        double rm = ellipsoid.meridianRadius(latm) + hm;
-        double rn = ellipsoid.primeVerticalRadius(latm) + hm;
+        ellipsoid.radiiOfCurvature(latm, w, RADII);
+        double rm = w[RADII] + hm;
+        double rn = w[RADII + 1] + hm;
         double lat1 = lat0 + 0.5 * h * (vn0 + vn1) / rm;
         double lon1 = w[LON] + 0.5 * h * (ve0 + ve1) / (rn * Math.cos(latm));
         double h1 = h0 - 0.5 * h * (vd0 + vd1);
@@ -379,7 +418,7 @@ final class LevelKernel implements Serializable {
         w[VN] = vn1;
         w[VE] = ve1;
         w[VD] = vd1;
-        w[HIST] = 1.0;
+        w[HIST] = hist ? 1.0 : 2.0;
         w[PREV_ANGLE] = dax;
         w[PREV_ANGLE + 1] = day;
         w[PREV_ANGLE + 2] = daz;
@@ -390,29 +429,41 @@ final class LevelKernel implements Serializable {
         w[STEP] = step + 1;
     }
 
-    /** Component {@code axis} of dw x r + da x (da x r) / h for the accelerometer at offsets[base..]. */
+    /**
+     * Component {@code axis} of {@code Dw x r + da x (da x r) / h + (h / 12) Dw x (Dw x r)} for the
+     * accelerometer at offsets[base..]: the integrals of {@code dw/dt x r} and of
+     * {@code w x (w x r)} over the step for a rate linear in time ({@code Dw} its change, {@code da}
+     * its integral).
+     */
     private double sizeTerm(int base, int axis, double ddx, double ddy, double ddz, double dax, double day,
                             double daz, double h) {
         double ox = offsets[base];
         double oy = offsets[base + 1];
         double oz = offsets[base + 2];
-        // da x r
+        // da x r and Dw x r
         double ux = day * oz - daz * oy;
         double uy = daz * ox - dax * oz;
         double uz = dax * oy - day * ox;
+        double dx = ddy * oz - ddz * oy;
+        double dy = ddz * ox - ddx * oz;
+        double dz = ddx * oy - ddy * ox;
         double v;
+        double c;
         double d;
         if (axis == 0) {
             v = day * uz - daz * uy;
-            d = ddy * oz - ddz * oy;
+            c = ddy * dz - ddz * dy;
+            d = dx;
         } else if (axis == 1) {
             v = daz * ux - dax * uz;
-            d = ddz * ox - ddx * oz;
+            c = ddz * dx - ddx * dz;
+            d = dy;
         } else {
             v = dax * uy - day * ux;
-            d = ddx * oy - ddy * ox;
+            c = ddx * dy - ddy * dx;
+            d = dz;
         }
-        return d + v / h;
+        return d + v / h + h * c / 12.0;
     }
 
     /** Normal gravity (exact field, NED) into w[GRAVITY..], with the left-out dependences frozen. */

@@ -372,6 +372,48 @@ public final class LevelNavigator implements Serializable {
         return NavigationState.fromWork(w, axes);
     }
 
+    /**
+     * Navigates increments of a regular time grid in the interleaved layout of an inertial
+     * sensor's bulk output ({@code SensorIncrements.COMPONENTS} = 6 doubles per increment:
+     * delta-velocity x, y, z in m/s, then delta-angle x, y, z in rad, body axes), allocating
+     * nothing per step. Step {@code k} ends at {@code start.time() + (k + 1) interval}.
+     *
+     * @param start the state at the start of the first step, in this navigator's axes
+     * @param interval step length (s), positive
+     * @param count number of steps
+     * @param increments the increments, 6 per step from {@code offset}
+     * @param offset index of the first step's delta-velocity x
+     * @param trace if not null, receives {@link #TRACE_VALUES} values per step (see
+     *        {@link #run(NavigationState, double[], double[], double[], double[])})
+     * @return the state at the end of the last step
+     * @throws IllegalArgumentException for a range that does not fit the arrays or a refused step
+     */
+    public NavigationState run(NavigationState start, double interval, int count, double[] increments, int offset,
+                               double[] trace) {
+        Arguments.nonNull("start", start);
+        Arguments.positive("interval (s)", interval);
+        Arguments.nonNull("increments", increments);
+        if (count < 0 || offset < 0 || (long) offset + 6L * count > increments.length) {
+            throw new IllegalArgumentException("increments must hold 6 x count = " + 6L * count + " values from offset "
+                    + offset + ", got an array of " + increments.length);
+        }
+        if (trace != null && trace.length < (long) TRACE_VALUES * count) {
+            throw new IllegalArgumentException("trace must have at least " + (long) TRACE_VALUES * count
+                    + " values, got " + trace.length);
+        }
+        double[] w = newWork(start);
+        double t0 = start.time();
+        for (int k = 0; k < count; k++) {
+            int i = offset + 6 * k;
+            kernel.step(w, t0 + (k + 1) * interval, increments[i], increments[i + 1], increments[i + 2],
+                    increments[i + 3], increments[i + 4], increments[i + 5], null, 0);
+            if (trace != null) {
+                record(w, trace, TRACE_VALUES * k);
+            }
+        }
+        return NavigationState.fromWork(w, axes);
+    }
+
     /** Writes one trace record from a work array. */
     void record(double[] w, double[] trace, int o) {
         trace[o] = w[LevelKernel.T];

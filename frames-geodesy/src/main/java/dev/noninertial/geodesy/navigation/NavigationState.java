@@ -57,7 +57,7 @@ public final class NavigationState implements Serializable {
     private final double q3;
     /** Steps taken since the state made by {@link #of}. */
     private final long step;
-    /** Previous step's increments: deltaAngle (3, rad), deltaVelocity (3, m/s), step length (s), gravity (3, NED m/s^2); null if none. */
+    /** Memory of the previous step (increments, step length, midpoint gravity, rates and radii, end rate; layout of LevelKernel); null if none. */
     private final double[] history;
 
     NavigationState(double time, LatLonHeight position, LocalAxes axes, double v1, double v2, double v3,
@@ -209,8 +209,7 @@ public final class NavigationState implements Serializable {
         if (history == null) {
             w[LevelKernel.HIST] = 0.0;
         } else {
-            w[LevelKernel.HIST] = 1.0;
-            System.arraycopy(history, 0, w, LevelKernel.PREV_ANGLE, LevelKernel.HISTORY);
+            System.arraycopy(history, 0, w, LevelKernel.HIST, LevelKernel.HISTORY);
         }
     }
 
@@ -220,7 +219,7 @@ public final class NavigationState implements Serializable {
         double[] history = null;
         if (w[LevelKernel.HIST] != 0.0) {
             history = new double[LevelKernel.HISTORY];
-            System.arraycopy(w, LevelKernel.PREV_ANGLE, history, 0, LevelKernel.HISTORY);
+            System.arraycopy(w, LevelKernel.HIST, history, 0, LevelKernel.HISTORY);
         }
         long step = (long) w[LevelKernel.STEP];
         double a = w[LevelKernel.Q0];

@@ -35,8 +35,17 @@ final class FrameIncrements {
 
     /** Increments of {@code n} equal steps of {@code h} from t0. */
     static FrameIncrements of(EarthFrames earth, ReferenceFrame body, double t0, double h, int n) {
+        return of(earth, body, body, t0, h, n);
+    }
+
+    /**
+     * As above, with gravitation taken at the origin of {@code gravityAt} (a frame with the same
+     * axes as {@code body}), to leave out the gravity gradient across a lever arm.
+     */
+    static FrameIncrements of(EarthFrames earth, ReferenceFrame body, ReferenceFrame gravityAt, double t0, double h,
+                              int n) {
         FrameIncrements r = new FrameIncrements(n);
-        SpecificForce gravitation = earth.gravitationIn(body);
+        SpecificForce gravitation = earth.gravitationIn(gravityAt);
         PointState origin = PointState.stationary(Vector3D.ZERO);
         ReferenceFrame inertial = earth.inertial();
         for (int k = 0; k < n; k++) {
