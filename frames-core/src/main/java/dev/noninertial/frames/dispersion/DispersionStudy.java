@@ -43,6 +43,9 @@ public final class DispersionStudy implements Serializable {
     /** Largest number of cases of one study (the outcome table is held in memory). */
     public static final int MAX_CASES = 100_000_000;
 
+    /** Largest number of values (cases times columns) of a table held in one Java array. */
+    public static final int MAX_TABLE_VALUES = Integer.MAX_VALUE - 8;
+
     /** Allowed input and outcome names: letters, digits, underscore, dot, minus (CSV-safe). */
     private static final Pattern NAME = Pattern.compile("[A-Za-z][A-Za-z0-9_.\\-]*");
 
@@ -294,7 +297,8 @@ public final class DispersionStudy implements Serializable {
      * @param threads number of worker threads, in [1, 1024]
      * @return the result table and statistics
      * @throws IllegalArgumentException if {@code threads} is out of range
-     * @throws IllegalStateException if a case fails (the first failure, naming the case)
+     * @throws IllegalStateException if a case fails (the first failure, naming the case), or the
+     *         table would exceed {@link #MAX_TABLE_VALUES} values
      */
     public DispersionResult run(int threads) {
         if (threads < 1 || threads > 1024) {
@@ -304,7 +308,13 @@ public final class DispersionStudy implements Serializable {
             throw new IllegalStateException("the study has no input: add one with withInput(name, distribution)");
         }
         int width = inputNames.size() + outcomeNames.size();
-        double[] table = new double[Math.multiplyExact(cases, width)];
+        long size = (long) cases * width;
+        if (size > MAX_TABLE_VALUES) {
+            throw new IllegalStateException("cases x (inputs + outcomes) = " + cases + " x " + width + " = " + size
+                    + " values must fit one table of at most " + MAX_TABLE_VALUES
+                    + " values: run fewer cases here, or keep the table on a cluster");
+        }
+        double[] table = new double[(int) size];
         AtomicInteger nextBlock = new AtomicInteger();
         AtomicReference<RuntimeException> failure = new AtomicReference<>();
         Runnable worker = () -> {
