@@ -24,7 +24,7 @@ public final class Orientations {
     /**
      * Largest allowed {@code ||q| - 1|} for a quaternion said to be unit: the one tolerance of the
      * library for unit quaternions, used by every factory that takes one (here,
-     * {@code SampledMotion}); an accepted quaternion is normalised before use.
+     * {@code SampledMotion}, {@code Placement}); an accepted quaternion is normalised before use.
      * It admits quaternions written with 7 significant digits, as in logs.
      */
     public static final double UNIT_QUATERNION_TOLERANCE = 1e-6;

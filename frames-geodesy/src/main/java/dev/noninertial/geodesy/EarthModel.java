@@ -187,10 +187,10 @@ public final class EarthModel implements Serializable {
      * Magnitude of normal gravity at a geodetic position, by Somigliana's formula corrected for
      * height with the second-order series of TR8350.2 Eq. 4-3:
      * {@code g_h = g [1 - 2 (1 + f + m - 2 f sin^2 lat) h / a + 3 h^2 / a^2]}. The series is what
-     * gravimetry and navigation use near the surface; its truncation error grows with height.
-     * Measured against the exact field ({@link #normalGravityVector(Vector3D)}), worst over
-     * latitude (2026-12-02): 1.0e-7 m/s^2 at 1 km,
-     * 7.0e-7 m/s^2 at 10 km, 1.6e-4 m/s^2 at 100 km. Heights are limited to [-20 km, 100 km].
+     * gravimetry and navigation use near the surface; its truncation error grows with height
+     * (measured against the exact field {@link #normalGravityVector(Vector3D)} on the site's
+     * <a href="../../../../accuracy.html#geodesy">accuracy page</a>, section Normal gravity).
+     * Heights are limited to [-20 km, 100 km].
      *
      * @param position geodetic position (rad, m)
      * @return magnitude of normal gravity (m/s^2)
