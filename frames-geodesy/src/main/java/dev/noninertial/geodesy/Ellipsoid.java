@@ -40,6 +40,9 @@ public final class Ellipsoid implements Serializable {
     /** Largest flattening for which {@link #toGeodetic} tries its fast path (Earth: 0.00335). */
     private static final double FAST_MAX_FLATTENING = 0.01;
 
+    /** Distance (m) beyond which {@link #toGeodetic(Vector3D)} works on a position scaled by a power of two. */
+    private static final double FAR_DISTANCE = 0x1p330;
+
     /** WGS84: a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., Table 3.1). */
     public static final Ellipsoid WGS84 = ofInverseFlattening(6378137.0, 298.257223563);
 
@@ -98,32 +101,56 @@ public final class Ellipsoid implements Serializable {
         return of(semiMajorAxis, 1.0 / inverseFlattening);
     }
 
-    /** @return semi-major (equatorial) axis a (m) */
+    /**
+     * Returns semi-major (equatorial) axis a (m).
+     *
+     * @return semi-major (equatorial) axis a (m)
+     */
     public double semiMajorAxis() {
         return a;
     }
 
-    /** @return semi-minor (polar) axis b = a (1 - f) (m) */
+    /**
+     * Returns semi-minor (polar) axis b = a (1 - f) (m).
+     *
+     * @return semi-minor (polar) axis b = a (1 - f) (m)
+     */
     public double semiMinorAxis() {
         return b;
     }
 
-    /** @return flattening f = (a - b) / a */
+    /**
+     * Returns flattening f = (a - b) / a.
+     *
+     * @return flattening f = (a - b) / a
+     */
     public double flattening() {
         return f;
     }
 
-    /** @return first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2 */
+    /**
+     * Returns first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2.
+     *
+     * @return first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2
+     */
     public double eccentricitySquared() {
         return e2;
     }
 
-    /** @return second eccentricity squared e'^2 = (a^2 - b^2) / b^2 */
+    /**
+     * Returns second eccentricity squared e'^2 = (a^2 - b^2) / b^2.
+     *
+     * @return second eccentricity squared e'^2 = (a^2 - b^2) / b^2
+     */
     public double secondEccentricitySquared() {
         return ep2;
     }
 
-    /** @return linear eccentricity E = sqrt(a^2 - b^2) (m) */
+    /**
+     * Returns linear eccentricity E = sqrt(a^2 - b^2) (m).
+     *
+     * @return linear eccentricity E = sqrt(a^2 - b^2) (m)
+     */
     public double linearEccentricity() {
         return Math.sqrt(linear2);
     }
@@ -165,6 +192,7 @@ public final class Ellipsoid implements Serializable {
      */
     public void radiiOfCurvature(double latitude, double[] out, int offset) {
         checkLatitude(latitude);
+        Arguments.fromIndexSize("out", out, "offset", offset, 2);
         double s = Math.sin(latitude);
         double w2 = 1.0 - e2 * s * s;
         out[offset] = meridianRadiusOf(w2);
@@ -221,6 +249,10 @@ public final class Ellipsoid implements Serializable {
      * @param offset index of x in {@code out}
      */
     public void toCartesian(double latitude, double longitude, double height, double[] out, int offset) {
+        checkLatitude(latitude);
+        Arguments.finite("longitude", longitude);
+        Arguments.finite("height", height);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double sLat = Math.sin(latitude);
         double cLat = Math.cos(latitude);
         double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);
@@ -263,6 +295,12 @@ public final class Ellipsoid implements Serializable {
      * 50-digit Hipparchus Dfp reference) and <a href="../../../../benchmarks.html">benchmark
      * page</a>. Allocates only the result.
      *
+     * <p>Domain: every finite position whose height is a finite double (refused otherwise:
+     * components near the largest double, with a distance above it). Beyond 2^330 m (about 2.2e99 m) from the centre the
+     * position is first scaled by a power of two, exactly, since the squares would overflow
+     * from about 1e150 m; there latitude and longitude have converged to their limits and the
+     * height scales with the distance, to rounding.
+     *
      * @param position Earth-fixed Cartesian position (m), ECEF axes, finite
      * @return geodetic position: latitude in [-pi/2, pi/2], longitude in [-pi, pi] (rad), height (m)
      * @throws IllegalArgumentException if a component is NaN or infinite
@@ -272,6 +310,22 @@ public final class Ellipsoid implements Serializable {
         double x = position.getX();
         double y = position.getY();
         double zs = position.getZ();
+        double big = Math.max(Math.abs(x), Math.max(Math.abs(y), Math.abs(zs)));
+        if (big > FAR_DISTANCE) {
+            // far away the squares below would overflow (from about 1e150 m); scale by a power of
+            // two (exact) to about 1e99 m, where latitude and longitude have reached their limits
+            // (they move by about e^2 a / r, below 1e-94 rad) and the height is the distance less
+            // a few semi-axes, so h(X) = s h(X / s) to rounding (the neglected part is (s - 1) a,
+            // below 1e-92 of h)
+            double scale = Math.scalb(1.0, Math.getExponent(big) - Math.getExponent(FAR_DISTANCE) + 1);
+            LatLonHeight near = toGeodetic(new Vector3D(x / scale, y / scale, zs / scale));
+            double h = near.height() * scale;
+            if (Double.isInfinite(h)) {
+                throw new IllegalArgumentException("position " + position + " m is farther than the largest double"
+                        + " (" + Double.MAX_VALUE + " m) from the ellipsoid: its height cannot be represented");
+            }
+            return new LatLonHeight(near.latitude(), near.longitude(), h);
+        }
         double z = Math.abs(zs);
         double pp = x * x + y * y;
         double rr = pp + z * z;

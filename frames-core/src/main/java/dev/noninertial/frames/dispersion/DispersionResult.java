@@ -95,17 +95,29 @@ public final class DispersionResult implements Serializable {
         return column < inputs.size() ? inputs.get(column) : outcomes.get(column - inputs.size());
     }
 
-    /** @return the number of cases (rows) */
+    /**
+     * Returns the number of cases (rows).
+     *
+     * @return the number of cases (rows)
+     */
     public int caseCount() {
         return rows;
     }
 
-    /** @return the input names in declaration order (unmodifiable) */
+    /**
+     * Returns the input names in declaration order (unmodifiable).
+     *
+     * @return the input names in declaration order (unmodifiable)
+     */
     public List<String> inputNames() {
         return inputNames;
     }
 
-    /** @return the outcome names in order (unmodifiable) */
+    /**
+     * Returns the outcome names in order (unmodifiable).
+     *
+     * @return the outcome names in order (unmodifiable)
+     */
     public List<String> outcomeNames() {
         return outcomeNames;
     }

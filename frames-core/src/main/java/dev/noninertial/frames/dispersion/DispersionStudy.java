@@ -167,32 +167,56 @@ public final class DispersionStudy implements Serializable {
         return new DispersionStudy(newModel, outcomeNames, inputNames, distributions, cases, seed);
     }
 
-    /** @return the model */
+    /**
+     * Returns the model.
+     *
+     * @return the model
+     */
     public DispersionModel model() {
         return model;
     }
 
-    /** @return the outcome names in order (unmodifiable) */
+    /**
+     * Returns the outcome names in order (unmodifiable).
+     *
+     * @return the outcome names in order (unmodifiable)
+     */
     public List<String> outcomeNames() {
         return outcomeNames;
     }
 
-    /** @return the input names in declaration (drawing) order (unmodifiable) */
+    /**
+     * Returns the input names in declaration (drawing) order (unmodifiable).
+     *
+     * @return the input names in declaration (drawing) order (unmodifiable)
+     */
     public List<String> inputNames() {
         return inputNames;
     }
 
-    /** @return the input distributions in declaration order (unmodifiable) */
+    /**
+     * Returns the input distributions in declaration order (unmodifiable).
+     *
+     * @return the input distributions in declaration order (unmodifiable)
+     */
     public List<InputDistribution> distributions() {
         return distributions;
     }
 
-    /** @return the number of cases */
+    /**
+     * Returns the number of cases.
+     *
+     * @return the number of cases
+     */
     public int cases() {
         return cases;
     }
 
-    /** @return the master seed */
+    /**
+     * Returns the master seed.
+     *
+     * @return the master seed
+     */
     public long seed() {
         return seed;
     }

@@ -52,8 +52,8 @@ final class MotionLogFile {
         ANGLE(new String[] {"rad", "deg"}, new double[] {1.0, Units.degrees(1.0)}),
         RATE(new String[] {"rad/s", "deg/s"}, new double[] {1.0, Units.degreesPerSecond(1.0)});
 
-        final String[] units;
-        final double[] factors;
+        private final String[] units;
+        private final double[] factors;
 
         Kind(String[] units, double[] factors) {
             this.units = units;

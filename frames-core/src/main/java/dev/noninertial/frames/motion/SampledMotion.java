@@ -59,7 +59,7 @@ import dev.noninertial.frames.Placement;
  *
  * <h2>Refusals</h2>
  * Construction refuses, naming the sample: fewer than two samples, times that are not finite or
- * do not increase strictly, non-finite values, quaternions whose norm differs from 1 by more than
+ * do not increase strictly or are closer than {@link #MIN_SAMPLE_INTERVAL}, non-finite values, quaternions whose norm differs from 1 by more than
  * {@link Orientations#UNIT_QUATERNION_TOLERANCE} (those within are normalised), and attitudes that
  * turn by more than {@link #MAX_TURN_BETWEEN_SAMPLES} radians between consecutive samples (such a
  * record is under-sampled: the sense of the turn is ambiguous). Queries before the first or after
@@ -89,6 +89,12 @@ public final class SampledMotion implements Motion, Serializable {
 
     /** Largest turn of the attitude between consecutive samples, in radians (90 degrees). */
     public static final double MAX_TURN_BETWEEN_SAMPLES = 0.5 * Math.PI;
+
+    /**
+     * Smallest interval between consecutive sample times, in seconds: the interpolation divides by
+     * the cube of the interval, which must stay a normal number (1e-300).
+     */
+    public static final double MIN_SAMPLE_INTERVAL = 1e-100;
 
     private static final long serialVersionUID = 1L;
 
@@ -138,6 +144,7 @@ public final class SampledMotion implements Motion, Serializable {
         Arguments.nonNull("times", times);
         Arguments.nonNull("positions", positions);
         Arguments.nonNull("quaternions", quaternions);
+        checkSampleCount(times);
         checkLength("positions", positions.length, 3, times.length);
         checkLength("quaternions", quaternions.length, 4, times.length);
         return build(times.clone(), positions.clone(), quaternions.clone(), null, null,
@@ -161,6 +168,7 @@ public final class SampledMotion implements Motion, Serializable {
         Arguments.nonNull("times", times);
         Arguments.nonNull("positions", positions);
         Arguments.nonNull("yawPitchRoll", yawPitchRoll);
+        checkSampleCount(times);
         checkLength("positions", positions.length, 3, times.length);
         checkLength("yawPitchRoll", yawPitchRoll.length, 3, times.length);
         double[] q = new double[4 * times.length];
@@ -279,17 +287,29 @@ public final class SampledMotion implements Motion, Serializable {
 
     // ------------------------------------------------------------------ accessors
 
-    /** @return number of samples */
+    /**
+     * Returns number of samples.
+     *
+     * @return number of samples
+     */
     public int sampleCount() {
         return times.length;
     }
 
-    /** @return time of the first sample (s) */
+    /**
+     * Returns time of the first sample (s).
+     *
+     * @return time of the first sample (s)
+     */
     public double startTime() {
         return times[0];
     }
 
-    /** @return time of the last sample (s) */
+    /**
+     * Returns time of the last sample (s).
+     *
+     * @return time of the last sample (s)
+     */
     public double endTime() {
         return times[times.length - 1];
     }
@@ -308,17 +328,29 @@ public final class SampledMotion implements Motion, Serializable {
         return times[index];
     }
 
-    /** @return longest interval between samples that is still interpolated (s), infinite if no limit */
+    /**
+     * Returns longest interval between samples that is still interpolated (s), infinite if no limit.
+     *
+     * @return longest interval between samples that is still interpolated (s), infinite if no limit
+     */
     public double maxGap() {
         return maxGap;
     }
 
-    /** @return whether measured origin velocities are used */
+    /**
+     * Returns whether measured origin velocities are used.
+     *
+     * @return whether measured origin velocities are used
+     */
     public boolean hasMeasuredVelocities() {
         return velocities != null;
     }
 
-    /** @return whether measured angular rates are used */
+    /**
+     * Returns whether measured angular rates are used.
+     *
+     * @return whether measured angular rates are used
+     */
     public boolean hasMeasuredAngularVelocities() {
         return rates != null;
     }
@@ -337,7 +369,11 @@ public final class SampledMotion implements Motion, Serializable {
         return usableSegment(t, segment(t)) >= 0;
     }
 
-    /** @return bytes held by the sample arrays (array headers included, 16 bytes each) */
+    /**
+     * Returns bytes held by the sample arrays (array headers included, 16 bytes each).
+     *
+     * @return bytes held by the sample arrays (array headers included, 16 bytes each)
+     */
     long heldBytes() {
         long bytes = 16L * 3 + 8L * (times.length + positions.length + attitudes.length);
         if (velocities != null) {
@@ -457,7 +493,11 @@ public final class SampledMotion implements Motion, Serializable {
         return lo;
     }
 
-    /** @return the interval index the search finds for t (tests compare it with the JDK's search) */
+    /**
+     * Returns the interval index the search finds for t (tests compare it with the JDK's search).
+     *
+     * @return the interval index the search finds for t (tests compare it with the JDK's search)
+     */
     int intervalIndex(double t) {
         return segment(t);
     }
@@ -723,6 +763,12 @@ public final class SampledMotion implements Motion, Serializable {
         return "sample " + i;
     }
 
+    private static void checkSampleCount(double[] times) {
+        if (times.length < 2) {
+            throw new IllegalArgumentException("times must hold at least 2 samples, got " + times.length);
+        }
+    }
+
     private static void checkLength(String name, int length, int perSample, int samples) {
         if (length != perSample * samples) {
             throw new IllegalArgumentException(name + " must hold " + perSample + " values per sample, "
@@ -757,6 +803,11 @@ public final class SampledMotion implements Motion, Serializable {
             double t = times[i];
             if (!Double.isFinite(t)) {
                 throw new IllegalArgumentException(label.apply(i) + ": time must be finite, got " + t);
+            }
+            if (i > 0 && t > times[i - 1] && !(t - times[i - 1] >= MIN_SAMPLE_INTERVAL)) {
+                throw new IllegalArgumentException(label.apply(i) + ": time " + t + " s is only " + (t - times[i - 1])
+                        + " s after " + label.apply(i - 1) + "; consecutive sample times must be at least "
+                        + MIN_SAMPLE_INTERVAL + " s apart (the interpolation divides by the cube of the interval)");
             }
             if (i > 0 && !(t > times[i - 1])) {
                 throw new IllegalArgumentException(label.apply(i) + ": time " + t + " s is not after the time "

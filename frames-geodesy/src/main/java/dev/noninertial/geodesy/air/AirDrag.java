@@ -55,7 +55,8 @@ import dev.noninertial.geodesy.LocalAxes;
  * <p>Cost: per call one placement of the frame in the Earth-fixed frame, one geodetic
  * conversion, the atmosphere and the table, on primitives with a per-thread scratch array.
  * Measured with the per-thread allocation counter (2026-12-02, a site frame, steady wind): 80
- * bytes per call, essentially the geodetic position and the result; see the benchmark page.
+ * bytes per call, essentially the geodetic position and the result (120 under JMH
+ * {@code -prof gc}); see the benchmark page.
  *
  * <p>Results are for simulation and analysis only, not for aiming, firing or safety-area
  * decisions; defer to local codes, standards and licensed practice.
@@ -164,22 +165,38 @@ public final class AirDrag implements SpecificForce, Serializable {
         return new AirDrag(frame, earthFixed, ellipsoid, air, curve, newAreaOverMass, wind);
     }
 
-    /** @return the integration frame */
+    /**
+     * Returns the integration frame.
+     *
+     * @return the integration frame
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return the reference area over the mass (m^2/kg) */
+    /**
+     * Returns the reference area over the mass (m^2/kg).
+     *
+     * @return the reference area over the mass (m^2/kg)
+     */
     public double areaOverMass() {
         return areaOverMass;
     }
 
-    /** @return the drag coefficient table */
+    /**
+     * Returns the drag coefficient table.
+     *
+     * @return the drag coefficient table
+     */
     public DragCurve curve() {
         return curve;
     }
 
-    /** @return the wind */
+    /**
+     * Returns the wind.
+     *
+     * @return the wind
+     */
     public WindProfile wind() {
         return wind;
     }
