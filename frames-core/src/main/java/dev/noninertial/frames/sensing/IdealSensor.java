@@ -196,7 +196,9 @@ public final class IdealSensor implements Serializable {
         double[] s = new double[GRAVITY + 3];
         for (int k = 0; k < count; k++) {
             double t = times[timeOffset + k];
-            Arguments.finite("times[" + (timeOffset + k) + "]", t);
+            if (!Double.isFinite(t)) {
+                throw new IllegalArgumentException("times[" + (timeOffset + k) + "] must be finite, got " + t);
+            }
             read(t, s, target, targetOffset + InertialReading.COMPONENTS * k);
         }
     }
@@ -255,7 +257,9 @@ public final class IdealSensor implements Serializable {
         for (int k = 0; k < count; k++) {
             double a = start + k * interval;
             double b = start + (k + 1) * interval;
-            Arguments.finite("end of increment " + k, b);
+            if (!Double.isFinite(b)) {
+                throw new IllegalArgumentException("end of increment " + k + " must be finite, got " + b);
+            }
             System.arraycopy(s, LEVELS + 4 * 7, s, LEVELS, 6);
             read(b, s, s, LEVELS + 4 * 7);
             increment(a, b, s, target, targetOffset + SensorIncrements.COMPONENTS * k);
