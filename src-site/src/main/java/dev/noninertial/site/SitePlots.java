@@ -60,6 +60,7 @@ public final class SitePlots {
         CurveSheet[] sensors = SensorPlots.survey();
         write(folder, "sensor-survey-line.svg", sensors[0], written);
         write(folder, "sensor-triads-track.svg", sensors[1], written);
+        write(folder, "airdrop-footprint.svg", DispersionPlots.footprint(), written);
         return written;
     }
 
