@@ -395,13 +395,12 @@ public final class EarthModel implements Serializable {
      */
     public void gravitation(double x, double y, double z, double[] out, int offset) {
         Arguments.nonNull("out", out);
-        if (!Double.isFinite(x) || !Double.isFinite(y) || !Double.isFinite(z)) {
-            throw new IllegalArgumentException("position must have finite components, got (" + x + ", " + y + ", "
-                    + z + ")");
-        }
+        Arguments.finite("x", x);
+        Arguments.finite("y", y);
+        Arguments.finite("z", z);
         if (offset < 0 || offset > out.length - 3) {
-            throw new IllegalArgumentException("offset must be in [0, " + (out.length - 3) + "] for an array of length "
-                    + out.length + ", got " + offset);
+            throw new IllegalArgumentException("offset must be in [0, " + (out.length - 3) + "] for out of length "
+                    + out.length + " (3 doubles written), got " + offset);
         }
         fieldAt(x, y, z, false, out, offset);
     }
