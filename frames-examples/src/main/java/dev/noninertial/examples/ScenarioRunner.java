@@ -54,8 +54,9 @@ public final class ScenarioRunner {
         print.println(CAUTION);
         print.println();
         DemoSetting setting = new DemoSetting();
-        List<ScenarioTable> tables = List.of(SiteRotationScenario.run(setting), ShipCraneScenario.run(setting),
-                LongRangeScenario.run(setting));
+        List<ScenarioTable> tables = new java.util.ArrayList<>(List.of(SiteRotationScenario.run(setting),
+                ShipCraneScenario.run(setting), LongRangeScenario.run(setting)));
+        tables.addAll(SensorTruthScenario.run(setting));
         if (out != null) {
             Files.createDirectories(out);
         }
