@@ -143,17 +143,29 @@ public final class IdealSensor implements Serializable {
                 1e-15, 1e-3));
     }
 
-    /** @return the sensor frame S */
+    /**
+     * Returns the sensor frame S.
+     *
+     * @return the sensor frame S
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return the gravitation field, resolved in S axes */
+    /**
+     * Returns the gravitation field, resolved in S axes.
+     *
+     * @return the gravitation field, resolved in S axes
+     */
     public SpecificForce gravitation() {
         return gravitation;
     }
 
-    /** @return the relative quadrature tolerance of the increments */
+    /**
+     * Returns the relative quadrature tolerance of the increments.
+     *
+     * @return the relative quadrature tolerance of the increments
+     */
     public double tolerance() {
         return tolerance;
     }
