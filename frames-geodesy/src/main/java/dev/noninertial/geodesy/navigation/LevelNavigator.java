@@ -30,8 +30,11 @@ import dev.noninertial.geodesy.LocalAxes;
  *   <li><b>Size effect</b> (Savage 1998, part 1, size-effect compensation): accelerometer i at
  *       offset {@code r_i} from the navigation centre senses
  *       {@code e_i . (f + dw/dt x r_i + w x (w x r_i))}; its increment is corrected by
- *       {@code e_i . (Dw x r_i + da x (da x r_i) / h)} with {@code Dw} the change of rate over
- *       the step from the two mean rates {@code da'/h'} and {@code da/h}.</li>
+ *       {@code e_i . (Dw x r_i + da x (da x r_i) / h + (h/12) Dw x (Dw x r_i))}, the integrals
+ *       for a rate linear in time, with {@code Dw} the change of rate over the step: the rate at
+ *       the step's end is estimated from the mean rates {@code da'/h'} and {@code da/h} and kept
+ *       for the next step, so the corrections telescope over a run. The first step after a state
+ *       without history takes no {@code Dw} term; the second makes it up.</li>
  *   <li><b>Coning</b> (Bortz 1971 rotation vector; previous-interval algorithm of Ignagni 1990
  *       and Savage 1998 part 1, exact for a rate linear in time): body rotation vector
  *       {@code phi = da + (1/12) da' x da}.</li>
