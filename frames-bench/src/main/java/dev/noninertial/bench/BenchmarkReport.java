@@ -1,6 +1,8 @@
 package dev.noninertial.bench;
 
 import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -42,59 +44,41 @@ public final class BenchmarkReport {
      * @param scale factor applied to the ratio (6 turns "six single links" into "one mean link")
      */
     record Ratio(String what, String numerator, String denominator, String goal, double limit, double scale) {
-        Ratio(String what, String numerator, String denominator, String goal, double limit) {
-            this(what, numerator, denominator, goal, limit, 1.0);
-        }
     }
 
-    /** @return the ratios reported, in page order */
+    /** Where the ratio definitions live (shared with the site's benchmark page). */
+    static final String RATIOS = "ratios.tsv";
+
+    /**
+     * The ratios reported, in page order, read from {@code ratios.tsv} beside this class (the
+     * site's benchmark page reads the same file).
+     *
+     * @return the ratios
+     */
     static List<Ratio> ratios() {
         List<Ratio> r = new ArrayList<>();
-        String c = "ConversionBenchmark.";
-        r.add(new Ratio("full state F to B, object API / (a) Hipparchus objects", c + "toBaseLibrary", c + "toBaseObjects", "at most 0.5", 0.5));
-        r.add(new Ratio("full state F to B, object API / (b) primitives", c + "toBaseLibrary", c + "toBasePrimitives", "at most 3", 3));
-        r.add(new Ratio("full state B to F, object API / (a)", c + "fromBaseLibrary", c + "fromBaseObjects", "at most 0.5", 0.5));
-        r.add(new Ratio("full state B to F, object API / (b)", c + "fromBaseLibrary", c + "fromBasePrimitives", "at most 3", 3));
-        r.add(new Ratio("fictitious accelerations, object API / (a)", c + "fictitiousLibrary", c + "fictitiousObjects", "at most 0.5", 0.5));
-        r.add(new Ratio("fictitious accelerations, object API / (b)", c + "fictitiousLibrary", c + "fictitiousPrimitives", "at most 3", 3));
-        String h = "ChainBenchmark.";
-        for (String d : new String[] {"1", "3", "6"}) {
-            r.add(new Ratio("placement through a chain of " + d + ", object API / (a)", h + "library:depth=" + d,
-                    h + "objects:depth=" + d, "at most 0.5", 0.5));
-            r.add(new Ratio("placement through a chain of " + d + ", object API / (b)", h + "library:depth=" + d,
-                    h + "primitives:depth=" + d, "at most 3", 3));
+        try (InputStream in = BenchmarkReport.class.getResourceAsStream(RATIOS)) {
+            if (in == null) {
+                throw new IllegalStateException("missing resource dev/noninertial/bench/" + RATIOS);
+            }
+            int n = 0;
+            for (String line : new String(in.readAllBytes(), StandardCharsets.UTF_8).split("\n")) {
+                n++;
+                if (line.isBlank() || line.startsWith("#")) {
+                    continue;
+                }
+                String[] c = line.split("\t", -1);
+                if (c.length != 6) {
+                    throw new IllegalStateException(RATIOS + " line " + n + ": expected 6 tab-separated columns, found "
+                            + c.length);
+                }
+                double limit = c[4].isBlank() ? Double.NaN : Double.parseDouble(c[4]);
+                double scale = c[5].isBlank() ? 1.0 : Double.parseDouble(c[5]);
+                r.add(new Ratio(c[0], c[1], c[2], c[3], limit, scale));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
-        r.add(new Ratio("chain of 6 / mean single link of the same six motions, library",
-                h + "library:depth=6", h + "eachLinkAlone:depth=6", "at most 6", 6, 6.0));
-        r.add(new Ratio("chain of 6 / single link (the first, cheapest motion), library", h + "library:depth=6",
-                h + "library:depth=1", "", Double.NaN));
-        r.add(new Ratio("chain of 6 / single link, (b) primitives (for reference)", h + "primitives:depth=6",
-                h + "primitives:depth=1", "", Double.NaN));
-        String b = "BulkBenchmark.";
-        r.add(new Ratio("bulk F to B through a placement, per state / (b)", b + "placementToBaseLibrary", b + "placementToBasePrimitives", "at most 1.2", 1.2));
-        r.add(new Ratio("bulk F to B through a placement, per state / (a)", b + "placementToBaseLibrary", b + "placementToBaseObjects", "", Double.NaN));
-        r.add(new Ratio("bulk B to F through a placement, per state / (b)", b + "placementFromBaseLibrary", b + "placementFromBasePrimitives", "at most 1.2", 1.2));
-        r.add(new Ratio("bulk F to B through a motion at one time per state / (b)", b + "motionToBaseLibrary", b + "motionToBasePrimitives", "at most 1.2", 1.2));
-        r.add(new Ratio("bulk F to B through a motion at one time per state / (a)", b + "motionToBaseLibrary", b + "motionToBaseObjects", "", Double.NaN));
-        r.add(new Ratio("object API in a loop over the same states / (b) (for reference)", b + "motionToBaseLibraryObjects", b + "motionToBasePrimitives", "", Double.NaN));
-        String g = "GeodesyBenchmark.";
-        r.add(new Ratio("geodetic to Cartesian, library / (a) objects", g + "toCartesianLibrary", g + "toCartesianObjects", "", Double.NaN));
-        r.add(new Ratio("geodetic to Cartesian, library / (b) primitives", g + "toCartesianLibrary", g + "toCartesianPrimitives", "", Double.NaN));
-        r.add(new Ratio("Cartesian to geodetic (exact), library / (a) fixed-point iteration", g + "toGeodeticLibrary", g + "toGeodeticObjects", "", Double.NaN));
-        r.add(new Ratio("Cartesian to geodetic (exact), library / (b) Bowring, two passes", g + "toGeodeticLibrary", g + "toGeodeticPrimitives", "", Double.NaN));
-        r.add(new Ratio("Cartesian to geodetic / geodetic to Cartesian, library", g + "toGeodeticLibrary", g + "toCartesianLibrary", "at most 3", 3));
-        r.add(new Ratio("Earth rotation angle, library / (b) formula without checks", g + "eraLibrary", g + "eraPrimitives", "", Double.NaN));
-        String d = "DynamicsBenchmark.";
-        r.add(new Ratio("one integrator step, library / (a) same integrator, Vector3D equations", d + "stepLibrary", d + "stepObjects", "", Double.NaN));
-        r.add(new Ratio("one integrator step, library / (b) same integrator, primitive equations", d + "stepLibrary", d + "stepPrimitives", "", Double.NaN));
-        r.add(new Ratio("100 s trajectory, library / (a)", d + "trajectoryLibrary", d + "trajectoryObjects", "", Double.NaN));
-        r.add(new Ratio("100 s trajectory, library / (b)", d + "trajectoryLibrary", d + "trajectoryPrimitives", "", Double.NaN));
-        String air = "AirBenchmark.";
-        r.add(new Ratio("air drag evaluation, library / (b) primitives", air + "dragLibrary", air + "dragPrimitives", "", Double.NaN));
-        r.add(new Ratio("one step with gravitation and drag, library / (b) same integrator, primitive drag", air + "stepLibrary", air + "stepPrimitives", "", Double.NaN));
-        String n = "NavigationBenchmark.";
-        r.add(new Ratio("one strapdown step, library work array / (b) hand-written step", n + "stepLibrary", n + "stepPrimitives", "at most 1.5", 1.5));
-        r.add(new Ratio("one strapdown step, object API / (b) hand-written step", n + "stepObjects", n + "stepPrimitives", "", Double.NaN));
         return r;
     }
 

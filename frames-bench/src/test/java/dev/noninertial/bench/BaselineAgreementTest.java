@@ -15,6 +15,7 @@ import dev.noninertial.frames.ReferenceFrame;
  * numbers. Baseline (a) is an independent computation with Hipparchus {@code Rotation} and
  * {@code Vector3D} of the transport formulas (Taylor, Classical Mechanics, ch. 9); baseline (b)
  * is independent hand code on primitives.
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class BaselineAgreementTest {
 

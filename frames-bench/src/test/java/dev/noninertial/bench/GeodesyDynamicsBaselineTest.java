@@ -21,6 +21,7 @@ class GeodesyDynamicsBaselineTest {
         double[] b = new double[3];
         GeodesyBaselines.toCartesian(site.latitude(), site.longitude(), site.height(), b);
         // same formula, WGS84 constants of NIMA TR8350.2: a few ulps of 6.4e6 m
+        // sources: REFERENCES.md, Earth models
         assertEquals(0.0, lib.distance(a), 1e-8);
         assertEquals(0.0, lib.distance(new Vector3D(b[0], b[1], b[2])), 1e-8);
 
@@ -38,6 +39,7 @@ class GeodesyDynamicsBaselineTest {
     @Test
     void eraBaselineAgreesWithTheLibrary() {
         // IERS Conventions (2010) eq. 5.15, same formula: agreement to rounding (1e-12 rad)
+        // sources: REFERENCES.md, Earth rotation
         assertEquals(EarthRotationAngle.atJulianDate(GeodesyBaselines.JD_WHOLE, GeodesyBaselines.JD_FRACTION),
                 GeodesyBaselines.era(GeodesyBaselines.JD_WHOLE, GeodesyBaselines.JD_FRACTION), 1e-12);
     }

@@ -100,7 +100,8 @@ public final class Arguments {
     }
 
     /**
-     * Returns the unit vector along a non-zero, finite axis.
+     * Returns the unit vector along a non-zero, finite axis. Any non-zero finite length works,
+     * from subnormal to the largest double: the result has norm 1 within 2 ulps.
      *
      * @param name argument name used in the message
      * @param axis the axis to check
@@ -109,12 +110,26 @@ public final class Arguments {
      */
     public static Vector3D unitAxis(String name, Vector3D axis) {
         finite(name, axis);
-        double norm = axis.getNorm();
-        if (!(norm > 0.0) || !Double.isFinite(norm)) {
+        double x = axis.getX();
+        double y = axis.getY();
+        double z = axis.getZ();
+        double largest = Math.max(Math.abs(x), Math.max(Math.abs(y), Math.abs(z)));
+        if (largest == 0.0) {
             throw new IllegalArgumentException(
                     name + " must be a non-zero axis (length > 0), got " + vector(axis));
         }
-        return axis.scalarMultiply(1.0 / norm);
+        if (largest >= 0x1p-450 && largest <= 0x1p450) {
+            // the squares neither overflow nor underflow: the plain formula (bits as before)
+            return axis.scalarMultiply(1.0 / axis.getNorm());
+        }
+        // scale by a power of two (exact) so that the largest component is in [1, 2): the squares
+        // can then neither overflow (huge axes) nor lose bits to underflow (tiny axes)
+        double scale = Math.scalb(1.0, -Math.getExponent(largest));
+        x *= scale;
+        y *= scale;
+        z *= scale;
+        double norm = Math.sqrt(x * x + y * y + z * z);
+        return new Vector3D(x / norm, y / norm, z / norm);
     }
 
     /**

@@ -20,12 +20,12 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  * </pre>
  * so that the acceleration seen in F is {@code a_F = R a_B + total()}.
  *
+ * <p>Immutable and thread-safe.
+ *
  * @param frameAcceleration minus the acceleration of F's origin, resolved in F (m/s^2)
  * @param euler Euler term {@code -al x r} (m/s^2)
  * @param coriolis Coriolis term {@code -2 w x v} (m/s^2)
  * @param centrifugal centrifugal term {@code -w x (w x r)} (m/s^2)
- *
- * <p>Immutable and thread-safe.
  */
 public record FictitiousAccelerations(Vector3D frameAcceleration, Vector3D euler, Vector3D coriolis,
                                       Vector3D centrifugal) implements Serializable {

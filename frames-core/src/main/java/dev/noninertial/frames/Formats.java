@@ -6,7 +6,9 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 /**
  * Human-readable text for quantities with units, shared by every {@code toString} of the library
- * so that all values print the same way: components with six significant digits and the unit.
+ * so that all values print the same way: each number with six significant digits and trailing
+ * zeros dropped when its magnitude is in [1e-3, 1e7), in exponent form with six decimals
+ * otherwise, zero as {@code 0}, then the unit.
  *
  * <p>Thread-safe: stateless.
  */
@@ -16,7 +18,9 @@ public final class Formats {
     }
 
     /**
-     * Formats a vector with its unit, for example {@code (1.00000, 0.00000, -9.80665) m/s^2}.
+     * Formats a vector with its unit: {@code vector(new Vector3D(1, 0, -9.80665), "m/s^2")} gives
+     * {@code (1, 0, -9.80665) m/s^2}, {@code vector(new Vector3D(0.5, 1234.5678, 2e-5), "m")} gives
+     * {@code (0.5, 1234.57, 2.000000e-05) m}.
      *
      * @param v the vector
      * @param unit unit text appended after the components
@@ -40,7 +44,10 @@ public final class Formats {
     }
 
     /**
-     * Formats one number with six significant digits (no unit).
+     * Formats one number (no unit): six significant digits with trailing zeros dropped for
+     * magnitudes in [1e-3, 1e7) ({@code 1234.5678} gives {@code 1234.57}, {@code 1.0} gives
+     * {@code 1}), exponent form with six decimals otherwise ({@code 2e-5} gives
+     * {@code 2.000000e-05}), {@code 0} for zero.
      *
      * @param value the number
      * @return readable text

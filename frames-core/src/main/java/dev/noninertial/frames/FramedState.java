@@ -87,6 +87,7 @@ public final class FramedState implements Serializable {
      * @return the copy
      */
     public FramedState withState(PointState newState) {
+        Arguments.nonNull("newState", newState);
         return new FramedState(frame, time, newState);
     }
 

@@ -24,7 +24,7 @@ public final class Orientations {
     /**
      * Largest allowed {@code ||q| - 1|} for a quaternion said to be unit: the one tolerance of the
      * library for unit quaternions, used by every factory that takes one (here,
-     * {@code SampledMotion}); an accepted quaternion is normalised before use.
+     * {@code SampledMotion}, {@code Placement}); an accepted quaternion is normalised before use.
      * It admits quaternions written with 7 significant digits, as in logs.
      */
     public static final double UNIT_QUATERNION_TOLERANCE = 1e-6;
@@ -167,22 +167,54 @@ public final class Orientations {
     /**
      * Reads back yaw, pitch and roll (aerospace z-y-x sequence). Pitch is in [-pi/2, pi/2], yaw
      * and roll in (-pi, pi]. At pitch = +-pi/2 yaw and roll are not separable; the whole turn about
-     * the vertical is then reported as yaw and roll is 0.
+     * the vertical is then reported as yaw and roll is 0; this holds within rounding, for
+     * {@code cos(pitch)} below about 1.3e-15. Computed from the quaternion by
+     * half-angle formulas that stay well conditioned up to gimbal lock: pitch, and the
+     * combination of yaw and roll that stays defined there (yaw - roll near +pi/2, yaw + roll
+     * near -pi/2), are accurate to a few ulps; the split into yaw and roll near the lock is as
+     * sensitive as the rotation itself allows (about 1e-16 / cos(pitch) rad).
      *
      * @param orientation orientation mapping base components to frame components
      * @return {yaw, pitch, roll} (rad)
      */
     public static double[] toYawPitchRoll(Rotation orientation) {
         Arguments.nonNull("orientation", orientation);
-        double[][] m = orientation.getMatrix();
-        double horizontal = Math.hypot(m[0][0], m[0][1]);
-        double pitch = Math.atan2(-m[0][2], horizontal);
-        if (horizontal < 1e-12) {
-            // gimbal lock: m[1][0] = -sin(yaw - +-roll) ... report the turn as yaw with roll = 0
-            double yaw = Math.atan2(-m[1][0], m[1][1]);
-            return new double[] {yaw, pitch, 0.0};
+        double[] q = toQuaternion(orientation);
+        // from the half-angle product of fromYawPitchRoll (c, s of half angles):
+        //   q0 + q2 = (cp + sp) cos((yaw - roll) / 2),  q3 - q1 = (cp + sp) sin((yaw - roll) / 2)
+        //   q0 - q2 = (cp - sp) cos((yaw + roll) / 2),  q3 + q1 = (cp - sp) sin((yaw + roll) / 2)
+        // so the half sum and half difference are angles of vectors of length |cp -+ sp|, and
+        // tan(pi/4 - pitch/2) = |cp - sp| / |cp + sp|: every quantity is well conditioned, also
+        // near gimbal lock, where the matrix entries used before are tiny differences
+        double dc = q[0] + q[2];
+        double ds = q[3] - q[1];
+        double sc = q[0] - q[2];
+        double ss = q[3] + q[1];
+        double plus = Math.hypot(dc, ds);
+        double minus = Math.hypot(sc, ss);
+        double pitch = 0.5 * Math.PI - 2.0 * Math.atan2(minus, plus);
+        double halfDifference = Math.atan2(ds, dc);
+        double halfSum = Math.atan2(ss, sc);
+        // at the lock to within rounding (cos(pitch) = plus * minus below about 1e-15) the split
+        // into yaw and roll is pure rounding noise: report the defined combination as yaw
+        if (minus <= LOCK) {
+            // pitch +pi/2: only yaw - roll is defined; report it as yaw
+            return new double[] {halfTurn(2.0 * halfDifference), pitch, 0.0};
         }
-        return new double[] {Math.atan2(m[0][1], m[0][0]), pitch, Math.atan2(m[1][2], m[2][2])};
+        if (plus <= LOCK) {
+            // pitch -pi/2: only yaw + roll is defined; report it as yaw
+            return new double[] {halfTurn(2.0 * halfSum), pitch, 0.0};
+        }
+        return new double[] {halfTurn(halfSum + halfDifference), pitch, halfTurn(halfSum - halfDifference)};
+    }
+
+    /** Length of the half-angle vector below which the attitude counts as gimbal-locked: 2^-50. */
+    private static final double LOCK = 0x1p-50;
+
+    /** The angle reduced to (-pi, pi]. */
+    private static double halfTurn(double angle) {
+        double r = Math.IEEEremainder(angle, 2.0 * Math.PI);
+        return r <= -Math.PI ? r + 2.0 * Math.PI : r;
     }
 
     /**

@@ -11,6 +11,7 @@ import dev.noninertial.frames.motion.Motions;
  * Textbook rotating- and translating-frame results (Taylor, Classical Mechanics, ch. 9; Landau &amp;
  * Lifshitz, Mechanics, sec. 39). Tolerance 1e-12 relative: each term is a handful of products,
  * so only a few ulps of rounding are expected.
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class AnalyticFramesTest {
 
@@ -20,6 +21,7 @@ class AnalyticFramesTest {
     void spinUpGivesEulerTermAlphaTimesRadiusOpposedToTheSpeedUp() {
         // disk speeding up at al about z; point at rest at radius r on the x axis of the disk:
         // Euler term -al x r = -al r y_hat (Taylor eq. 9.34), centrifugal -w^2 r x_hat with w = w0 + al t
+        // sources: REFERENCES.md, Analytic results of mechanics
         double al = 0.8;
         double w0 = 0.5;
         double r = 2.5;
@@ -38,6 +40,7 @@ class AnalyticFramesTest {
     @Test
     void uniformSpinCoriolisIsTwiceRateTimesSpeedAtRightAngles() {
         // Taylor eq. 9.35: F_cor = -2 m w x v; w = w z_hat, v = v x_hat  =>  -2 w v y_hat
+        // sources: REFERENCES.md, Analytic results of mechanics
         double w = 3.0;
         double v = 1.25;
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
@@ -52,6 +55,7 @@ class AnalyticFramesTest {
     void translatingFrameFeelsMinusItsOriginAcceleration() {
         // a frame whose origin accelerates uniformly at A (no rotation): every point feels -A
         // (Taylor sec. 9.1, "inertial force" -m A)
+        // sources: REFERENCES.md, Analytic results of mechanics
         Vector3D accel = new Vector3D(1.5, -0.25, 9.0);
         ReferenceFrame lab = ReferenceFrame.inertialRoot("lab");
         ReferenceFrame cabin = lab.attach("cabin",

@@ -28,7 +28,7 @@ class BadInputTest {
         refused(IllegalArgumentException.class, "NaN", () -> PointState.of(nan, Vector3D.ZERO));
         refused(IllegalArgumentException.class, "angularVelocity", () -> Placement.of(Vector3D.ZERO, Vector3D.ZERO,
                 Vector3D.ZERO, Rotation.IDENTITY, inf, Vector3D.ZERO));
-        refused(IllegalArgumentException.class, "rateAtZero",
+        refused(IllegalArgumentException.class, "rate",
                 () -> Motions.spin(Vector3D.PLUS_K, 0, Double.NaN));
         refused(IllegalArgumentException.class, "components[3]",
                 () -> PointState.fromArray(new double[] {0, 0, 0, Double.NaN, 0, 0, 0, 0, 0}, 0));

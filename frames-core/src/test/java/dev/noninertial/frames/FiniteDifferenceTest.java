@@ -7,6 +7,9 @@ import java.util.Random;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
+import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.motion.SpinProfile;
+
 /**
  * The rates the engine reports must be the time derivatives of what it reports for position and
  * orientation. Check source: the definition of the derivative, evaluated by five-point central
@@ -43,6 +46,36 @@ class FiniteDifferenceTest {
         }
         WORST.forEach((what, worst) -> System.out.printf(java.util.Locale.ROOT,
                 "MEASURED finite differences, 120 chains of 1-6 links: %s worst relative error %.2e%n", what, worst));
+    }
+
+    @Test
+    void sensorTestMotionsReportConsistentRates() {
+        // rate-table and centrifuge profiles (Motions.turning) and motions run one after another
+        // (Motions.sequence), sampled away from their joins (where the angular acceleration may jump)
+        SpinProfile profile = SpinProfile.startingAt(0.0, 0.3, 0.0).ramp(2.0, 0.8).hold(1.0)
+                .oscillate(0.2, 3.0, 1.5).steps(new double[] {-0.5, 0.7}, 1.0, 1.2);
+        ReferenceFrame root = ReferenceFrame.inertialRoot("table room");
+        ReferenceFrame arm = root.attach("arm", Motions.turning(new Vector3D(0.2, -0.1, 1), profile));
+        // a gondola swinging on the arm, mounted with a lever arm: turning links at depth 2 and 3
+        ReferenceFrame gondola = arm.attach("gondola", Motions.stationary(new Vector3D(4, 0, 0))
+                .then(Motions.turning(Vector3D.PLUS_J, SpinProfile.startingAt(0.0, 0.0, 0.0).ramp(1.0, 0.3)
+                        .hold(profile.end()))));
+        // spin-up at 0.5 rad/s^2 to 1 rad/s at t = 2 s (angle 1 rad), then on at 0.1 rad/s^2:
+        // angle -0.8 + 0.8 t + 0.05 t^2 matches angle and rate at the join
+        Motion seq = Motions.sequence(new double[] {2.0}, Motions.spinUp(Vector3D.PLUS_K, 0.0, 0.0, 0.5),
+                Motions.spinUp(Vector3D.PLUS_K, -0.8, 0.8, 0.1));
+        ReferenceFrame switched = root.attach("switched", seq).attach("lever", Motions.stationary(new Vector3D(1, 2, 0)));
+        PointState s = PointState.of(new Vector3D(0.5, -0.2, 0.1), new Vector3D(0.1, 0.3, -0.2),
+                new Vector3D(0.05, 0, 0.02));
+        // times inside ramps and oscillations: in a hold the angular acceleration is exactly zero and
+        // the rounding of the second differences (~1e-9 rad/s^2) would meet the 1e-3 floor's tolerance
+        for (double t : new double[] {0.7, 3.4, 4.2, 5.1, 6.6, 7.5, 9.3}) {
+            for (ReferenceFrame leaf : new ReferenceFrame[] {arm, gondola, switched}) {
+                checkOrigin(leaf, root, t);
+                checkRotation(leaf, root, t);
+                checkPointState(leaf, root, t, s);
+            }
+        }
     }
 
     private static void checkOrigin(ReferenceFrame leaf, ReferenceFrame base, double t) {

@@ -67,6 +67,7 @@ class MotionBulkConversionTest {
         // Independent check: the transport formulas of Taylor, Classical Mechanics, ch. 9
         // (r_B = o + R^T r, v_B = o' + R^T (v + w x r), a_B = o'' + R^T (a + al x r + 2 w x v + w x (w x r)))
         // evaluated with Hipparchus Rotation and Vector3D from the placement's public accessors.
+        // sources: REFERENCES.md, Analytic results of mechanics
         Random random = new Random(20261202L);
         double[] times = times(random);
         double[] source = randomStates(random);

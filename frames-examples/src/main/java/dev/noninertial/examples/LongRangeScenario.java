@@ -10,6 +10,7 @@ import dev.noninertial.frames.dynamics.Trajectory;
 import dev.noninertial.frames.dynamics.TrajectoryEvent;
 import dev.noninertial.frames.dynamics.TrajectorySolver;
 import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.units.Units;
 
 /**
  * Scenario 3: a drag-free ballistic test body leaves the Kelvaro Point range at 800 m/s and 45
@@ -26,7 +27,7 @@ final class LongRangeScenario {
 
     static ScenarioTable run(DemoSetting s) {
         double speed = 800.0;
-        double elevation = Math.toRadians(45.0);
+        double elevation = Units.degrees(45.0);
         double ground = DemoSetting.KELVARO_POINT.height();
         // the non-rotating comparison: the same site geometry fixed in an inertial root
         Placement fixed = s.siteInEarth;
@@ -50,7 +51,7 @@ final class LongRangeScenario {
                 .column("cross-range (right +)", "m", "%.1f")
                 .column("Coriolis at apex", "m/s^2", "%.5f");
         for (double azimuthDeg = 0.0; azimuthDeg < 360.0; azimuthDeg += 90.0) {
-            double az = Math.toRadians(azimuthDeg);
+            double az = Units.degrees(azimuthDeg);
             Vector3D along = new Vector3D(Math.sin(az), Math.cos(az), 0.0);
             Vector3D right = new Vector3D(Math.cos(az), -Math.sin(az), 0.0);
             Vector3D v0 = new Vector3D(speed * Math.cos(elevation), along,

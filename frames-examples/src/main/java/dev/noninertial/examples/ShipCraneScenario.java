@@ -9,6 +9,7 @@ import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
 import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.units.Units;
 import dev.noninertial.geodesy.AttitudeSample;
 import dev.noninertial.geodesy.GeodeticPath;
 import dev.noninertial.geodesy.LatLonHeight;
@@ -22,14 +23,12 @@ import dev.noninertial.geodesy.LocalAxes;
  */
 final class ShipCraneScenario {
 
-    static final double KNOT = 1852.0 / 3600.0;
-
     private ShipCraneScenario() {
     }
 
     static ScenarioTable run(DemoSetting s) {
-        double speed = 9.0 * KNOT;
-        double course = Math.toRadians(60.0);
+        double speed = Units.knots(9.0);
+        double course = Units.degrees(60.0);
         LatLonHeight start = LatLonHeight.ofDegrees(57.60, 11.20, 0.0);
         ReferenceFrame level = s.earth.carriedLevel("Tarrowind level (NED)",
                 GeodeticPath.steadyCourse(s.model.ellipsoid(), start,
@@ -38,9 +37,9 @@ final class ShipCraneScenario {
         // heave: 1.1 m amplitude, 9 s period, along NED down
         ReferenceFrame heaving = level.attach("Tarrowind heave", Motions.heave(Vector3D.PLUS_K, 1.1,
                 2 * Math.PI / 9.0, 0.0));
-        double rollAmp = Math.toRadians(5.0);
+        double rollAmp = Units.degrees(5.0);
         double rollW = 2 * Math.PI / 10.0;
-        double pitchAmp = Math.toRadians(1.5);
+        double pitchAmp = Units.degrees(1.5);
         double pitchW = 2 * Math.PI / 7.0;
         ReferenceFrame hull = s.earth.body("Tarrowind hull (x fwd, y stbd, z down)", heaving, t -> {
             double sr = Math.sin(rollW * t);
@@ -84,8 +83,8 @@ final class ShipCraneScenario {
             }
             double[] ypr = Orientations.toYawPitchRoll(
                     hull.placementIn(level, t).orientation());
-            table.row(t, Math.toDegrees(ypr[2]), Math.toDegrees(ypr[1]), m[0], m[1], m[2], m[3],
-                    apparent.getNorm(), Math.toDegrees(tilt), names[big]);
+            table.row(t, Units.toDegrees(ypr[2]), Units.toDegrees(ypr[1]), m[0], m[1], m[2], m[3],
+                    apparent.getNorm(), Units.toDegrees(tilt), names[big]);
         }
         table.note("roll 5 deg / 10 s, pitch 1.5 deg / 7 s, heave 1.1 m / 9 s; "
                 + "hook 22 m fwd, 9 m port, 31 m up, lowered at 0.4 m/s");

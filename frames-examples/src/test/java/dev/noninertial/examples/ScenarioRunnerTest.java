@@ -20,6 +20,7 @@ class ScenarioRunnerTest {
 
     // WGS84 rotation rate, semi-major axis and first eccentricity squared, NIMA TR8350.2 (2000),
     // Tables 3.1 and 3.3
+    // sources: REFERENCES.md, Earth models
     static final double W = 7.292115e-5;
     static final double A = 6378137.0;
     static final double E2 = 6.69437999014e-3;
@@ -55,6 +56,7 @@ class ScenarioRunnerTest {
         // flat-Earth first order in w (derivation as in Taylor, Classical Mechanics, sec. 9.9):
         // the vertical Earth-rate part pushes right by w sin(lat) vh T^2, the north part pushes the
         // rising and falling body west by (1/3) w cos(lat) vz T^2 in all (left for a northbound shot)
+        // sources: REFERENCES.md, Analytic results of mechanics
         double expected = W * Math.sin(lat) * vh * time * time - W * Math.cos(lat) * vz * time * time / 3.0;
         System.out.printf("MEASURED northbound cross-range deflection %.2f m, flat-Earth first order %.2f m,"
                 + " relative difference %.2e%n", cross, expected, (cross - expected) / expected);
@@ -71,6 +73,7 @@ class ScenarioRunnerTest {
         double h = DemoSetting.KELVARO_POINT.height();
         // distance from the axis (N + h) cos(lat), N = a / sqrt(1 - e^2 sin^2 lat) (TR8350.2 Eq. 4-15);
         // horizontal part of the extra centrifugal term w^2 (N + h) cos(lat) sin(lat), toward the equator
+        // sources: REFERENCES.md, Earth models
         double n = A / Math.sqrt(1 - E2 * Math.sin(lat) * Math.sin(lat));
         double south = W * W * (n + h) * Math.cos(lat) * Math.sin(lat);
         double expected = -0.5 * south * 60.0 * 60.0;

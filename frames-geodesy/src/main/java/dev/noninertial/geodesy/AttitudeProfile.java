@@ -75,11 +75,12 @@ public interface AttitudeProfile {
     /**
      * Placement of the body frame in the level frame for one attitude sample.
      *
-     * @param s the attitude sample
+     * @param sample the attitude sample
      * @return the placement (origin at the level frame's origin)
      */
-    static Placement bodyPlacement(AttitudeSample s) {
-        Arguments.nonNull("attitude sample", s);
+    static Placement bodyPlacement(AttitudeSample sample) {
+        Arguments.nonNull("sample", sample);
+        AttitudeSample s = sample;
         double sr = Math.sin(s.roll());
         double cr = Math.cos(s.roll());
         double sp = Math.sin(s.pitch());

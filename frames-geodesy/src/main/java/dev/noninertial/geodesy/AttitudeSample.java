@@ -78,6 +78,9 @@ public record AttitudeSample(double heading, double pitch, double roll,
      * @throws IllegalArgumentException if a rate is not finite
      */
     public AttitudeSample withRates(double newHeadingRate, double newPitchRate, double newRollRate) {
+        Arguments.finite("newHeadingRate", newHeadingRate);
+        Arguments.finite("newPitchRate", newPitchRate);
+        Arguments.finite("newRollRate", newRollRate);
         return new AttitudeSample(heading, pitch, roll, newHeadingRate, newPitchRate, newRollRate,
                 headingAcceleration, pitchAcceleration, rollAcceleration);
     }

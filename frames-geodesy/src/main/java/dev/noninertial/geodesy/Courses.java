@@ -173,15 +173,31 @@ final class Courses {
                 if (target > arcToNorthLimit || target < arcToSouthLimit) {
                     refusePole(t, lat0 + target / rm(lat0));
                 }
-                // Newton on arc(lat0, lat) = target, the arc carried forward piece by piece
+                // Newton on arc(lat0, lat) = target, the arc carried forward piece by piece, kept
+                // inside the bracket [lo, hi] that holds the root (the limits' arcs bound it): a
+                // step from a low latitude, where the meridian radius is smallest, overshoots
+                // towards the pole, so a step leaving the bracket is replaced by bisection
+                double limit = 0.5 * Math.PI - POLE_MARGIN;
+                double lo = target >= 0 ? lat0 : -limit;
+                double hi = target >= 0 ? limit : lat0;
                 double done = 0.0;
-                for (int k = 0; k < 12; k++) {
-                    double step = (target - done) / rm(lat);
-                    if (lat + step == lat) {
+                for (int k = 0; k < 80; k++) {
+                    if (done < target) {
+                        lo = Math.max(lo, lat);
+                    } else if (done > target) {
+                        hi = Math.min(hi, lat);
+                    } else {
                         break;
                     }
-                    done += arc(lat, lat + step);
-                    lat += step;
+                    double next = lat + (target - done) / rm(lat);
+                    if (!(next > lo && next < hi)) {
+                        next = 0.5 * (lo + hi);
+                    }
+                    if (next == lat) {
+                        break;
+                    }
+                    done += arc(lat, next);
+                    lat = next;
                 }
                 double ratio = ve / vn;
                 lon = start.longitude() + ratio * integrate(x -> rm(x) / (rn(x) * Math.cos(x)), lat0, lat);

@@ -199,6 +199,7 @@ public final class EarthFrames implements Serializable {
      * @return a new frame attached to {@link #earthFixed()}
      */
     public ReferenceFrame localLevel(String name, LatLonHeight site, LocalAxes axes) {
+        Arguments.nonNull("name", name);
         Arguments.nonNull("site", site);
         Arguments.nonNull("axes", axes);
         Ellipsoid shape = model.ellipsoid();
@@ -218,6 +219,7 @@ public final class EarthFrames implements Serializable {
      * @return a new frame attached to {@link #earthFixed()}
      */
     public ReferenceFrame carriedLevel(String name, GeodeticPath path, LocalAxes axes) {
+        Arguments.nonNull("name", name);
         Arguments.nonNull("path", path);
         Arguments.nonNull("axes", axes);
         return earthFixed.attach(name, new CarriedLevelMotion(model.ellipsoid(), path, axes));
@@ -240,6 +242,7 @@ public final class EarthFrames implements Serializable {
      * @return a new frame attached to {@code parent}
      */
     public ReferenceFrame body(String name, ReferenceFrame parent, AttitudeProfile attitude, LocalAxes parentAxes) {
+        Arguments.nonNull("name", name);
         Arguments.nonNull("parent", parent);
         Arguments.nonNull("attitude", attitude);
         Arguments.nonNull("parentAxes", parentAxes);

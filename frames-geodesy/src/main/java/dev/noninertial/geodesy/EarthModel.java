@@ -187,10 +187,10 @@ public final class EarthModel implements Serializable {
      * Magnitude of normal gravity at a geodetic position, by Somigliana's formula corrected for
      * height with the second-order series of TR8350.2 Eq. 4-3:
      * {@code g_h = g [1 - 2 (1 + f + m - 2 f sin^2 lat) h / a + 3 h^2 / a^2]}. The series is what
-     * gravimetry and navigation use near the surface; its truncation error grows with height.
-     * Measured against the exact field ({@link #normalGravityVector(Vector3D)}), worst over
-     * latitude (2026-12-02): 1.0e-7 m/s^2 at 1 km,
-     * 7.0e-7 m/s^2 at 10 km, 1.6e-4 m/s^2 at 100 km. Heights are limited to [-20 km, 100 km].
+     * gravimetry and navigation use near the surface; its truncation error grows with height
+     * (measured against the exact field {@link #normalGravityVector(Vector3D)} on the site's
+     * <a href="../../../../accuracy.html#geodesy">accuracy page</a>, section Normal gravity).
+     * Heights are limited to [-20 km, 100 km].
      *
      * @param position geodetic position (rad, m)
      * @return magnitude of normal gravity (m/s^2)
@@ -215,11 +215,34 @@ public final class EarthModel implements Serializable {
      * {@code W = GM/E atan(E/u) + w^2 a^2 q(u)/(2 q0) (sin^2 beta - 1/3) + w^2 (u^2 + E^2) cos^2 beta / 2}.
      * On the ellipsoid it equals the constant {@code U0 = GM/E atan(E/b) + w^2 a^2 / 3}.
      *
+     * <p>Beyond {@value #POINT_MASS_DISTANCE} m from the centre the gravitational part is the point
+     * mass's (its flattening term is below rounding there); positions so far from the axis that
+     * the centrifugal part overflows (about 1.9e158 m) are refused.
+     *
      * @param position Earth-fixed position (m), ECEF axes, not deeper than about 20 km below the ellipsoid
      * @return potential (m^2/s^2), positive
-     * @throws IllegalArgumentException if the position is not finite or too deep
+     * @throws IllegalArgumentException if the position is not finite, too deep or too far
      */
     public double normalPotential(Vector3D position) {
+        Arguments.finite("position", position);
+        double px = position.getX();
+        double py = position.getY();
+        double pz = position.getZ();
+        double big = Math.max(Math.abs(px), Math.max(Math.abs(py), Math.abs(pz)));
+        if (big > POINT_MASS_DISTANCE) {
+            // point mass plus centrifugal potential (flattening term below rounding, see field)
+            double scale = Math.scalb(1.0, Math.getExponent(big));
+            double sx = px / scale;
+            double sy = py / scale;
+            double sz = pz / scale;
+            double r = Math.sqrt(sx * sx + sy * sy + sz * sz) * scale;
+            double w = gm / r + 0.5 * omega * omega * (sx * sx + sy * sy) * scale * scale;
+            if (!Double.isFinite(w)) {
+                throw new IllegalArgumentException("position " + position + " m is too far from the axis: the"
+                        + " centrifugal potential w^2 p^2 / 2 exceeds the largest double");
+            }
+            return w;
+        }
         double[] c = ellipsoidal(position);
         double u = c[0];
         double sb2 = c[1];
@@ -244,18 +267,43 @@ public final class EarthModel implements Serializable {
     public Vector3D normalGravityVector(Vector3D position) {
         Arguments.finite("position", position);
         double[] g = new double[3];
-        normalGravityAt(position.getX(), position.getY(), position.getZ(), g, 0);
+        fieldAt(position.getX(), position.getY(), position.getZ(), true, g, 0);
         return new Vector3D(g[0], g[1], g[2]);
     }
 
+    /** Beyond this distance from the centre (m) the field is the point mass's (see {@link #gravitation}). */
+    static final double POINT_MASS_DISTANCE = 1e100;
+
     /**
-     * The exact normal gravity vector at an Earth-fixed point, written into an array: the
-     * allocation-free form of {@link #normalGravityVector(Vector3D)} (same closed form).
+     * The exact normal field at an Earth-fixed point, written into an array (allocation-free):
+     * the gradient of the normal potential, with or without its centrifugal part. Without it the
+     * gravitational part alone is differentiated, so gravitation far from the Earth is not the
+     * small difference of two large numbers (at 1e13 m the centrifugal term is 5e4 m/s^2 and
+     * gravitation 4e-12 m/s^2).
      */
-    private void normalGravityAt(double px, double py, double pz, double[] out, int offset) {
+    private void fieldAt(double px, double py, double pz, boolean withCentrifugal, double[] out, int offset) {
+        double w2 = omega * omega;
+        double spin = withCentrifugal ? w2 : 0.0;
+        double big = Math.max(Math.abs(px), Math.max(Math.abs(py), Math.abs(pz)));
+        if (big > POINT_MASS_DISTANCE) {
+            // the flattening term falls off as (a/r)^2 relative to the point mass: below 1e-186
+            // here, far below rounding; the point mass is computed on scaled components
+            double scale = Math.scalb(1.0, Math.getExponent(big));
+            double sx = px / scale;
+            double sy = py / scale;
+            double sz = pz / scale;
+            double sr = Math.sqrt(sx * sx + sy * sy + sz * sz);
+            double r = sr * scale;
+            double pull = gm / r / r / sr; // multiplies the scaled components: GM r_vec / r^3
+            out[offset] = -pull * sx + spin * px;
+            out[offset + 1] = -pull * sy + spin * py;
+            out[offset + 2] = -pull * sz;
+            return;
+        }
         double p2 = px * px + py * py;
         double d = p2 + pz * pz - linear2;
-        double u2 = 0.5 * (d + Math.sqrt(d * d + 4.0 * linear2 * pz * pz));
+        // hypot: d * d would overflow beyond about 1e77 m
+        double u2 = 0.5 * (d + Math.hypot(d, 2.0 * linear * pz));
         double u = Math.sqrt(u2);
         if (!(u >= b + MIN_HEIGHT)) {
             throw new IllegalArgumentException("position (" + px + ", " + py + ", " + pz + ") m is deeper than "
@@ -266,11 +314,10 @@ public final class EarthModel implements Serializable {
         double cb2 = p2 / u2e2;
         double sb2 = pz * pz / u2;
         double x = linear / u;
-        double w2 = omega * omega;
         // dq/du = Q'(x) dx/du with x = E/u
         double dqdu = -qDerivative(x) * linear / (u * u);
-        double dUdu = -gm / u2e2 + 0.5 * w2 * a * a * dqdu / q0 * (sb2 - 1.0 / 3.0) + w2 * u * cb2;
-        double kb = w2 * a * a * q(x) / q0 - w2 * u2e2;   // dU/dbeta = sin(beta) cos(beta) kb
+        double dUdu = -gm / u2e2 + 0.5 * w2 * a * a * dqdu / q0 * (sb2 - 1.0 / 3.0) + spin * u * cb2;
+        double kb = w2 * a * a * q(x) / q0 - spin * u2e2;   // dU/dbeta = sin(beta) cos(beta) kb
         double metric = u * u + linear2 * sb2;             // |dr/dbeta|^2 = (u^2 + E^2) |dr/du|^2
         double ca = dUdu * u2e2 / metric;                  // multiplies dr/du
         double cb = kb / metric;                           // multiplies dr/dbeta / (sin cos)
@@ -290,14 +337,21 @@ public final class EarthModel implements Serializable {
      * re-resolving the vector in inertial axes). Passing {@link #normalGravityVector(Vector3D)}
      * in an Earth-fixed frame would count the centrifugal term twice.
      *
+     * <p>The gravitational potential alone is differentiated (no centrifugal part is added and
+     * then taken away), so the field stays accurate at any distance: it tends to the point
+     * mass's {@code -GM r / |r|^3}, and beyond {@value #POINT_MASS_DISTANCE} m, where the
+     * flattening term is below rounding, it is computed as that point mass (underflowing to zero
+     * beyond about 1e161 m).
+     *
      * @param position Earth-fixed position (m), ECEF axes, height above about -20 km
      * @return gravitation (m/s^2), resolved in ECEF axes
      * @throws IllegalArgumentException if the position is not finite or too deep
      */
     public Vector3D gravitation(Vector3D position) {
-        Vector3D g = normalGravityVector(position);
-        double w2 = omega * omega;
-        return new Vector3D(g.getX() - w2 * position.getX(), g.getY() - w2 * position.getY(), g.getZ());
+        Arguments.finite("position", position);
+        double[] g = new double[3];
+        fieldAt(position.getX(), position.getY(), position.getZ(), false, g, 0);
+        return new Vector3D(g[0], g[1], g[2]);
     }
 
     /**
@@ -359,8 +413,11 @@ public final class EarthModel implements Serializable {
      */
     public void normalGravityIn(double latitude, double height, LocalAxes axes, double[] out, int offset) {
         Ellipsoid.checkLatitude(latitude);
+        Arguments.finite("height", height);
+        Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         ellipsoid.toCartesian(latitude, 0.0, height, out, offset);
-        normalGravityAt(out[offset], 0.0, out[offset + 2], out, offset);
+        fieldAt(out[offset], 0.0, out[offset + 2], true, out, offset);
         double gx = out[offset];
         double gz = out[offset + 2];
         double s = Math.sin(latitude);
@@ -419,6 +476,7 @@ public final class EarthModel implements Serializable {
     public void earthRateIn(double latitude, LocalAxes axes, double[] out, int offset) {
         Ellipsoid.checkLatitude(latitude);
         Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double c = omega * Math.cos(latitude);
         double s = omega * Math.sin(latitude);
         if (axes == LocalAxes.ENU) {
@@ -474,7 +532,11 @@ public final class EarthModel implements Serializable {
      */
     public void transportRate(double latitude, double height, double[] groundVelocity, int velocityOffset,
                               LocalAxes axes, double[] out, int offset) {
+        Ellipsoid.checkLatitude(latitude);
+        Arguments.finite("height", height);
         Arguments.nonNull("axes", axes);
+        Arguments.fromIndexSize("groundVelocity", groundVelocity, "velocityOffset", velocityOffset, 3);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double north = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 1 : 0)];
         double east = groundVelocity[velocityOffset + (axes == LocalAxes.ENU ? 0 : 1)];
         Arguments.finite("groundVelocity north component (m/s)", north);
@@ -566,7 +628,8 @@ public final class EarthModel implements Serializable {
         double z = position.getZ();
         double p2 = x * x + y * y;
         double d = p2 + z * z - linear2;
-        double u2 = 0.5 * (d + Math.sqrt(d * d + 4.0 * linear2 * z * z));
+        // hypot: d * d would overflow beyond about 1e77 m
+        double u2 = 0.5 * (d + Math.hypot(d, 2.0 * linear * z));
         double u = Math.sqrt(u2);
         if (!(u >= b + MIN_HEIGHT)) {
             throw new IllegalArgumentException("position " + position + " m is deeper than " + (-MIN_HEIGHT)

@@ -40,6 +40,9 @@ public final class Ellipsoid implements Serializable {
     /** Largest flattening for which {@link #toGeodetic} tries its fast path (Earth: 0.00335). */
     private static final double FAST_MAX_FLATTENING = 0.01;
 
+    /** Distance (m) beyond which {@link #toGeodetic(Vector3D)} works on a position scaled by a power of two. */
+    private static final double FAR_DISTANCE = 0x1p330;
+
     /** WGS84: a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., Table 3.1). */
     public static final Ellipsoid WGS84 = ofInverseFlattening(6378137.0, 298.257223563);
 
@@ -165,6 +168,7 @@ public final class Ellipsoid implements Serializable {
      */
     public void radiiOfCurvature(double latitude, double[] out, int offset) {
         checkLatitude(latitude);
+        Arguments.fromIndexSize("out", out, "offset", offset, 2);
         double s = Math.sin(latitude);
         double w2 = 1.0 - e2 * s * s;
         out[offset] = meridianRadiusOf(w2);
@@ -221,6 +225,10 @@ public final class Ellipsoid implements Serializable {
      * @param offset index of x in {@code out}
      */
     public void toCartesian(double latitude, double longitude, double height, double[] out, int offset) {
+        checkLatitude(latitude);
+        Arguments.finite("longitude", longitude);
+        Arguments.finite("height", height);
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         double sLat = Math.sin(latitude);
         double cLat = Math.cos(latitude);
         double n = a / Math.sqrt(1.0 - e2 * sLat * sLat);
@@ -239,11 +247,10 @@ public final class Ellipsoid implements Serializable {
      * 1000 a (the common case): Bowring's one-step latitude, with the parametric latitude's sine
      * and cosine taken from ratios of the coordinates, starts Newton's method on the normal
      * condition {@code p sin(lat) - z cos(lat) - e^2 N sin(lat) cos(lat) = 0} with its exact
-     * derivative and its large products split exactly with fused multiply-add. For heights from
-     * -10 km to 1,000 km Bowring's start is within 9.0e-10 rad (measured on WGS84, 200,000
-     * points), so the first step is below 1e-8 rad and, convergence being quadratic with a ratio
-     * of about e^2/2, leaves an error below 1e-18 rad; 3,000 km below the surface the start is
-     * within 8.5e-8 rad and a second step is taken. The one
+     * derivative and its large products split exactly with fused multiply-add. Near the surface
+     * Bowring's start is close enough that one step, convergence being quadratic with a ratio of
+     * about e^2/2, reaches double precision; deep inside a second step is taken (the measured
+     * start errors are on the accuracy page, see below). The one
      * inverse-trigonometric seed is a short series (within 1e-15 rad), corrected by that step.
      * Everywhere else, and wherever three steps would not converge: the foot point F on the
      * ellipse satisfies {@code X - F = s grad(q)/2} with
@@ -258,16 +265,17 @@ public final class Ellipsoid implements Serializable {
      * At the centre the nearest surface points are the poles: the result is latitude +pi/2,
      * height -b. On the axis the longitude is reported as 0.
      *
-     * <p>Measured accuracy (2026-12-02, after the fast path was added; 1,000,000 points against
-     * a 50-digit Hipparchus Dfp reference, distance between the exact point and the exact image
-     * of the result): at most 1.70e-9 m for heights from -10 km to 1,000 km; at most 2.9e-16 of the
-     * distance from the centre for heights from -5,000 km to 400,000 km. Cost, measured the same
-     * day with the benchmark module's {@code PairedRatios} (9 rounds, shared 2-core machine, load
-     * average 0.7 to 4.4) at a point 250 m above the ellipsoid: the median over nine runs was
-     * 2.11 to 3.62 times {@link #toCartesian} (one run above 3), against 4.43 to 8.38 over eight
-     * runs before the fast path; 0.41 to 0.47 times a hand-written fixed-point iteration (0.83 to
-     * 0.95 before in the same session), so less than half the former time. Allocates only the
-     * result (40 bytes per call under JMH's {@code -prof gc}).
+     * <p>Accuracy and cost are measured, not promised here: the figures, with their date and
+     * conditions, are on the documentation site's
+     * <a href="../../../../accuracy.html#geodesy">accuracy page</a> (section Geodesy, against a
+     * 50-digit Hipparchus Dfp reference) and <a href="../../../../benchmarks.html">benchmark
+     * page</a>. Allocates only the result.
+     *
+     * <p>Domain: every finite position whose height is a finite double (refused otherwise:
+     * components near the largest double, with a distance above it). Beyond 2^330 m (about 2.2e99 m) from the centre the
+     * position is first scaled by a power of two, exactly, since the squares would overflow
+     * from about 1e150 m; there latitude and longitude have converged to their limits and the
+     * height scales with the distance, to rounding.
      *
      * @param position Earth-fixed Cartesian position (m), ECEF axes, finite
      * @return geodetic position: latitude in [-pi/2, pi/2], longitude in [-pi, pi] (rad), height (m)
@@ -278,6 +286,22 @@ public final class Ellipsoid implements Serializable {
         double x = position.getX();
         double y = position.getY();
         double zs = position.getZ();
+        double big = Math.max(Math.abs(x), Math.max(Math.abs(y), Math.abs(zs)));
+        if (big > FAR_DISTANCE) {
+            // far away the squares below would overflow (from about 1e150 m); scale by a power of
+            // two (exact) to about 1e99 m, where latitude and longitude have reached their limits
+            // (they move by about e^2 a / r, below 1e-94 rad) and the height is the distance less
+            // a few semi-axes, so h(X) = s h(X / s) to rounding (the neglected part is (s - 1) a,
+            // below 1e-92 of h)
+            double scale = Math.scalb(1.0, Math.getExponent(big) - Math.getExponent(FAR_DISTANCE) + 1);
+            LatLonHeight near = toGeodetic(new Vector3D(x / scale, y / scale, zs / scale));
+            double h = near.height() * scale;
+            if (Double.isInfinite(h)) {
+                throw new IllegalArgumentException("position " + position + " m is farther than the largest double"
+                        + " (" + Double.MAX_VALUE + " m) from the ellipsoid: its height cannot be represented");
+            }
+            return new LatLonHeight(near.latitude(), near.longitude(), h);
+        }
         double z = Math.abs(zs);
         double pp = x * x + y * y;
         double rr = pp + z * z;

@@ -32,6 +32,7 @@ public interface GeodeticPath {
      * @return the path
      */
     static GeodeticPath stationary(LatLonHeight site) {
+        Arguments.nonNull("site", site);
         return constantRates(site, 0.0, 0.0, 0.0);
     }
 

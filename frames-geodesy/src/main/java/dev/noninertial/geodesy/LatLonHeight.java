@@ -90,6 +90,7 @@ public record LatLonHeight(double latitude, double longitude, double height) imp
      * @return the copy
      */
     public LatLonHeight withHeight(double newHeight) {
+        Arguments.finite("newHeight", newHeight);
         return new LatLonHeight(latitude, longitude, newHeight);
     }
 

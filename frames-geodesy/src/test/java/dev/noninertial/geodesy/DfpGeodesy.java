@@ -23,7 +23,7 @@ final class DfpGeodesy {
     }
 
     static DfpGeodesy wgs84() {
-        return new DfpGeodesy("6378137", "298.257223563"); // NIMA TR8350.2 Table 3.1
+        return new DfpGeodesy("6378137", "298.257223563"); // NIMA TR8350.2 Table 3.1 (REFERENCES.md, Earth models)
     }
 
     /** Forward conversion of the exact double inputs, result as Dfp {x, y, z}. */

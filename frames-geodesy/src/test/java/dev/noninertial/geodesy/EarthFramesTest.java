@@ -85,6 +85,7 @@ class EarthFramesTest {
     @Test
     void earthFixedSpinsAtTheModelRateFromTheEpochAngle() {
         // decision of the design: angle = ERA(epoch) + w t (IERS TN 36 Eq. 5.15 for ERA)
+        // sources: REFERENCES.md, Earth rotation
         double t = 3600.0;
         Placement p = EARTH.earthFixed().placementIn(EARTH.inertial(), t);
         double angle = EarthRotationAngle.at(EPOCH) + W * t;
@@ -99,8 +100,10 @@ class EarthFramesTest {
 
     @Test
     void localLevelFrameSitsOnTheSiteWithNamedAxes() {
-        // ENU rows (e, n, u) and NED rows (n, e, -u): Groves, Principles of GNSS, Inertial and
-        // Multisensor Integrated Navigation, 2nd ed., sec. 2.3 (from memory)
+        // ENU rows (e, n, u) and NED rows (n, e, -u) (REFERENCES.md, Inertial navigation; the
+        // section number is from memory, so the axes are also recomputed below by finite
+        // differences: north and east are the directions in which toCartesian moves when the
+        // latitude and the longitude grow)
         LatLonHeight site = LatLonHeight.ofDegrees(-33.9, 151.2, 58.0);   // invented site "Quarry Hill"
         ReferenceFrame enu = EARTH.localLevel("Quarry Hill ENU", site, LocalAxes.ENU);
         ReferenceFrame ned = EARTH.localLevel(site, LocalAxes.NED);
@@ -110,14 +113,27 @@ class EarthFramesTest {
         assertVectorEquals(new Vector3D(0, 0, 1), pe.vectorFromBase(up), 1e-15, "up in ENU");
         assertVectorEquals(new Vector3D(0, 0, -1), ned.placementIn(EARTH.earthFixed(), 0).vectorFromBase(up), 1e-15,
                 "up in NED");
+        // independent recomputation: central differences of toCartesian, step 1e-7 rad (truncation
+        // ~ h^2/6 of the curvature, 2e-15 relative; rounding ~ ulp(6.4e6 m)/(6.4e6 m * 1e-7) ~ 1e-9)
+        double h = 1e-7;
+        Vector3D dLat = Ellipsoid.WGS84.toCartesian(LatLonHeight.of(site.latitude() + h, site.longitude(), 58.0))
+                .subtract(Ellipsoid.WGS84.toCartesian(LatLonHeight.of(site.latitude() - h, site.longitude(), 58.0)));
+        Vector3D dLon = Ellipsoid.WGS84.toCartesian(LatLonHeight.of(site.latitude(), site.longitude() + h, 58.0))
+                .subtract(Ellipsoid.WGS84.toCartesian(LatLonHeight.of(site.latitude(), site.longitude() - h, 58.0)));
+        assertVectorEquals(new Vector3D(0, 1, 0), pe.vectorFromBase(dLat.normalize()), 1e-8, "north in ENU");
+        assertVectorEquals(new Vector3D(1, 0, 0), pe.vectorFromBase(dLon.normalize()), 1e-8, "east in ENU");
+        Placement pn = ned.placementIn(EARTH.earthFixed(), 0);
+        assertVectorEquals(new Vector3D(1, 0, 0), pn.vectorFromBase(dLat.normalize()), 1e-8, "north in NED");
+        assertVectorEquals(new Vector3D(0, 1, 0), pn.vectorFromBase(dLon.normalize()), 1e-8, "east in NED");
         // north points to the pole: the z axis of ECEF has positive north component cos(lat)
         Vector3D zInEnu = pe.vectorFromBase(Vector3D.PLUS_K);
         assertEquals(Math.cos(site.latitude()), zInEnu.getY(), 1e-15);
         assertEquals(Math.sin(site.latitude()), zInEnu.getZ(), 1e-15);
-        // relative to inertial space: Earth rate in local axes, ENU (0, w cos lat, w sin lat) (REFERENCES.md)
+        // relative to inertial space: Earth rate in local axes, ENU (0, w cos lat, w sin lat) (REFERENCES.md, Inertial navigation)
         assertVectorEquals(MODEL.earthRateIn(site.latitude(), LocalAxes.ENU),
                 enu.placementIn(EARTH.inertial(), 100.0).angularVelocity(), 1e-19, "earth rate ENU");
         // Titterton and Weston: Earth rate in NED (w cos lat, 0, -w sin lat)
+        // sources: REFERENCES.md, Inertial navigation
         assertVectorEquals(new Vector3D(W * Math.cos(site.latitude()), 0, -W * Math.sin(site.latitude())),
                 ned.placementIn(EARTH.inertial(), 100.0).angularVelocity(), 1e-19, "earth rate NED");
         assertEquals(2 * W * Math.sin(site.latitude()), MODEL.coriolisParameter(site.latitude()), 1e-20);
@@ -126,6 +142,7 @@ class EarthFramesTest {
     @Test
     void engineCoriolisAndCentrifugalInEarthFixedEqualClosedForms() {
         // Landau and Lifshitz, Mechanics, sec. 39: -2 w x v and -w x (w x r) for uniform rotation
+        // sources: REFERENCES.md, Analytic results of mechanics
         Vector3D r = new Vector3D(4.1e6, -2.2e6, 4.3e6);
         Vector3D v = new Vector3D(120.0, 35.0, -80.0);
         FictitiousAccelerations f = EARTH.earthFixed().placementIn(EARTH.inertial(), 777.0)
@@ -147,8 +164,10 @@ class EarthFramesTest {
             FictitiousAccelerations f = EARTH.earthFixed().placementIn(EARTH.inertial(), 12.0)
                     .fictitious(PointState.stationary(r));
             Vector3D seen = specific.add(f.total());
-            // 1e-15 m/s^2: rounding of the 0.03 m/s^2 centrifugal term computed two ways
-            assertTrue(seen.getNorm() < 1e-15, "lat " + deg + ": " + seen);
+            // 1e-14 m/s^2: gravitation is the gradient of the gravitational potential alone (accurate
+            // far away), normal gravity that of the full potential, so the two 9.8 m/s^2 vectors
+            // are rounded independently: a few ulps of 9.8 (1.8e-15 each)
+            assertTrue(seen.getNorm() < 1e-14, "lat " + deg + ": " + seen);
             // and passing gravity instead would leave the centrifugal term uncompensated
             Vector3D wrong = reaction.add(MODEL.normalGravityVector(r)).add(f.total());
             if (deg < 90) {
@@ -172,7 +191,7 @@ class EarthFramesTest {
             // rounding ~ 2 ulp / h: 1e-16 rad/s on orientations, ~5e-9 m/s on positions of 6.4e6 m
             checkByDifferences(level, EARTH.earthFixed(), t, 1.0, 1e-15, 1e-19, 1e-8, 1e-9);
             checkByDifferences(level, EARTH.inertial(), t, 1.0, 1e-15, 1e-17, 1e-8, 1e-9);
-            // closed forms (REFERENCES.md, Titterton and Weston): transport rate, then Earth rate + transport
+            // closed forms (REFERENCES.md, Inertial navigation): transport rate, then Earth rate + transport
             LatLonHeight here = path.at(t).position();
             Vector3D transport = MODEL.transportRate(here,
                     axes == LocalAxes.ENU ? new Vector3D(ve, vn, 0) : new Vector3D(vn, ve, 0), axes);
@@ -252,7 +271,7 @@ class EarthFramesTest {
         // 0.41 mGal term) and rounds 2 w to 7.503 (0.001 mGal here); measured difference 0.0027 mGal
         double rule = (7.503 * 10 * Math.cos(Math.toRadians(60)) * 1.0 + 0.004154 * 100) * 1e-5;
         assertEquals(rule, engine, 0.01e-5);
-        assertEquals(37.93e-5, engine, 0.01e-5);   // REFERENCES.md: about 37.93 mGal
+        assertEquals(37.93e-5, engine, 0.01e-5);   // REFERENCES.md, Gravimetry: about 37.93 mGal
     }
 
     private static double inertialUp(ReferenceFrame frame, double t) {

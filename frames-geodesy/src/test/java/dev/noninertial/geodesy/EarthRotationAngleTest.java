@@ -30,6 +30,7 @@ class EarthRotationAngleTest {
     @Test
     void eraAtJ2000IsTheFormulaConstant() {
         // IERS TN 36 Eq. 5.15: at Tu = 0 the angle is 2 pi 0.7790572732640 by definition; 1e-12 rad goal
+        // sources: REFERENCES.md, Earth rotation
         assertEquals(2 * Math.PI * 0.7790572732640, EarthRotationAngle.atJulianDate(2451545.0, 0.0), 1e-12);
         assertEquals(2 * Math.PI * 0.7790572732640,
                 EarthRotationAngle.at(Instant.parse("2000-01-01T12:00:00Z")), 1e-12);
@@ -63,6 +64,7 @@ class EarthRotationAngleTest {
     void rateMismatchWithTheModelIsAsDocumented() {
         // IERS rate 2 pi 1.00273781191135448 / 86400 (TN 36 Eq. 5.15) minus the WGS84 rate
         // (TR8350.2 Table 3.1), computed in Dfp: 1.4671e-12 rad/s, as stated in EarthFrames
+        // sources: REFERENCES.md, Earth models; Earth rotation
         Dfp iers = FIELD.getPi().multiply(2).multiply(FIELD.newDfp("1.00273781191135448")).divide(FIELD.newDfp(86400));
         double mismatch = iers.subtract(FIELD.newDfp("0.00007292115")).toDouble();
         assertEquals(1.467e-12, mismatch, 0.001e-12);

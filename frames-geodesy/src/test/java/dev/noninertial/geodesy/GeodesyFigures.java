@@ -25,6 +25,7 @@ public final class GeodesyFigures {
         Ellipsoid wgs = Ellipsoid.WGS84;
         EarthModel m = EarthModel.WGS84;
         // IOGP 373-7-2 example
+        // sources: REFERENCES.md, Geodetic conversions
         double lat = Math.toRadians(53 + 48 / 60.0 + 33.820 / 3600.0);
         double lon = Math.toRadians(2 + 7 / 60.0 + 46.380 / 3600.0);
         Vector3D x = wgs.toCartesian(LatLonHeight.of(lat, lon, 73.0));

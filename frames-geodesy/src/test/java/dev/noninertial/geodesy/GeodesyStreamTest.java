@@ -24,7 +24,7 @@ import dev.noninertial.frames.ReferenceFrame;
  * {@link InvalidObjectException} (Java Object Serialization Specification, section 3.7). The
  * patch replaces the eight big-endian bytes of a double (section 6.4: primitive values are
  * written as by {@code DataOutput}). Check values: WGS84 a = 6378137 m, 1/f = 298.257223563,
- * GM = 3.986004418e14 m^3/s^2 (REFERENCES.md, WGS84).
+ * GM = 3.986004418e14 m^3/s^2 (REFERENCES.md, Earth models).
  */
 class GeodesyStreamTest {
 

@@ -7,6 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.SplittableRandom;
 
 import org.hipparchus.dfp.Dfp;
+import org.hipparchus.dfp.Dfp;
+import org.hipparchus.dfp.DfpField;
+import org.hipparchus.dfp.DfpMath;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
@@ -17,9 +20,10 @@ class GeodeticConversionTest {
     @Test
     void iogpWorkedExampleToOneMillimetre() {
         // IOGP Publication 373-7-2 (EPSG Guidance Note 7-2), geographic/geocentric example, WGS84
-        // (from memory; recomputed independently, see REFERENCES.md):
-        // 53deg48'33.820"N, 2deg07'46.380"E, h = 73.0 m -> X, Y, Z below. Tolerance 1 mm: the
-        // published values are given to the millimetre.
+        // (REFERENCES.md, Geodetic conversions; the published figures are from memory, so they are
+        // recomputed below from the closed-form formulas in 50-digit Dfp, independently of the
+        // library): 53deg48'33.820"N, 2deg07'46.380"E, h = 73.0 m -> X, Y, Z below. Tolerance 1 mm:
+        // the published values are given to the millimetre.
         double lat = 53 + 48 / 60.0 + 33.820 / 3600.0;
         double lon = 2 + 7 / 60.0 + 46.380 / 3600.0;
         Vector3D x = WGS84.toCartesian(LatLonHeight.ofDegrees(lat, lon, 73.0));
@@ -34,11 +38,40 @@ class GeodeticConversionTest {
     }
 
     @Test
+    void iogpFiguresAreWhatTheClosedFormGives() {
+        // Recomputation of the published (from memory) IOGP figures: X = (N + h) cos(lat) cos(lon),
+        // Y = (N + h) cos(lat) sin(lon), Z = (N (1 - e^2) + h) sin(lat), N = a / sqrt(1 - e^2 sin^2 lat),
+        // e^2 = f (2 - f), WGS84 a and 1/f (REFERENCES.md, Earth models), the angles converted from
+        // degrees, minutes and seconds in Dfp (no double rounding anywhere).
+        DfpField field = DfpGeodesy.FIELD;
+        Dfp degree = field.getPi().divide(180);
+        Dfp lat = field.newDfp(53).add(field.newDfp(48).divide(60)).add(field.newDfp("33.820").divide(3600))
+                .multiply(degree);
+        Dfp lon = field.newDfp(2).add(field.newDfp(7).divide(60)).add(field.newDfp("46.380").divide(3600))
+                .multiply(degree);
+        Dfp[] exact = DfpGeodesy.wgs84().forward(DfpMath.sin(lat), DfpMath.cos(lat), DfpMath.sin(lon),
+                DfpMath.cos(lon), field.newDfp("73.0"));
+        double[] published = {3771793.968, 140253.342, 5124304.349};
+        for (int i = 0; i < 3; i++) {
+            // the published figure is the exact value rounded to the millimetre: within 0.5 mm
+            assertEquals(published[i], exact[i].toDouble(), 0.5e-3, "component " + i);
+        }
+        // and the library's double-precision forward conversion agrees with the exact value to
+        // rounding (a few ulp of 5e6 m, ~1e-9 m; 1e-8 m allows the rounding of the inputs)
+        Vector3D x = WGS84.toCartesian(LatLonHeight.of(lat.toDouble(), lon.toDouble(), 73.0));
+        assertEquals(exact[0].toDouble(), x.getX(), 1e-8);
+        assertEquals(exact[1].toDouble(), x.getY(), 1e-8);
+        assertEquals(exact[2].toDouble(), x.getZ(), 1e-8);
+    }
+
+    @Test
     void wgs84DerivedConstantsMatchTr83502() {
         // NIMA TR8350.2 3rd ed. Table 3.3: b = 6356752.3142 m (4 decimals), e^2 = 6.69437999014e-3
+        // sources: REFERENCES.md, Earth models
         assertEquals(6356752.3142, WGS84.semiMinorAxis(), 0.5e-4);
         assertEquals(6.69437999014e-3, WGS84.eccentricitySquared(), 0.5e-14);
         // Moritz, GRS80 (Bull. Geod. 2000): b = 6356752.3141 m
+        // sources: REFERENCES.md, Earth models
         assertEquals(6356752.3141, Ellipsoid.GRS80.semiMinorAxis(), 0.5e-4);
     }
 

@@ -120,8 +120,9 @@ class GeodeticUncertaintyTest {
 
     @Test
     void localCovarianceOfIndependentGeodeticErrorsIsTheTextbookScaling() {
-        // Curvilinear position: dN = (RM + h) dlat, dE = (RN + h) cos lat dlon, dU = dh (Groves,
-        // Principles of GNSS, Inertial, and Multisensor Integrated Navigation, 2nd ed., ch. 2; from memory).
+        // Curvilinear position: dN = (RM + h) dlat, dE = (RN + h) cos lat dlon, dU = dh (REFERENCES.md,
+        // Inertial navigation; recalled from memory, so the two scale factors are recomputed below
+        // by finite differences of toCartesian).
         LatLonHeight site = SITES[1];
         double sLat = 4e-7;
         double sLon = 6e-7;
@@ -132,6 +133,17 @@ class GeodeticUncertaintyTest {
         double east = (WGS84.primeVerticalRadius(site.latitude()) + site.height()) * Math.cos(site.latitude()) * sLon;
         double north = (WGS84.meridianRadius(site.latitude()) + site.height()) * sLat;
         double[] expected = {east * east, north * north, sH * sH};
+        // independent: |dX/dlat| and |dX/dlon| by central differences, step 1e-6 rad (truncation
+        // ~ h^2/6 relative, 2e-13; rounding ~ ulp(6.4e6)/(6.4e6 * 1e-6), 2e-10 relative)
+        double step = 1e-6;
+        double lat = site.latitude();
+        double lon = site.longitude();
+        double perLat = WGS84.toCartesian(LatLonHeight.of(lat + step, lon, site.height()))
+                .distance(WGS84.toCartesian(LatLonHeight.of(lat - step, lon, site.height()))) / (2 * step);
+        double perLon = WGS84.toCartesian(LatLonHeight.of(lat, lon + step, site.height()))
+                .distance(WGS84.toCartesian(LatLonHeight.of(lat, lon - step, site.height()))) / (2 * step);
+        assertEquals(perLat * sLat, north, 1e-9 * north);
+        assertEquals(perLon * sLon, east, 1e-9 * east);
         for (int i = 0; i < 3; i++) {
             for (int k = 0; k < 3; k++) {
                 // rounding of two 3x3 products: a few ulps of the largest entry (about 10 m^2)

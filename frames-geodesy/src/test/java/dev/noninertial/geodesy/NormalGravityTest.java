@@ -16,6 +16,7 @@ class NormalGravityTest {
     @Test
     void wgs84DerivedConstantsMatchTr83502Tables() {
         // NIMA TR8350.2 3rd ed.: Table 3.1 (defining), Table 3.4 (derived gravity constants)
+        // sources: REFERENCES.md, Earth models
         assertEquals(6378137.0, WGS84.ellipsoid().semiMajorAxis(), 0.0);
         assertEquals(1 / 298.257223563, WGS84.ellipsoid().flattening(), 0.0);
         assertEquals(3.986004418e14, WGS84.gm(), 0.0);
@@ -34,6 +35,7 @@ class NormalGravityTest {
         // Moritz, "Geodetic Reference System 1980", Bull. Geod. (2000): ge, gp to 10 decimals.
         // GRS80 defines J2 rather than f; 1/f = 298.257222101 is published to 9 decimals, which
         // moves ge by well under 1e-10 m/s^2.
+        // sources: REFERENCES.md, Earth models
         assertEquals(9.7803267715, EarthModel.GRS80.equatorialGravity(), 1e-10);
         assertEquals(9.8321863685, EarthModel.GRS80.polarGravity(), 1e-10);
         assertEquals(6378137.0, EarthModel.GRS80.ellipsoid().semiMajorAxis(), 0.0);
@@ -58,6 +60,7 @@ class NormalGravityTest {
     void exactVectorOnTheEllipsoidIsSomiglianaAndNormalToTheSurface() {
         // Somigliana closed form (TR8350.2 Eq. 4-1) is the exact magnitude on the ellipsoid, and the
         // ellipsoid is an equipotential surface, so gravity is along the inward normal there
+        // sources: REFERENCES.md, Earth models
         for (double deg = -90; deg <= 90; deg += 7.5) {
             LatLonHeight site = LatLonHeight.ofDegrees(deg, 33.0, 0.0);
             Vector3D x = WGS84.ellipsoid().toCartesian(site);
@@ -76,6 +79,7 @@ class NormalGravityTest {
     void potentialIsConstantOnTheEllipsoid() {
         // physical invariant: the level ellipsoid is an equipotential surface, U0 = GM/E atan(E/b) + w^2 a^2/3
         // (Heiskanen and Moritz, Eq. 2-61); relative 1e-15: rounding of terms ~6e7 m^2/s^2
+        // sources: REFERENCES.md, Earth models
         double e = WGS84.ellipsoid().linearEccentricity();
         double a = WGS84.ellipsoid().semiMajorAxis();
         double u0 = WGS84.gm() / e * Math.atan(e / WGS84.ellipsoid().semiMinorAxis())
@@ -84,7 +88,8 @@ class NormalGravityTest {
             Vector3D x = WGS84.ellipsoid().toCartesian(LatLonHeight.ofDegrees(deg, -70, 0));
             assertEquals(u0, WGS84.normalPotential(x), 1e-15 * u0 * 4, "lat " + deg);
         }
-        // TR8350.2 Table 3.4 (from memory): U0 = 62636851.7146 m^2/s^2
+        // TR8350.2 3rd ed., Table 3.4 (REFERENCES.md, Earth models; recalled from memory):
+        // U0 = 62636851.7146 m^2/s^2, recomputed above by the closed form from a, f, GM and w
         assertEquals(62636851.7146, u0, 1e-4);
     }
 
@@ -124,6 +129,7 @@ class NormalGravityTest {
         // TR8350.2 Eq. 4-3 is a series in h/a that keeps the first-order coefficient to O(f) and the
         // h^2 coefficient to O(1): the neglected terms are about 2 g h/a * f^2 and 3 g (h/a)^2 * f
         // (factor 5 on each as margin). Measured: 1.0e-7 m/s^2 at 1 km, 7.0e-7 m/s^2 at 10 km (equator).
+        // sources: REFERENCES.md, Earth models
         double g = 9.8;
         double a = 6378137.0;
         double f = 1 / 298.257223563;
@@ -141,6 +147,7 @@ class NormalGravityTest {
     void gravitySplitsIntoGravitationAndCentrifugal() {
         // definition: gravity = gravitation + w^2 (x, y, 0); at the equator the centrifugal part is
         // w^2 a = 0.0339 m/s^2 (textbook value, e.g. Heiskanen and Moritz sec. 2-1)
+        // sources: REFERENCES.md, Earth models
         Vector3D x = WGS84.ellipsoid().toCartesian(LatLonHeight.ofDegrees(0, 0, 0));
         Vector3D c = WGS84.centrifugal(x);
         assertEquals(7.292115e-5 * 7.292115e-5 * 6378137.0, c.getX(), 1e-15);

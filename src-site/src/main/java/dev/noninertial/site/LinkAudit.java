@@ -16,6 +16,12 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Attribute;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.jsoup.parser.Parser;
+
 /**
  * Checks every local link of the site: each {@code href} and {@code src} of our own pages and
  * plots (the Javadoc tree is checked only as a link target) must name an existing file inside
@@ -23,12 +29,17 @@ import java.util.stream.Stream;
  *
  * <p>Links with a scheme ({@code https:}, {@code mailto:} ...) are not followed: the site must
  * work offline, so they are only counted.
+ *
+ * <p>HTML pages are parsed with jsoup as a browser would, and SVG files with its XML parser: only
+ * real attributes of real elements count, so a link shown as text (inside {@code <pre>} or as
+ * {@code &lt;a href=...&gt;}) and a link inside a comment are not links. Style sheets are scanned
+ * for {@code url(...)}.
  */
 public final class LinkAudit {
 
-    private static final Pattern LINK = Pattern.compile("\\b(?:href|src|xlink:href)\\s*=\\s*(\"([^\"]*)\"|'([^']*)')");
-    private static final Pattern ANCHOR = Pattern.compile("\\b(?:id|name)\\s*=\\s*(?:\"([^\"]*)\"|'([^']*)')");
+    private static final Pattern CSS_URL = Pattern.compile("url\\(\\s*(['\"]?)([^'\")]*)\\1\\s*\\)");
     private static final Pattern SCHEME = Pattern.compile("^[a-zA-Z][a-zA-Z0-9+.-]*:");
+    private static final Set<String> LINK_ATTRIBUTES = Set.of("href", "src", "xlink:href");
 
     private final Path root;
     private final Map<Path, Set<String>> anchorCache = new HashMap<>();
@@ -74,11 +85,9 @@ public final class LinkAudit {
 
     private void auditFile(Path file, List<String> broken) throws IOException {
         String text = Files.readString(file, StandardCharsets.UTF_8);
-        Matcher m = LINK.matcher(text);
         String where = root.relativize(file).toString();
-        while (m.find()) {
-            String raw = m.group(2) != null ? m.group(2) : m.group(3);
-            String link = Markup.unescape(raw).strip();
+        for (String raw : links(file.getFileName().toString(), text)) {
+            String link = raw.strip();
             if (SCHEME.matcher(link).find()) {
                 external++;
                 continue;
@@ -89,6 +98,27 @@ public final class LinkAudit {
                 broken.add(where + ": \"" + raw + "\" " + problem);
             }
         }
+    }
+
+    /** The link values of one file, character references already read back by the parser. */
+    static List<String> links(String fileName, String text) {
+        List<String> found = new ArrayList<>();
+        if (fileName.endsWith(".css")) {
+            Matcher m = CSS_URL.matcher(text);
+            while (m.find()) {
+                found.add(m.group(2));
+            }
+            return found;
+        }
+        Document doc = fileName.endsWith(".svg") ? Jsoup.parse(text, "", Parser.xmlParser()) : Jsoup.parse(text);
+        for (Element e : doc.getAllElements()) {
+            for (Attribute a : e.attributes()) {
+                if (LINK_ATTRIBUTES.contains(a.getKey().toLowerCase(java.util.Locale.ROOT))) {
+                    found.add(a.getValue());
+                }
+            }
+        }
+        return found;
     }
 
     /** Why a local link is broken, or null if it is fine. */
@@ -136,9 +166,14 @@ public final class LinkAudit {
             return cached;
         }
         Set<String> ids = new HashSet<>();
-        Matcher m = ANCHOR.matcher(Files.readString(file, StandardCharsets.UTF_8));
-        while (m.find()) {
-            ids.add(Markup.unescape(m.group(1) != null ? m.group(1) : m.group(2)));
+        String text = Files.readString(file, StandardCharsets.UTF_8);
+        Document doc = file.getFileName().toString().endsWith(".svg") ? Jsoup.parse(text, "", Parser.xmlParser())
+                : Jsoup.parse(text);
+        for (Element e : doc.select("[id]")) {
+            ids.add(e.id());
+        }
+        for (Element e : doc.select("a[name]")) {
+            ids.add(e.attr("name"));
         }
         anchorCache.put(file, ids);
         return ids;

@@ -1,20 +1,57 @@
 package dev.noninertial.site;
 
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import java.util.Locale;
+
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.jsoup.parser.Parser;
 
 /**
- * The few text operations the generator needs on HTML written by hand: escaping, reading back
- * character references, dropping tags, and making anchor names.
+ * The few HTML operations the generator needs, all through a real HTML parser (jsoup): parsing a
+ * hand-written fragment, escaping, reading back character references, the text of a piece, and
+ * anchor names.
  *
  * <p>Thread-safe: stateless.
  */
 public final class Markup {
 
-    private static final Pattern TAG = Pattern.compile("<[^>]*>");
-    private static final Pattern NUMERIC = Pattern.compile("&#(x?)([0-9a-fA-F]+);");
-
     private Markup() {
+    }
+
+    /**
+     * Parses a body fragment as a browser would, keeping the author's white space and layout
+     * when written back ({@link #html(Element)}).
+     *
+     * @param html a body fragment
+     * @return the document; the fragment is the content of its body
+     */
+    public static Document parseFragment(String html) {
+        Document doc = Jsoup.parseBodyFragment(html);
+        doc.outputSettings().prettyPrint(false).charset("UTF-8");
+        return doc;
+    }
+
+    /**
+     * Parses a complete HTML document (for example a generated page).
+     *
+     * @param html document text
+     * @return the document
+     */
+    public static Document parseDocument(String html) {
+        Document doc = Jsoup.parse(html);
+        doc.outputSettings().prettyPrint(false).charset("UTF-8");
+        return doc;
+    }
+
+    /**
+     * The inner HTML of an element as written back by the parser.
+     *
+     * @param element an element, typically a fragment's body
+     * @return its content as HTML
+     */
+    public static String html(Element element) {
+        return element.html();
     }
 
     /**
@@ -28,26 +65,13 @@ public final class Markup {
     }
 
     /**
-     * Reads back the character references that appear in hand-written pages: the five XML ones,
-     * {@code &nbsp;}, and numeric references.
+     * Reads back every character reference, named or numeric, as the HTML standard defines them.
      *
      * @param html text with references
      * @return plain text
      */
     public static String unescape(String html) {
-        if (html.indexOf('&') < 0) {
-            return html;
-        }
-        Matcher m = NUMERIC.matcher(html);
-        StringBuilder b = new StringBuilder();
-        while (m.find()) {
-            int code = Integer.parseInt(m.group(2), m.group(1).isEmpty() ? 10 : 16);
-            m.appendReplacement(b, Matcher.quoteReplacement(new String(Character.toChars(code))));
-        }
-        m.appendTail(b);
-        // &amp; last, so that "&amp;lt;" reads back as "&lt;" and not as "<"
-        return b.toString().replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"")
-                .replace("&apos;", "'").replace("&nbsp;", "\u00a0").replace("&amp;", "&");
+        return html.indexOf('&') < 0 ? html : Parser.unescapeEntities(html, false);
     }
 
     /**
@@ -57,7 +81,7 @@ public final class Markup {
      * @return its plain text
      */
     public static String text(String html) {
-        return unescape(TAG.matcher(html).replaceAll("")).replaceAll("\\s+", " ").strip();
+        return Jsoup.parseBodyFragment(html).body().text().strip();
     }
 
     /**
@@ -67,7 +91,7 @@ public final class Markup {
      * @return the anchor name, "section" if nothing is left
      */
     public static String slug(String text) {
-        String s = text.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-")
+        String s = text.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-")
                 .replaceAll("(^-+|-+$)", "");
         return s.isEmpty() ? "section" : s;
     }

@@ -2,8 +2,10 @@ package dev.noninertial.site;
 
 import java.util.HashSet;
 import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.jsoup.select.Elements;
 
 /**
  * One page of the site: its output file name, its title (the text of its {@code <h1>}) and its
@@ -15,11 +17,6 @@ import java.util.regex.Pattern;
  */
 public record Page(String fileName, String title, String body) {
 
-    private static final Pattern H1 = Pattern.compile("<h1\\b[^>]*>(.*?)</h1>", Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
-    private static final Pattern HEADING = Pattern.compile("<(h[23])(\\b[^>]*)>(.*?)</\\1>",
-            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
-    private static final Pattern ID = Pattern.compile("\\bid\\s*=\\s*\"([^\"]*)\"");
-
     /**
      * Reads a page from a fragment that follows the site convention (one {@code <h1>} title).
      *
@@ -29,50 +26,50 @@ public record Page(String fileName, String title, String body) {
      * @throws IllegalArgumentException if the fragment has no {@code <h1>} or more than one
      */
     public static Page fromFragment(String fileName, String fragment) {
-        Matcher m = H1.matcher(fragment);
-        if (!m.find()) {
+        Document doc = Markup.parseFragment(fragment);
+        Elements h1 = doc.body().select("h1");
+        if (h1.isEmpty()) {
             throw new IllegalArgumentException("page " + fileName + " has no <h1> title (site convention: each"
                     + " fragment starts with one <h1>)");
         }
-        String title = Markup.text(m.group(1));
-        if (m.find()) {
+        String title = h1.get(0).text().strip();
+        if (h1.size() > 1) {
             throw new IllegalArgumentException("page " + fileName + " has more than one <h1>: '" + title
-                    + "' and '" + Markup.text(m.group(1)) + "'");
+                    + "' and '" + h1.get(1).text().strip() + "'");
         }
-        return new Page(fileName, title, withHeadingAnchors(fragment));
+        addHeadingAnchors(doc.body());
+        return new Page(fileName, title, Markup.html(doc.body()));
     }
 
     /**
      * Gives every {@code <h2>} and {@code <h3>} without an {@code id} one made from its text, so
-     * that sections can be linked; existing ids are kept.
+     * that sections can be linked; existing ids are kept, however they are quoted.
      *
      * @param html a body fragment
      * @return the fragment with anchors
      */
     static String withHeadingAnchors(String html) {
+        Document doc = Markup.parseFragment(html);
+        addHeadingAnchors(doc.body());
+        return Markup.html(doc.body());
+    }
+
+    private static void addHeadingAnchors(Element root) {
         Set<String> used = new HashSet<>();
-        Matcher ids = ID.matcher(html);
-        while (ids.find()) {
-            used.add(ids.group(1));
+        for (Element e : root.select("[id]")) {
+            used.add(e.id());
         }
-        Matcher m = HEADING.matcher(html);
-        StringBuilder b = new StringBuilder();
-        while (m.find()) {
-            String attributes = m.group(2);
-            if (ID.matcher(attributes).find()) {
-                m.appendReplacement(b, Matcher.quoteReplacement(m.group()));
+        for (Element h : root.select("h2, h3")) {
+            if (h.hasAttr("id")) {
                 continue;
             }
-            String base = Markup.slug(Markup.text(m.group(3)));
+            String base = Markup.slug(h.text());
             String id = base;
             for (int k = 2; used.contains(id); k++) {
                 id = base + "-" + k;
             }
             used.add(id);
-            m.appendReplacement(b, Matcher.quoteReplacement("<" + m.group(1) + " id=\"" + id + "\"" + attributes
-                    + ">" + m.group(3) + "</" + m.group(1) + ">"));
+            h.attr("id", id);
         }
-        m.appendTail(b);
-        return b.toString();
     }
 }

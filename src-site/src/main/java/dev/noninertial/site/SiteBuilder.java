@@ -6,10 +6,19 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
+
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
 
 /**
  * Builds the documentation site into a folder of static files that work offline:
@@ -28,8 +37,11 @@ import java.util.stream.Stream;
  */
 public final class SiteBuilder {
 
-    private static final Pattern H2 = Pattern.compile("<h2\\b[^>]*\\bid=\"([^\"]*)\"[^>]*>(.*?)</h2>",
-            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
+    /** A code text that names a type, optionally with a member: {@code Placement}, {@code Placement.toBase(...)}. */
+    private static final Pattern TYPE_REFERENCE = Pattern.compile(
+            "([A-Z][A-Za-z0-9]*)(?:[.#][A-Za-z_][A-Za-z0-9_]*(?:\\(.*\\))?)?");
+    private static final Pattern PUBLIC_TYPE = Pattern.compile(
+            "(?m)^public\\s+(?:(?:final|abstract|sealed|non-sealed|static|strictfp)\\s+)*(?:class|interface|record|enum|@interface)\\s+([A-Z][A-Za-z0-9]*)");
 
     private SiteBuilder() {
     }
@@ -74,28 +86,51 @@ public final class SiteBuilder {
         if (!Files.isDirectory(pagesDir)) {
             throw new IllegalStateException("missing page folder " + pagesDir);
         }
+        Path root = source.getParent();
+        String version = System.getProperty("site.version", PageLayout.DEFAULT_VERSION);
         deleteTree(output);
         Files.createDirectories(output);
 
         List<Page> pages = new ArrayList<>();
+        Map<String, String> sources = new HashMap<>();
         for (Path f : list(pagesDir, ".html")) {
             String name = f.getFileName().toString();
-            if (name.equals("accuracy.html")) {
-                throw new IllegalStateException("pages/accuracy.html must not exist: accuracy.html is assembled"
-                        + " from the fragments in accuracy/");
+            if (name.equals("accuracy.html") || GENERATED.contains(name)) {
+                throw new IllegalStateException("pages/" + name + " must not exist: " + name + " is written by the"
+                        + " generator" + (name.equals("accuracy.html") ? " from the fragments in accuracy/" : ""));
             }
-            pages.add(Page.fromFragment(name, Files.readString(f, StandardCharsets.UTF_8)));
+            String fragment = Files.readString(f, StandardCharsets.UTF_8);
+            if (fragment.contains(SourceList.MARKER)) {
+                Path list = source.getParent().resolve("REFERENCES.md");
+                fragment = fragment.replace(SourceList.MARKER,
+                        SourceList.toHtml(Files.readString(list, StandardCharsets.UTF_8)));
+                sources.put(name, "src-site/pages/" + name + " and REFERENCES.md");
+            }
+            if (name.equals("benchmarks.html")) {
+                fragment = BenchmarkPage.fill(fragment, root, source.resolve("data").resolve("jmh"));
+            }
+            pages.add(Page.fromFragment(name, fragment));
+            sources.putIfAbsent(name, "src-site/pages/" + name);
         }
         pages.add(accuracyPage(source.resolve("accuracy")));
+        sources.put("accuracy.html", "src-site/accuracy/*.html");
         if (pages.stream().noneMatch(p -> p.fileName().equals("benchmarks.html"))) {
             pages.add(Page.fromFragment("benchmarks.html", BENCHMARKS_PLACEHOLDER));
         }
+        pages.addAll(generatedPages(root, version, pages, sources));
 
-        PageLayout layout = PageLayout.of(pages);
+        Map<String, String> apiTypes = apiTypes(root);
+        List<Page> finished = new ArrayList<>();
+        for (Page p : pages) {
+            finished.add(finish(p, apiTypes));
+        }
+        PageLayout layout = PageLayout.of(finished, version, sources);
         for (Page p : layout.pages()) {
             Files.writeString(output.resolve(p.fileName()), layout.render(p), StandardCharsets.UTF_8);
         }
+        Files.writeString(output.resolve("search-index.js"), SearchIndex.script(layout.pages()), StandardCharsets.UTF_8);
         Files.writeString(output.resolve("style.css"), PageLayout.styleSheet(), StandardCharsets.UTF_8);
+        Files.writeString(output.resolve("site.js"), PageLayout.script(), StandardCharsets.UTF_8);
         copyStatic(source.resolve("static"), output);
         if (Files.isDirectory(source.resolve("data"))) {
             copyStatic(source.resolve("data"), output.resolve("data"));
@@ -107,7 +142,7 @@ public final class SiteBuilder {
         System.out.printf("plots (%.1f s): %s%n", (System.nanoTime() - t0) * 1e-9, String.join(", ", plots));
 
         long t1 = System.nanoTime();
-        ApiReference.Result api = ApiReference.write(source.getParent(), output.resolve("api"), classPath);
+        ApiReference.Result api = ApiReference.write(root, output.resolve("api"), classPath);
         System.out.printf("API reference (%.1f s): %d packages %s%n", (System.nanoTime() - t1) * 1e-9,
                 api.packages().size(), api.packages());
         Path warningsFile = output.getParent().resolve("javadoc-warnings.txt");
@@ -127,6 +162,99 @@ public final class SiteBuilder {
                 + links.external() + " external link(s) not followed");
     }
 
+    /** Pages the generator writes itself; a fragment of the same name in pages/ is refused. */
+    static final List<String> GENERATED = List.of("install.html", "changelog.html", "license.html", "source.html",
+            "search.html");
+
+    /**
+     * The pages made from the repository's own files: install, changelog, license, references
+     * (from REFERENCES.md, unless {@code pages/references.html} exists), source and search.
+     */
+    static List<Page> generatedPages(Path root, String version, List<Page> existing, Map<String, String> sources)
+            throws IOException {
+        List<Page> out = new ArrayList<>();
+        out.add(Page.fromFragment("install.html", GeneratedPages.install(version)));
+        sources.put("install.html", "src-site/src/main/java/dev/noninertial/site/GeneratedPages.java");
+        Path changelog = root.resolve("CHANGELOG.md");
+        if (Files.isRegularFile(changelog)) {
+            out.add(Page.fromFragment("changelog.html", MarkdownText.toHtml(Files.readString(changelog,
+                    StandardCharsets.UTF_8)).replaceFirst("<h1>Changelog</h1>", "<h1>Changelog</h1>")));
+            sources.put("changelog.html", "CHANGELOG.md");
+        }
+        Path license = root.resolve("LICENSE");
+        if (Files.isRegularFile(license)) {
+            out.add(Page.fromFragment("license.html", GeneratedPages.license(Files.readString(license,
+                    StandardCharsets.UTF_8))));
+            sources.put("license.html", "LICENSE");
+        }
+        Path references = root.resolve("REFERENCES.md");
+        if (existing.stream().noneMatch(p -> p.fileName().equals("references.html")) && Files.isRegularFile(references)) {
+            String html = MarkdownText.toHtml(Files.readString(references, StandardCharsets.UTF_8));
+            out.add(Page.fromFragment("references.html", html.replaceFirst("<h1>[^<]*</h1>", "<h1>References</h1>")));
+            sources.put("references.html", "REFERENCES.md");
+        }
+        out.add(Page.fromFragment("source.html", GeneratedPages.source(System.getProperty("site.repository", ""))));
+        sources.put("source.html", "src-site/src/main/java/dev/noninertial/site/GeneratedPages.java");
+        out.add(Page.fromFragment("search.html", GeneratedPages.SEARCH));
+        return out;
+    }
+
+    /**
+     * The last touches on a page body: every table in a box that scrolls sideways on a narrow
+     * screen, and every {@code <code>} that names a public type of the library (outside code
+     * blocks, links and headings) linked to its page of the API reference.
+     */
+    static Page finish(Page page, Map<String, String> apiTypes) {
+        Document doc = Markup.parseFragment(page.body());
+        for (Element table : doc.body().select("table")) {
+            Element parent = table.parent();
+            if (parent == null || !parent.hasClass("scroll")) {
+                table.wrap("<div class=\"scroll\"></div>");
+            }
+        }
+        for (Element code : doc.body().select("code")) {
+            if (code.parents().stream().anyMatch(e -> e.normalName().matches("pre|a|h[1-6]"))) {
+                continue;
+            }
+            Matcher m = TYPE_REFERENCE.matcher(code.text().strip());
+            if (m.matches() && apiTypes.containsKey(m.group(1))) {
+                code.wrap("<a class=\"api-link\" href=\"" + apiTypes.get(m.group(1)) + "\"></a>");
+            }
+        }
+        return new Page(page.fileName(), page.title(), Markup.html(doc.body()));
+    }
+
+    /** Simple name of each public top-level type of the library modules, to its API page; ambiguous names left out. */
+    static Map<String, String> apiTypes(Path root) throws IOException {
+        Map<String, String> found = new TreeMap<>();
+        Set<String> ambiguous = new HashSet<>();
+        for (String module : ApiReference.LIBRARY_MODULES) {
+            Path src = root.resolve(module).resolve("src/main/java");
+            if (!Files.isDirectory(src)) {
+                continue;
+            }
+            try (Stream<Path> files = Files.walk(src)) {
+                for (Path f : (Iterable<Path>) files.filter(x -> x.toString().endsWith(".java"))::iterator) {
+                    String name = f.getFileName().toString().replace(".java", "");
+                    if (name.contains("-")) {
+                        continue;
+                    }
+                    Matcher m = PUBLIC_TYPE.matcher(Files.readString(f, StandardCharsets.UTF_8));
+                    if (!m.find() || !m.group(1).equals(name)) {
+                        continue;
+                    }
+                    String page = "api/" + src.relativize(f).toString().replace('\\', '/').replace(".java", ".html");
+                    if (found.containsKey(name) && !found.get(name).equals(page)) {
+                        ambiguous.add(name);
+                    }
+                    found.put(name, page);
+                }
+            }
+        }
+        ambiguous.forEach(found::remove);
+        return new LinkedHashMap<>(found);
+    }
+
     /** The accuracy report: an introduction, a contents list and the fragments in file-name order. */
     static Page accuracyPage(Path folder) throws IOException {
         StringBuilder body = new StringBuilder();
@@ -134,11 +262,12 @@ public final class SiteBuilder {
         List<Path> fragments = Files.isDirectory(folder) ? list(folder, ".html") : List.of();
         for (Path f : fragments) {
             String html = Files.readString(f, StandardCharsets.UTF_8);
-            if (!Pattern.compile("<h2\\b", Pattern.CASE_INSENSITIVE).matcher(html).find()) {
+            Document parsed = Markup.parseFragment(html);
+            if (parsed.body().select("h2").isEmpty()) {
                 throw new IllegalStateException("accuracy fragment " + f.getFileName()
                         + " has no <h2> heading (site convention: each fragment starts with one <h2>)");
             }
-            if (Pattern.compile("<h1\\b", Pattern.CASE_INSENSITIVE).matcher(html).find()) {
+            if (!parsed.body().select("h1").isEmpty()) {
                 throw new IllegalStateException("accuracy fragment " + f.getFileName()
                         + " has an <h1>: the page title belongs to the report; start the fragment with <h2>");
             }
@@ -154,10 +283,9 @@ public final class SiteBuilder {
             body.append("<p class=\"note\">No area has reported measured figures yet.</p>\n");
         } else {
             body.append("<nav class=\"toc\" aria-label=\"Areas\"><ul>\n");
-            Matcher m = H2.matcher(merged);
-            while (m.find()) {
-                body.append("<li><a href=\"#").append(m.group(1)).append("\">").append(Markup.text(m.group(2)))
-                    .append("</a></li>\n");
+            for (Element h : Markup.parseFragment(merged).body().select("h2[id]")) {
+                body.append("<li><a href=\"#").append(Markup.escape(h.id())).append("\">")
+                    .append(Markup.escape(h.text().strip())).append("</a></li>\n");
             }
             body.append("</ul></nav>\n").append(merged);
         }

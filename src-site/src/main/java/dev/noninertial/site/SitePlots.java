@@ -16,6 +16,7 @@ import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
 import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.units.Units;
 
 /**
  * The plots of the site, computed by calling the library when the site is built, so that a
@@ -24,7 +25,7 @@ import dev.noninertial.frames.motion.Motions;
 public final class SitePlots {
 
     /** Roll amplitude of the demonstration deck (rad): 12 degrees. */
-    static final double ROLL_AMPLITUDE = Math.toRadians(12.0);
+    static final double ROLL_AMPLITUDE = Units.degrees(12.0);
     /** Roll and heave period of the demonstration deck (s). */
     static final double PERIOD = 9.0;
     /** Heave amplitude of the demonstration deck (m). */

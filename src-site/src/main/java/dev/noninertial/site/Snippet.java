@@ -5,6 +5,12 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.jsoup.nodes.Node;
+import org.jsoup.nodes.TextNode;
+import org.jsoup.parser.Parser;
+
 /**
  * A Java code block of the documentation, with where it came from, so that the snippet test can
  * run it and name the page and block when it fails.
@@ -18,13 +24,6 @@ import java.util.regex.Pattern;
  */
 public record Snippet(String origin, int index, int line, String code, String expectedOutput) {
 
-    private static final Pattern HTML_BLOCK = Pattern.compile(
-            "<pre\\b[^>]*>\\s*<code\\b[^>]*\\bclass=\"[^\"]*\\blanguage-java\\b[^\"]*\"[^>]*>(.*?)</code>\\s*</pre>",
-            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
-    private static final Pattern TAG = Pattern.compile("<[^>]*>");
-    private static final Pattern OUTPUT_BLOCK = Pattern.compile(
-            "\\s*<pre\\b[^>]*\\bclass=\"[^\"]*\\boutput\\b[^\"]*\"[^>]*>\\s*<code\\b[^>]*>(.*?)</code>\\s*</pre>",
-            Pattern.DOTALL | Pattern.CASE_INSENSITIVE);
     private static final Pattern MARKDOWN_BLOCK = Pattern.compile("(?m)^```java[ \\t]*\\n(.*?)^```[ \\t]*$",
             Pattern.DOTALL);
 
@@ -36,18 +35,34 @@ public record Snippet(String origin, int index, int line, String code, String ex
      * @return the blocks in page order
      */
     public static List<Snippet> fromHtml(String origin, String html) {
+        Parser parser = Parser.htmlParser().setTrackPosition(true);
+        Document doc = parser.parseInput(html, "");
         List<Snippet> found = new ArrayList<>();
-        Matcher m = HTML_BLOCK.matcher(html);
-        while (m.find()) {
-            String code = Markup.unescape(TAG.matcher(m.group(1)).replaceAll(""));
-            Matcher out = OUTPUT_BLOCK.matcher(html).region(m.end(), html.length());
+        for (Element code : doc.select("pre > code.language-java")) {
+            Element pre = code.parent();
             String expected = null;
-            if (out.lookingAt()) {
-                expected = Markup.unescape(TAG.matcher(out.group(1)).replaceAll(""));
+            Element next = nextElementAfterBlanks(pre);
+            if (next != null && next.normalName().equals("pre") && next.hasClass("output")) {
+                Element out = next.selectFirst("> code");
+                expected = (out == null ? next : out).wholeText();
             }
-            found.add(new Snippet(origin, found.size() + 1, lineOf(html, m.start(1)), code, expected));
+            int line = code.sourceRange().isTracked() ? code.sourceRange().end().lineNumber() : 1;
+            found.add(new Snippet(origin, found.size() + 1, line, code.wholeText(), expected));
         }
         return found;
+    }
+
+    /** The element right after this one when only white space stands between them, else null. */
+    private static Element nextElementAfterBlanks(Element e) {
+        for (Node n = e.nextSibling(); n != null; n = n.nextSibling()) {
+            if (n instanceof Element el) {
+                return el;
+            }
+            if (!(n instanceof TextNode t) || !t.isBlank()) {
+                return null;
+            }
+        }
+        return null;
     }
 
     /**

@@ -16,6 +16,7 @@ import dev.noninertial.frames.dynamics.Trajectory;
 import dev.noninertial.frames.dynamics.TrajectoryEvent;
 import dev.noninertial.frames.dynamics.TrajectorySolver;
 import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.units.Units;
 
 /**
  * Plots that integrate motion on the rotating Earth with the library's {@link TrajectorySolver}:
@@ -40,7 +41,7 @@ final class TrajectoryPlots {
     /** Launch speed of the demonstration trajectory (m/s). */
     static final double LAUNCH_SPEED = 700.0;
     /** Launch elevation of the demonstration trajectory (rad). */
-    static final double ELEVATION = Math.toRadians(45.0);
+    static final double ELEVATION = Units.degrees(45.0);
 
     /** Length of the demonstration pendulum (m). */
     static final double PENDULUM_LENGTH = 40.0;
@@ -49,7 +50,7 @@ final class TrajectoryPlots {
     /** Time span of the Foucault plot (s). */
     static final double PENDULUM_SPAN = 3600.0;
     /** Latitude of the (invented) hall holding the pendulum (rad). */
-    static final double PENDULUM_LATITUDE = Math.toRadians(52.0);
+    static final double PENDULUM_LATITUDE = Units.degrees(52.0);
 
     private TrajectoryPlots() {
     }
@@ -109,13 +110,13 @@ final class TrajectoryPlots {
                 .withHorizontalAxis("geodetic latitude", "deg")
                 .withVerticalAxis("range change", "m");
         for (int k = 0; k < azimuthsDeg.length; k++) {
-            double az = Math.toRadians(azimuthsDeg[k]);
+            double az = Units.degrees(azimuthsDeg[k]);
             Vector3D forward = new Vector3D(Math.sin(az), Math.cos(az), 0);
             Vector3D right = new Vector3D(Math.cos(az), -Math.sin(az), 0);
             double[] d = new double[n];
             double[] r = new double[n];
             for (int i = 0; i < n; i++) {
-                double lat = Math.toRadians(lats[i]);
+                double lat = Units.degrees(lats[i]);
                 Vector3D spun = impact(lat, az, EARTH_RATE);
                 Vector3D still = impact(lat, az, 0.0);
                 Vector3D diff = spun.subtract(still);
@@ -156,7 +157,7 @@ final class TrajectoryPlots {
         for (int i = 0; i < marks.size(); i++) {
             Vector3D p = marks.get(i).state().state().position();
             // swing plane azimuth modulo 180 deg, unwrapped continuously from north
-            double a = Math.toDegrees(Math.atan2(p.getX(), p.getY()));
+            double a = Units.toDegrees(Math.atan2(p.getX(), p.getY()));
             while (a - previous > 90) {
                 a -= 180;
             }
@@ -168,7 +169,7 @@ final class TrajectoryPlots {
             az[i + 1] = a;
         }
         double[] line = new double[t.length];
-        double rate = Math.toDegrees(EARTH_RATE * Math.sin(PENDULUM_LATITUDE));
+        double rate = Units.toDegrees(EARTH_RATE * Math.sin(PENDULUM_LATITUDE));
         for (int i = 0; i < t.length; i++) {
             line[i] = rate * t[i] * 60.0;
         }

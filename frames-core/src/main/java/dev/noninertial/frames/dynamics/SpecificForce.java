@@ -45,6 +45,61 @@ public interface SpecificForce {
     Vector3D at(double time, PointState state);
 
     /**
+     * The same force on primitives: the state is read from {@code state[stateOffset, stateOffset + 6)}
+     * (position x, y, z in m, velocity in m/s, seen in and resolved in the integration frame, the
+     * first six doubles of the {@link PointState#COMPONENTS} layout) and the force (m/s^2, in the
+     * integration frame's axes) is written to {@code target[targetOffset, targetOffset + 3)}.
+     *
+     * <p>When to use it: hot paths on primitive arrays (bulk sensor readings, for example). The
+     * default implementation builds a {@link PointState} and calls {@link #at(double, PointState)},
+     * so it <em>allocates</em> per call; {@link #uniform(Vector3D)} and the Earth's gravitation of
+     * the geodesy module override it and allocate nothing. A user force on a hot path should
+     * override it too, writing exactly the values {@link #at(double, PointState)} would return.
+     *
+     * @param time time (s from the user's epoch)
+     * @param state position and velocity in the integration frame (at least 6 doubles from {@code stateOffset})
+     * @param stateOffset index of the position's x component
+     * @param target receives the force (3 doubles from {@code targetOffset})
+     * @param targetOffset index where the x component is written
+     * @throws IllegalArgumentException if a range does not fit its array
+     * @throws IllegalStateException if the force returns null
+     */
+    default void at(double time, double[] state, int stateOffset, double[] target, int targetOffset) {
+        checkPrimitive(state, stateOffset, target, targetOffset);
+        PointState s = PointState.of(new Vector3D(state[stateOffset], state[stateOffset + 1], state[stateOffset + 2]),
+                new Vector3D(state[stateOffset + 3], state[stateOffset + 4], state[stateOffset + 5]));
+        Vector3D f = at(time, s);
+        if (f == null) {
+            throw new IllegalStateException("force " + this + " returned null at t = " + time);
+        }
+        target[targetOffset] = f.getX();
+        target[targetOffset + 1] = f.getY();
+        target[targetOffset + 2] = f.getZ();
+    }
+
+    /**
+     * Range checks of {@link #at(double, double[], int, double[], int)}, for implementations.
+     *
+     * @param state state array (6 doubles used)
+     * @param stateOffset index of the position's x component
+     * @param target result array (3 doubles written)
+     * @param targetOffset index where the x component is written
+     * @throws IllegalArgumentException if a range does not fit its array
+     */
+    static void checkPrimitive(double[] state, int stateOffset, double[] target, int targetOffset) {
+        Arguments.nonNull("state", state);
+        Arguments.nonNull("target", target);
+        if (stateOffset < 0 || stateOffset > state.length - 6) {
+            throw new IllegalArgumentException("stateOffset must be in [0, " + (state.length - 6)
+                    + "] for a state array of length " + state.length + ", got " + stateOffset);
+        }
+        if (targetOffset < 0 || targetOffset > target.length - 3) {
+            throw new IllegalArgumentException("targetOffset must be in [0, " + (target.length - 3)
+                    + "] for a target array of length " + target.length + ", got " + targetOffset);
+        }
+    }
+
+    /**
      * The sum of this force and another one.
      *
      * @param other the force to add (same integration frame)
@@ -66,8 +121,7 @@ public interface SpecificForce {
      * @throws IllegalArgumentException if a component is NaN or infinite
      */
     static SpecificForce uniform(Vector3D vector) {
-        Vector3D v = Arguments.finite("vector", vector);
-        return (time, state) -> v;
+        return new UniformForce(Arguments.finite("vector", vector));
     }
 
     /**

@@ -88,6 +88,7 @@ public final class TrajectoryEvent {
      * @throws IllegalArgumentException if {@code up} is zero or not finite, or the height not finite
      */
     public static TrajectoryEvent groundImpact(Vector3D up, double groundHeight) {
+        Arguments.finite("groundHeight", groundHeight);
         return heightCrossing("ground impact", up, groundHeight).fallingOnly().stopping();
     }
 

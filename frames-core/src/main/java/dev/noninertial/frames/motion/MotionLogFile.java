@@ -15,6 +15,7 @@ import java.util.Map;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 
 import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.units.Units;
 
 /**
  * Reader of the motion log text format (documented on the site page "Sampled motion"): lines
@@ -46,14 +47,13 @@ final class MotionLogFile {
     private enum Kind {
         TIME(new String[] {"s", "ms"}, new double[] {1.0, 1e-3}),
         LENGTH(new String[] {"m", "km"}, new double[] {1.0, 1e3}),
-        // knot: 1852 m per hour (international nautical mile, exact; from memory)
-        SPEED(new String[] {"m/s", "km/h", "kn"}, new double[] {1.0, 1.0 / 3.6, 1852.0 / 3600.0}),
+        SPEED(new String[] {"m/s", "km/h", "kn"}, new double[] {1.0, 1.0 / 3.6, Units.KNOT}),
         UNIT(new String[] {"1"}, new double[] {1.0}),
-        ANGLE(new String[] {"rad", "deg"}, new double[] {1.0, Math.PI / 180.0}),
-        RATE(new String[] {"rad/s", "deg/s"}, new double[] {1.0, Math.PI / 180.0});
+        ANGLE(new String[] {"rad", "deg"}, new double[] {1.0, Units.degrees(1.0)}),
+        RATE(new String[] {"rad/s", "deg/s"}, new double[] {1.0, Units.degreesPerSecond(1.0)});
 
-        final String[] units;
-        final double[] factors;
+        private final String[] units;
+        private final double[] factors;
 
         Kind(String[] units, double[] factors) {
             this.units = units;

@@ -38,6 +38,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion stationary(Vector3D offset) {
+        Arguments.finite("offset", offset);
         return stationary(offset, Rotation.IDENTITY);
     }
 
@@ -49,6 +50,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion stationary(Vector3D offset, Rotation orientation) {
+        Arguments.finite("offset", offset);
         return new Fixed(Placement.stationary(offset, orientation));
     }
 
@@ -61,6 +63,7 @@ public final class Motions {
      * @return the motion
      */
     public static Motion spin(Vector3D axis, double angleAtZero, double rate) {
+        Arguments.finite("rate", rate);
         return spinUp(axis, angleAtZero, rate, 0.0);
     }
 
@@ -136,6 +139,53 @@ public final class Motions {
                 Arguments.finite("amplitude", amplitude),
                 Arguments.finite("angularFrequency", angularFrequency),
                 Arguments.finite("phase", phase));
+    }
+
+    /**
+     * A turn about a fixed axis through B's origin whose angle follows a profile (rate table,
+     * centrifuge arm): angle, rate and angular acceleration are the profile's, so the rates are the
+     * derivatives of the angle by construction. Times outside the profile's span are refused.
+     *
+     * @param axis turning axis in B (any non-zero length)
+     * @param profile angle over time (rad, positive by the right-hand rule about {@code axis})
+     * @return the motion
+     */
+    public static Motion turning(Vector3D axis, SpinProfile profile) {
+        return new TurningMotion(Arguments.unitAxis("axis", axis), Arguments.nonNull("profile", profile));
+    }
+
+    /**
+     * Motions one after another in time: {@code motions[0]} before {@code joinTimes[0]},
+     * {@code motions[i]} from {@code joinTimes[i - 1]} to {@code joinTimes[i]}, the last one from
+     * the last join on (at a join, the later motion). Every motion is evaluated at the same,
+     * global time. At each join the two motions must agree in origin, origin velocity,
+     * orientation and angular velocity within 1e-9 relative (floor 1 m, 1 m/s, 1 rad/s, and
+     * 1e-9 rad for the orientation); accelerations may jump.
+     *
+     * @param joinTimes switching times (s), finite, strictly increasing, one fewer than the motions
+     * @param motions the motions in order, at least two
+     * @return the motion
+     * @throws IllegalArgumentException if the counts do not match, a time is refused, or a join is
+     *         discontinuous (the message names the join, the quantity and both values)
+     */
+    public static Motion sequence(double[] joinTimes, Motion... motions) {
+        Arguments.nonNull("joinTimes", joinTimes);
+        Arguments.nonNull("motions", motions);
+        if (motions.length < 2 || joinTimes.length != motions.length - 1) {
+            throw new IllegalArgumentException("motions must hold at least two motions and joinTimes one fewer, got "
+                    + motions.length + " motions and " + joinTimes.length + " join times");
+        }
+        for (int i = 0; i < motions.length; i++) {
+            Arguments.nonNull("motions[" + i + "]", motions[i]);
+        }
+        for (int i = 0; i < joinTimes.length; i++) {
+            Arguments.finite("joinTimes[" + i + "]", joinTimes[i]);
+            if (i > 0 && !(joinTimes[i] > joinTimes[i - 1])) {
+                throw new IllegalArgumentException("joinTimes must increase strictly: joinTimes[" + i + "] = "
+                        + joinTimes[i] + " s after joinTimes[" + (i - 1) + "] = " + joinTimes[i - 1] + " s");
+            }
+        }
+        return new MotionSequence(joinTimes.clone(), motions.clone());
     }
 
     /** Placement for a turn by angle th about unit axis n, with rate th1 and acceleration th2. */

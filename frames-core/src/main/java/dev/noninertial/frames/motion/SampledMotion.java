@@ -59,7 +59,7 @@ import dev.noninertial.frames.Placement;
  *
  * <h2>Refusals</h2>
  * Construction refuses, naming the sample: fewer than two samples, times that are not finite or
- * do not increase strictly, non-finite values, quaternions whose norm differs from 1 by more than
+ * do not increase strictly or are closer than {@link #MIN_SAMPLE_INTERVAL}, non-finite values, quaternions whose norm differs from 1 by more than
  * {@link Orientations#UNIT_QUATERNION_TOLERANCE} (those within are normalised), and attitudes that
  * turn by more than {@link #MAX_TURN_BETWEEN_SAMPLES} radians between consecutive samples (such a
  * record is under-sampled: the sense of the turn is ambiguous). Queries before the first or after
@@ -89,6 +89,12 @@ public final class SampledMotion implements Motion, Serializable {
 
     /** Largest turn of the attitude between consecutive samples, in radians (90 degrees). */
     public static final double MAX_TURN_BETWEEN_SAMPLES = 0.5 * Math.PI;
+
+    /**
+     * Smallest interval between consecutive sample times, in seconds: the interpolation divides by
+     * the cube of the interval, which must stay a normal number (1e-300).
+     */
+    public static final double MIN_SAMPLE_INTERVAL = 1e-100;
 
     private static final long serialVersionUID = 1L;
 
@@ -138,6 +144,7 @@ public final class SampledMotion implements Motion, Serializable {
         Arguments.nonNull("times", times);
         Arguments.nonNull("positions", positions);
         Arguments.nonNull("quaternions", quaternions);
+        checkSampleCount(times);
         checkLength("positions", positions.length, 3, times.length);
         checkLength("quaternions", quaternions.length, 4, times.length);
         return build(times.clone(), positions.clone(), quaternions.clone(), null, null,
@@ -161,6 +168,7 @@ public final class SampledMotion implements Motion, Serializable {
         Arguments.nonNull("times", times);
         Arguments.nonNull("positions", positions);
         Arguments.nonNull("yawPitchRoll", yawPitchRoll);
+        checkSampleCount(times);
         checkLength("positions", positions.length, 3, times.length);
         checkLength("yawPitchRoll", yawPitchRoll.length, 3, times.length);
         double[] q = new double[4 * times.length];
@@ -723,6 +731,12 @@ public final class SampledMotion implements Motion, Serializable {
         return "sample " + i;
     }
 
+    private static void checkSampleCount(double[] times) {
+        if (times.length < 2) {
+            throw new IllegalArgumentException("times must hold at least 2 samples, got " + times.length);
+        }
+    }
+
     private static void checkLength(String name, int length, int perSample, int samples) {
         if (length != perSample * samples) {
             throw new IllegalArgumentException(name + " must hold " + perSample + " values per sample, "
@@ -757,6 +771,11 @@ public final class SampledMotion implements Motion, Serializable {
             double t = times[i];
             if (!Double.isFinite(t)) {
                 throw new IllegalArgumentException(label.apply(i) + ": time must be finite, got " + t);
+            }
+            if (i > 0 && t > times[i - 1] && !(t - times[i - 1] >= MIN_SAMPLE_INTERVAL)) {
+                throw new IllegalArgumentException(label.apply(i) + ": time " + t + " s is only " + (t - times[i - 1])
+                        + " s after " + label.apply(i - 1) + "; consecutive sample times must be at least "
+                        + MIN_SAMPLE_INTERVAL + " s apart (the interpolation divides by the cube of the interval)");
             }
             if (i > 0 && !(t > times[i - 1])) {
                 throw new IllegalArgumentException(label.apply(i) + ": time " + t + " s is not after the time "

@@ -18,6 +18,7 @@ import dev.noninertial.frames.motion.Motions;
  * disk (Taylor, Classical Mechanics, ch. 9): a point held at radius r by a real centripetal force
  * -w^2 r stays at rest on the disk, feels a centrifugal term w^2 r outward and no Coriolis or
  * Euler term; a point moving with the disk's rim speed shows a Coriolis term 2 w v.
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class BreakdownTest {
 
@@ -36,6 +37,7 @@ class BreakdownTest {
         for (TrajectorySample s : samples) {
             FictitiousAccelerations f = s.fictitious();
             // w^2 r outward (Taylor ch. 9); rounding only, 1e-12 relative
+            // sources: REFERENCES.md, Analytic results of mechanics
             assertEquals(w * w * r, f.centrifugal().getX(), 1e-9 * w * w * r);
             assertEquals(-w * w * r, s.realForce().getX(), 1e-9 * w * w * r);
             assertEquals(0.0, f.coriolis().getNorm(), 1e-9);
@@ -64,6 +66,7 @@ class BreakdownTest {
         assertEquals(1.0e-3, samples.get(4).time(), 0.0);
         // at t = 0 the point at the axis moves along x: Coriolis -2 w x v = (0, -2 w v, 0)
         // (Taylor ch. 9: magnitude 2 w v, to the right of the motion for counter-clockwise spin)
+        // sources: REFERENCES.md, Analytic results of mechanics
         Vector3D coriolis = tr.fictitiousAt(0.0).coriolis();
         assertEquals(-2 * w * v, coriolis.getY(), 1e-15);
         assertEquals(0.0, coriolis.getX(), 1e-15);

@@ -13,10 +13,12 @@ import dev.noninertial.frames.PointState;
  * Earth's rate, lands east of the plumb point by (1/3) w g t^3 cos(lat), t = sqrt(2h/g), to
  * first order in w (Landau and Lifshitz, Mechanics, sec. 39, problem 1; Taylor, Classical
  * Mechanics, sec. 9.9).
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class EastwardDeflectionTest {
 
     // WGS84 rotation rate and semi-major axis, NIMA TR8350.2 (2000), Table 3.1
+    // sources: REFERENCES.md, Earth models
     static final double EARTH_RATE = 7.292115e-5;
     static final double RADIUS = 6378137.0;
 
@@ -48,6 +50,7 @@ class EastwardDeflectionTest {
         assertEquals(t, impactTime, 1e-6 * t);
         // the deflection to the south is of second order in w (Landau and Lifshitz, same
         // problem): it must point south and stay far below the east one (measured ~3e-4 of it)
+        // sources: REFERENCES.md, Analytic results of mechanics
         assertTrue(impact.getY() < 0 && -impact.getY() < 0.1 * expected, "south " + impact.getY());
     }
 }

@@ -24,6 +24,7 @@ import dev.noninertial.frames.PointState;
  * spring) change the rate by a relative amount of order (w / W)^2 = 4e-7, still negligible while
  * w is much smaller than W. The site sits on the spin axis: an offset from the
  * axis only adds a constant centrifugal pull, which the plumb-line choice of gravitation cancels.
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class FoucaultPendulumTest {
 

@@ -15,10 +15,11 @@ import dev.noninertial.frames.PointState;
  * centrifugal term twice and the point drifts away with exactly that extra acceleration,
  * w^2 d (d = distance from the spin axis), whose horizontal part points to the equator
  * (Taylor, Classical Mechanics, sec. 9.4: centrifugal w^2 d away from the axis).
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class GravitationPitfallTest {
 
-    static final double EARTH_RATE = 7.292115e-5;   // NIMA TR8350.2 (2000), Table 3.1
+    static final double EARTH_RATE = 7.292115e-5;   // NIMA TR8350.2 (2000), Table 3.1 (REFERENCES.md, Earth models)
     static final double RADIUS = 6378137.0;         // same table (spherical body of radius a)
 
     @Test

@@ -19,6 +19,7 @@ import dev.noninertial.frames.motion.Motions;
  * Every offered Hipparchus scheme solves the turntable puck (Newton's first law in the inertial
  * frame: a straight line, Taylor, Classical Mechanics, sec. 9.7) to its tolerance, and one solver
  * shared by several threads gives identical results (immutability of solver and frames).
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class SchemesTest {
 

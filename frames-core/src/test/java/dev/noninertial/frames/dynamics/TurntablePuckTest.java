@@ -15,6 +15,7 @@ import dev.noninertial.frames.motion.Motions;
  * frame (where Coriolis, centrifugal and Euler terms curl its path), moves on a straight line at
  * constant velocity in the inertial frame (Newton's first law; Taylor, Classical Mechanics,
  * sec. 9.7, the puck on a merry-go-round).
+ * <p>Sources: REFERENCES.md, Analytic results of mechanics.
  */
 class TurntablePuckTest {
 

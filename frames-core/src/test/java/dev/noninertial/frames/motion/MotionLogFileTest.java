@@ -52,8 +52,8 @@ class MotionLogFileTest {
 
     @Test
     void exampleRatesAgreeWithThoseDerivedFromAttitudesAlone() throws IOException {
-        // The file's body rates follow the z-y-x Euler-rate relation (Stevens & Lewis, Aircraft Control
-        // and Simulation, eq. 1.3-22; from memory). Dropping the rate columns, the rates derived from
+        // The file's body rates follow the z-y-x Euler-rate relation (REFERENCES.md, Attitude
+        // kinematics, where it is derived rather than quoted). Dropping the rate columns, the rates derived from
         // the yaw-pitch-roll samples must agree: this ties the library's "w in F axes" convention to
         // the aerospace body rates. Tolerance: 10 Hz interpolation of a 0.8 rad/s roll (h^4 error
         // ~ 1e-5 rad/s) plus the 1e-6 deg rounding of the angles divided by h (~ 2e-7 rad/s).
@@ -101,7 +101,7 @@ class MotionLogFileTest {
         // at a sample the measured velocity is the first derivative (the rows need not be consistent)
         Placement p = m.at(1.0);
         assertEquals(1000.0, p.origin().getX(), 1e-12);
-        // 1 kn = 1852 m / 3600 s (international nautical mile; from memory)
+        // 1 kn = 1852 m / 3600 s (REFERENCES.md, Units: the international nautical mile, exact)
         assertEquals(1852.0 / 3600.0, p.originVelocity().getX(), 1e-15);
         assertEquals(1.0, p.originVelocity().getY(), 1e-15);
         assertEquals(Math.toRadians(90), Orientations.toYawPitchRoll(p.orientation())[0], 1e-15);

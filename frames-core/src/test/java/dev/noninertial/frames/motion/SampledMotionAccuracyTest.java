@@ -14,8 +14,9 @@ import org.junit.jupiter.api.Test;
  * <p>Promised orders (the class comment of {@link SampledMotion}): a quintic Hermite matching
  * derivatives taken from local quartics: h^5 for position and attitude, h^4 for velocity and
  * angular velocity, h^3 for acceleration and angular acceleration. Standard interpolation theory
- * (e.g. de Boor, A Practical Guide to Splines, ch. II; from memory): an interpolant exact for
- * polynomials of degree k-1 has value error O(h^k) and loses one order per derivative. The check:
+ * (REFERENCES.md, Interpolation): an interpolant exact for polynomials of degree k-1 has value
+ * error O(h^k) and loses one order per derivative; the test measures the orders rather than
+ * taking them on trust. The check:
  * the observed order between two rates is at least the promised order minus 0.5 (margin for
  * the constant changing with h; common practice), unless both errors are already at the
  * rounding floor (1e3 ulp of the quantity's scale).

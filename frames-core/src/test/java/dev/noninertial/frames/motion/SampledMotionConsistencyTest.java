@@ -109,6 +109,7 @@ class SampledMotionConsistencyTest {
     void uniformSpinGivesTheTextbookAngularVelocityInFrameAxes() {
         // a frame turned by rate * t about n has w = rate * n, constant, and al = 0 (Landau & Lifshitz,
         // Mechanics, sec. 35); the axis is fixed so its F components equal its B components
+        // sources: REFERENCES.md, Analytic results of mechanics
         Vector3D n = new Vector3D(1, -2, 3).normalize();
         double rate = 0.7;
         double[] times = new double[601];

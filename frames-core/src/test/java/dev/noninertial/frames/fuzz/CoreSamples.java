@@ -1,0 +1,139 @@
+package dev.noninertial.frames.fuzz;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.Supplier;
+
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.RotationConvention;
+import org.hipparchus.geometry.euclidean.threed.RotationOrder;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.hipparchus.linear.MatrixUtils;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.ode.nonstiff.ClassicalRungeKuttaIntegrator;
+
+import dev.noninertial.frames.FramedState;
+import dev.noninertial.frames.Motion;
+import dev.noninertial.frames.Placement;
+import dev.noninertial.frames.PointState;
+import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.dispersion.DispersionModel;
+import dev.noninertial.frames.dispersion.DispersionStudy;
+import dev.noninertial.frames.dispersion.InputDistribution;
+import dev.noninertial.frames.dynamics.CrossingFunction;
+import dev.noninertial.frames.dynamics.SpecificForce;
+import dev.noninertial.frames.dynamics.Trajectory;
+import dev.noninertial.frames.dynamics.TrajectorySolver;
+import dev.noninertial.frames.motion.Motions;
+import dev.noninertial.frames.motion.SampledMotion;
+
+/**
+ * Valid values of the frames-core types for {@link ApiFuzz} (demo values, invented). Frames
+ * come from one small tree so that conversions between them are defined. Other modules start
+ * from {@link #table()} and add their own types.
+ */
+public final class CoreSamples {
+
+    /** Root of the sample tree. */
+    public static final ReferenceFrame ROOT = ReferenceFrame.inertialRoot("yard");
+    /** A spinning frame in the root. */
+    public static final ReferenceFrame DISK = ROOT.attach("disk", Motions.spin(new Vector3D(0, 0.1, 1), 0.2, 0.3));
+    /** A frame on the disk. */
+    public static final ReferenceFrame ARM = DISK.attach("arm", Motions.stationary(new Vector3D(1, 0, 0)));
+
+    /** A motion log of three samples over [0, 2] s. */
+    public static final String LOG = "t[s], x[m], y[m], z[m], q0[1], q1[1], q2[1], q3[1]\n"
+            + "0, 0, 0, 0, 1, 0, 0, 0\n1, 1, 0, 0, 1, 0, 0, 0\n2, 2, 0, 0, 1, 0, 0, 0\n";
+
+    private CoreSamples() {
+    }
+
+    private static Rotation turn() {
+        return new Rotation(RotationOrder.ZYX, RotationConvention.FRAME_TRANSFORM, 0.3, -0.2, 0.1);
+    }
+
+    private static Path logFile() {
+        try {
+            Path p = Files.createTempFile("fuzz-log", ".csv");
+            p.toFile().deleteOnExit();
+            Files.writeString(p, LOG, StandardCharsets.UTF_8);
+            return p;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static SampledMotion sampled() {
+        return SampledMotion.fromArrays(new double[] {0, 1, 2}, new double[] {0, 0, 0, 1, 0, 0, 2, 0, 0},
+                new double[] {1, 0, 0, 0, 1, 0, 0, 0, 1, 0, 0, 0});
+    }
+
+    private static double[] ramp(int n) {
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = 0.1 * i;
+        }
+        return r;
+    }
+
+    private static double[] identityPlacement() {
+        double[] p = new double[Placement.COMPONENTS];
+        Placement.identity().toArray(p, 0);
+        return p;
+    }
+
+    /** @return a new table of the core types */
+    public static SampleValues table() {
+        SampleValues s = new SampleValues();
+        s.add(Double.class, () -> 0.5, () -> 1.0, () -> 0.1, () -> 2.0, () -> 10.0, () -> 0.0, () -> -0.5,
+                () -> 100.0, () -> 1e-3, () -> 0.9);
+        s.add(Float.class, () -> 0.5f);
+        s.add(Integer.class, () -> 1, () -> 2, () -> 0, () -> 3, () -> 9, () -> 24, () -> 10);
+        s.add(Long.class, () -> 1L, () -> 0L, () -> 42L);
+        s.add(Boolean.class, () -> true, () -> false);
+        s.add(String.class, () -> "x", () -> "alpha", () -> "t");
+        s.add(double[].class, () -> new double[] {0, 1, 2}, () -> ramp(48), () -> new double[] {0, 0, 0, 1, 0, 0, 2, 0, 0},
+                () -> new double[] {1, 0, 0, 0, 1, 0, 0, 0, 1, 0, 0, 0}, CoreSamples::identityPlacement,
+                () -> new double[] {0.5, 1, 2, 0, 0.1, 0, 0, 0, -9.8},
+                () -> new double[] {1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17, 18});
+        s.add(Vector3D.class, () -> new Vector3D(0.3, -0.2, 0.9), () -> Vector3D.PLUS_K, () -> new Vector3D(1, 2, 3),
+                () -> Vector3D.ZERO);
+        s.add(Rotation.class, CoreSamples::turn, () -> Rotation.IDENTITY);
+        s.add(Placement.class, () -> Placement.of(new Vector3D(1, 2, 3), new Vector3D(0.1, 0, 0), Vector3D.ZERO, turn(),
+                new Vector3D(0, 0, 0.3), new Vector3D(0.01, 0, 0)), Placement::identity);
+        s.add(PointState.class, () -> PointState.of(new Vector3D(1, 2, 3), new Vector3D(0.5, 0, 0),
+                new Vector3D(0, 0, -9.8)));
+        s.add(ReferenceFrame.class, () -> DISK, () -> ROOT, () -> ARM);
+        s.add(FramedState.class, () -> DISK.stateAt(0.5, PointState.stationary(new Vector3D(1, 0, 0))));
+        s.add(Motion.class, () -> Motions.spin(Vector3D.PLUS_K, 0.1, 0.2), () -> Motions.stationary(Vector3D.PLUS_I),
+                CoreSamples::sampled);
+        s.add(SampledMotion.class, CoreSamples::sampled);
+        s.add(SpecificForce.class, () -> (SpecificForce) (t, state) -> new Vector3D(0, 0, -9.8));
+        s.add(CrossingFunction.class, () -> (CrossingFunction) (t, state) -> state.position().getZ() + 100.0);
+        s.add(Trajectory.class, () -> TrajectorySolver.of(DISK).solve(PointState.stationary(new Vector3D(1, 0, 0)),
+                0.0, 2.0));
+        s.add(TrajectorySolver.class, () -> TrajectorySolver.of(DISK).withMaxEvaluations(20_000),
+                () -> TrajectorySolver.of(ROOT).withMaxEvaluations(20_000));
+        s.add(String[].class, () -> new String[] {"y"});
+        s.add(Vector3D[].class, () -> new Vector3D[] {new Vector3D(1, 2, 3), new Vector3D(0.1, 0, 0)});
+        s.add(DispersionStudy.class, () -> DispersionStudy.of(c -> new double[] {c.value(0) * 2.0}, "y")
+                .withInput("x", InputDistribution.normal(0.0, 1.0)).withCases(8));
+        s.add(DispersionModel.class, () -> (DispersionModel) c -> new double[] {c.index() + 0.5});
+        s.add(RealMatrix.class, () -> MatrixUtils.createRealIdentityMatrix(6), () -> MatrixUtils.createRealIdentityMatrix(3),
+                () -> MatrixUtils.createRealIdentityMatrix(9));
+        s.add(Path.class, CoreSamples::logFile);
+        s.add(Reader.class, () -> new StringReader(LOG));
+        s.add(Writer.class, StringWriter::new);
+        s.add(Supplier.class, () -> (Supplier<?>) () -> new ClassicalRungeKuttaIntegrator(0.01));
+        s.add(List.class, () -> List.of("x"), () -> List.of("x", "y"));
+        return s;
+    }
+}

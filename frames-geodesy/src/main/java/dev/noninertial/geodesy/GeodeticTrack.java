@@ -1,0 +1,480 @@
+package dev.noninertial.geodesy;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.Serializable;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
+import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.Formats;
+import dev.noninertial.frames.Placement;
+import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.motion.SampledMotion;
+import dev.noninertial.frames.sensing.IdealSensor;
+
+/**
+ * A logged track of a ship, aircraft or vehicle: time, geodetic latitude, longitude and height,
+ * optionally heading, pitch and roll, interpolated with consistent rates. It is a
+ * {@link GeodeticPath} (so {@link EarthFrames#carriedLevel(String, GeodeticPath, LocalAxes)}
+ * carries a level frame along it, transport rate included) and its attitude is an
+ * {@link AttitudeProfile} ({@link #attitude()}) for {@link EarthFrames#body}.
+ *
+ * <h2>Interpolation</h2>
+ * Latitude, longitude (unwrapped across the antimeridian) and height, and heading (unwrapped),
+ * pitch and roll, are interpolated by the library's one piecewise quintic Hermite scheme, that of
+ * {@link SampledMotion} (derivatives at each sample from the local quartic, C2 across samples), so
+ * rates and accelerations are the exact derivatives of the reported positions and angles. The
+ * interpolant does not filter: noise in the log reaches rates amplified by about {@code 1/h} and
+ * accelerations by {@code 1/h^2} ({@code h} the sample interval).
+ *
+ * <h2>Refusals</h2>
+ * Construction refuses, naming the sample (and, for files, the source and line): fewer than two
+ * samples, non-finite values, times that do not increase strictly, a gap between samples longer
+ * than the stated {@code maxGap}, a latitude within {@value #POLE_MARGIN_DEGREES} degrees of a
+ * pole or beyond it (the north-aligned level frame and the transport rate are undefined at a pole),
+ * and a longitude or heading step of more than 90 degrees between consecutive samples after
+ * unwrapping (a pole crossing, or a track too coarsely sampled to interpolate). Queries before the
+ * first or after the last sample are refused: nothing is extrapolated.
+ *
+ * <h2>File format</h2>
+ * Comment lines start with {@code #}; blank lines are skipped; the first other line is the header
+ * naming each column as {@code name[unit]}, comma-separated, as in the motion-log format: columns
+ * {@code t} (s, ms), {@code lat} and {@code lon} (deg, rad), {@code h} (m, km, ft) are required;
+ * {@code heading}, {@code pitch}, {@code roll} (deg, rad) are optional as a group. Heading is
+ * clockwise from north, pitch nose up, roll right side down (see {@link AttitudeSample}).
+ *
+ * <p>Immutable, thread-safe and serializable. Results are for simulation and analysis, not for
+ * primary navigation.
+ */
+public final class GeodeticTrack implements GeodeticPath, Serializable {
+
+    /** Samples within this many degrees of a pole are refused. */
+    public static final double POLE_MARGIN_DEGREES = 0.01;
+    /** Largest step of longitude or heading between consecutive samples (rad), after unwrapping. */
+    public static final double MAX_ANGLE_STEP = 0.5 * Math.PI;
+
+    private static final long serialVersionUID = 1L;
+
+    /** A plain decimal number: sign, digits with at most one point, optional exponent. */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+
+    /** Interpolant of (lat, lon, h) as the origin of a sampled motion. */
+    private final SampledMotion position;
+    /** Interpolant of (heading, pitch, roll), or null. */
+    private final SampledMotion angles;
+    /** Stated largest gap between samples (s). */
+    private final double maxGap;
+
+    private GeodeticTrack(SampledMotion position, SampledMotion angles, double maxGap) {
+        this.position = position;
+        this.angles = angles;
+        this.maxGap = maxGap;
+    }
+
+    /**
+     * A track without attitude from arrays (radians, metres).
+     *
+     * @param times sample times (s), strictly increasing
+     * @param latitudes geodetic latitudes (rad)
+     * @param longitudes longitudes (rad)
+     * @param heights ellipsoidal heights (m)
+     * @param maxGap largest allowed gap between consecutive samples (s), positive
+     * @return the track
+     * @throws IllegalArgumentException if a sample is refused (see the class comment)
+     */
+    public static GeodeticTrack fromArrays(double[] times, double[] latitudes, double[] longitudes, double[] heights,
+                                           double maxGap) {
+        return build(times, latitudes, longitudes, heights, null, null, null, maxGap, i -> "sample " + i);
+    }
+
+    /**
+     * A track with attitude from arrays (radians, metres).
+     *
+     * @param times sample times (s), strictly increasing
+     * @param latitudes geodetic latitudes (rad)
+     * @param longitudes longitudes (rad)
+     * @param heights ellipsoidal heights (m)
+     * @param headings headings, clockwise from north (rad)
+     * @param pitches pitch angles, nose up (rad)
+     * @param rolls roll angles, right side down (rad)
+     * @param maxGap largest allowed gap between consecutive samples (s), positive
+     * @return the track
+     * @throws IllegalArgumentException if a sample is refused (see the class comment)
+     */
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    public static GeodeticTrack fromArrays(double[] times, double[] latitudes, double[] longitudes, double[] heights,
+                                           double[] headings, double[] pitches, double[] rolls, double maxGap) {
+        Arguments.nonNull("headings", headings);
+        Arguments.nonNull("pitches", pitches);
+        Arguments.nonNull("rolls", rolls);
+        return build(times, latitudes, longitudes, heights, headings, pitches, rolls, maxGap, i -> "sample " + i);
+    }
+
+    /**
+     * Reads a track file (format in the class comment), UTF-8.
+     *
+     * @param file the file
+     * @param maxGap largest allowed gap between consecutive samples (s), positive
+     * @return the track
+     * @throws IOException if the file cannot be read
+     * @throws IllegalArgumentException if the header or a row is refused; the message names the
+     *         file and the line
+     */
+    public static GeodeticTrack readCsv(Path file, double maxGap) throws IOException {
+        Arguments.nonNull("file", file);
+        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            return readCsv(in, file.toString(), maxGap);
+        }
+    }
+
+    /**
+     * Reads a track in the file format from a character stream.
+     *
+     * @param source the text
+     * @param sourceName name used in messages (a file name, for example)
+     * @param maxGap largest allowed gap between consecutive samples (s), positive
+     * @return the track
+     * @throws IOException if the stream fails
+     * @throws IllegalArgumentException if the header or a row is refused; the message names the
+     *         source and the line
+     */
+    public static GeodeticTrack readCsv(Reader source, String sourceName, double maxGap) throws IOException {
+        Arguments.nonNull("source", source);
+        Arguments.nonNull("sourceName", sourceName);
+        BufferedReader in = source instanceof BufferedReader ? (BufferedReader) source : new BufferedReader(source);
+        String[] names = {"t", "lat", "lon", "h", "heading", "pitch", "roll"};
+        String[][] units = {{"s", "ms"}, {"deg", "rad"}, {"deg", "rad"}, {"m", "km", "ft"}, {"deg", "rad"},
+            {"deg", "rad"}, {"deg", "rad"}};
+        // foot: 0.3048 m exactly (international foot, from memory)
+        double[][] factors = {{1, 1e-3}, {Math.PI / 180, 1}, {Math.PI / 180, 1}, {1, 1e3, 0.3048},
+            {Math.PI / 180, 1}, {Math.PI / 180, 1}, {Math.PI / 180, 1}};
+        int[] column = null;
+        double[] factor = null;
+        List<double[]> rows = new ArrayList<>();
+        List<Integer> lines = new ArrayList<>();
+        String line;
+        int number = 0;
+        int fields = 0;
+        while ((line = in.readLine()) != null) {
+            number++;
+            String text = line.trim();
+            if (number == 1 && text.startsWith("\uFEFF")) {
+                text = text.substring(1).trim();
+            }
+            if (text.isEmpty() || text.charAt(0) == '#') {
+                continue;
+            }
+            String[] parts = text.split(",", -1);
+            if (column == null) {
+                column = new int[names.length];
+                factor = new double[names.length];
+                Arrays.fill(column, -1);
+                for (int k = 0; k < parts.length; k++) {
+                    String f = parts[k].trim();
+                    int open = f.indexOf('[');
+                    if (open <= 0 || !f.endsWith("]")) {
+                        throw new IllegalArgumentException(sourceName + " line " + number + " (header), field "
+                                + (k + 1) + ": '" + f + "' must read name[unit], for example lat[deg]");
+                    }
+                    String name = f.substring(0, open).trim();
+                    String unit = f.substring(open + 1, f.length() - 1).trim();
+                    int c = Arrays.asList(names).indexOf(name);
+                    if (c < 0) {
+                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): unknown column '"
+                                + name + "'; known columns: " + String.join(", ", names));
+                    }
+                    if (column[c] >= 0) {
+                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): column '"
+                                + name + "' appears twice");
+                    }
+                    int u = Arrays.asList(units[c]).indexOf(unit);
+                    if (u < 0) {
+                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): unit '" + unit
+                                + "' not allowed for column " + name + "; allowed: " + String.join(", ", units[c]));
+                    }
+                    column[c] = k;
+                    factor[c] = factors[c][u];
+                }
+                for (int c = 0; c < 4; c++) {
+                    if (column[c] < 0) {
+                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): missing column "
+                                + names[c] + "; a track needs t, lat, lon and h");
+                    }
+                }
+                int attitude = (column[4] >= 0 ? 1 : 0) + (column[5] >= 0 ? 1 : 0) + (column[6] >= 0 ? 1 : 0);
+                if (attitude != 0 && attitude != 3) {
+                    throw new IllegalArgumentException(sourceName + " line " + number + " (header): the attitude needs "
+                            + "all of heading, pitch, roll or none");
+                }
+                fields = parts.length;
+                continue;
+            }
+            if (parts.length != fields) {
+                throw new IllegalArgumentException(sourceName + " line " + number + ": expected " + fields
+                        + " comma-separated fields as in the header, got " + parts.length);
+            }
+            double[] row = new double[names.length];
+            for (int c = 0; c < names.length; c++) {
+                if (column[c] < 0) {
+                    continue;
+                }
+                String field = parts[column[c]].trim();
+                if (!DECIMAL.matcher(field).matches()) {
+                    throw new IllegalArgumentException(sourceName + " line " + number + ", column " + names[c] + ": '"
+                            + field + "' is not a decimal number");
+                }
+                double v = Double.parseDouble(field);
+                if (!Double.isFinite(v * factor[c])) {
+                    throw new IllegalArgumentException(sourceName + " line " + number + ", column " + names[c] + ": '"
+                            + field + "' is not finite");
+                }
+                row[c] = v * factor[c];
+            }
+            rows.add(row);
+            lines.add(number);
+        }
+        if (column == null) {
+            throw new IllegalArgumentException(sourceName + ": no header row (expected a line such as "
+                    + "'t[s], lat[deg], lon[deg], h[m]' after the comments)");
+        }
+        int n = rows.size();
+        double[][] cols = new double[names.length][n];
+        for (int i = 0; i < n; i++) {
+            for (int c = 0; c < names.length; c++) {
+                cols[c][i] = rows.get(i)[c];
+            }
+        }
+        boolean attitude = column[4] >= 0;
+        return build(cols[0], cols[1], cols[2], cols[3], attitude ? cols[4] : null, attitude ? cols[5] : null,
+                attitude ? cols[6] : null, maxGap, i -> sourceName + " line " + lines.get(i));
+    }
+
+    @SuppressWarnings("checkstyle:ParameterNumber")
+    private static GeodeticTrack build(double[] times, double[] lat, double[] lon, double[] h, double[] heading,
+                                       double[] pitch, double[] roll, double maxGap,
+                                       java.util.function.IntFunction<String> label) {
+        Arguments.nonNull("times", times);
+        Arguments.nonNull("latitudes", lat);
+        Arguments.nonNull("longitudes", lon);
+        Arguments.nonNull("heights", h);
+        Arguments.positive("maxGap", maxGap);
+        int n = times.length;
+        if (n < 2) {
+            throw new IllegalArgumentException("a track needs at least 2 samples, got " + n);
+        }
+        checkLength("latitudes", lat, n);
+        checkLength("longitudes", lon, n);
+        checkLength("heights", h, n);
+        if (heading != null) {
+            checkLength("headings", heading, n);
+            checkLength("pitches", pitch, n);
+            checkLength("rolls", roll, n);
+        }
+        double limit = Math.toRadians(90.0 - POLE_MARGIN_DEGREES);
+        double[] t = new double[n];
+        double[] xyz = new double[3 * n];
+        double[] hpr = heading == null ? null : new double[3 * n];
+        for (int i = 0; i < n; i++) {
+            String at = label.apply(i);
+            t[i] = finite(at, "t", times[i]);
+            if (i > 0) {
+                double gap = t[i] - t[i - 1];
+                if (!(gap > 0)) {
+                    throw new IllegalArgumentException(at + ": time " + t[i] + " s must be after the previous sample's "
+                            + t[i - 1] + " s");
+                }
+                if (gap > maxGap) {
+                    throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: gap of %s s after the sample at "
+                            + "%s s exceeds maxGap = %s s", at, Formats.number(gap), Formats.number(t[i - 1]),
+                            Formats.number(maxGap)));
+                }
+            }
+            double la = finite(at, "lat", lat[i]);
+            if (!(Math.abs(la) < limit)) {
+                throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: latitude %.6f deg is within %s deg of "
+                        + "a pole or beyond it (allowed |lat| < %s deg): a north-aligned level frame is undefined at "
+                        + "the pole; split the track or use Earth-fixed axes", at, Math.toDegrees(la),
+                        Formats.number(POLE_MARGIN_DEGREES), Formats.number(90.0 - POLE_MARGIN_DEGREES)));
+            }
+            xyz[3 * i] = la;
+            xyz[3 * i + 1] = unwrap(at, "lon", finite(at, "lon", lon[i]), i == 0 ? Double.NaN : xyz[3 * i - 2]);
+            xyz[3 * i + 2] = finite(at, "h", h[i]);
+            if (hpr != null) {
+                hpr[3 * i] = unwrap(at, "heading", finite(at, "heading", heading[i]),
+                        i == 0 ? Double.NaN : hpr[3 * i - 3]);
+                hpr[3 * i + 1] = finite(at, "pitch", pitch[i]);
+                hpr[3 * i + 2] = finite(at, "roll", roll[i]);
+            }
+        }
+        double[] identity = new double[4 * n];
+        for (int i = 0; i < n; i++) {
+            identity[4 * i] = 1.0;
+        }
+        SampledMotion p = SampledMotion.fromArrays(t, xyz, identity);
+        SampledMotion a = hpr == null ? null : SampledMotion.fromArrays(t, hpr, identity);
+        return new GeodeticTrack(p, a, maxGap);
+    }
+
+    private static void checkLength(String name, double[] values, int n) {
+        if (values.length != n) {
+            throw new IllegalArgumentException(name + " must hold one value per time (" + n + "), got " + values.length);
+        }
+    }
+
+    private static double finite(String at, String column, double v) {
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException(at + ", " + column + ": value " + v + " is not finite");
+        }
+        return v;
+    }
+
+    /** The angle shifted by whole turns to within half a turn of the previous one; big steps refused. */
+    private static double unwrap(String at, String column, double angle, double previous) {
+        if (Double.isNaN(previous)) {
+            return angle;
+        }
+        double turns = Math.rint((angle - previous) / (2 * Math.PI));
+        double u = angle - 2 * Math.PI * turns;
+        if (Math.abs(u - previous) > MAX_ANGLE_STEP) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: %s steps by %.3f deg from the previous "
+                    + "sample (allowed %.0f deg): the track crosses a pole or is too coarsely sampled", at, column,
+                    Math.toDegrees(u - previous), Math.toDegrees(MAX_ANGLE_STEP)));
+        }
+        return u;
+    }
+
+    @Override
+    public PathSample at(double t) {
+        Placement p = position.at(t);
+        Vector3D x = p.origin();
+        Vector3D v = p.originVelocity();
+        Vector3D a = p.originAcceleration();
+        return new PathSample(x.getX(), x.getY(), x.getZ(), v.getX(), v.getY(), v.getZ(), a.getX(), a.getY(), a.getZ());
+    }
+
+    /** @return true if the log carries heading, pitch and roll */
+    public boolean hasAttitude() {
+        return angles != null;
+    }
+
+    /**
+     * The logged attitude as a profile over the carried level frame (convention of
+     * {@link AttitudeSample}), with the interpolant's rates.
+     *
+     * @return the attitude profile
+     * @throws IllegalStateException if the log has no attitude columns
+     */
+    public AttitudeProfile attitude() {
+        if (angles == null) {
+            throw new IllegalStateException("this track has no heading, pitch, roll: it was built without attitude");
+        }
+        return new LoggedAttitude(angles);
+    }
+
+    /** Interpolated heading, pitch, roll as an attitude profile. */
+    private record LoggedAttitude(SampledMotion angles) implements AttitudeProfile, Serializable {
+        @Override
+        public AttitudeSample at(double t) {
+            Placement p = angles.at(t);
+            Vector3D x = p.origin();
+            Vector3D v = p.originVelocity();
+            Vector3D a = p.originAcceleration();
+            return new AttitudeSample(x.getX(), x.getY(), x.getZ(), v.getX(), v.getY(), v.getZ(), a.getX(), a.getY(),
+                    a.getZ());
+        }
+    }
+
+    /** @return number of samples */
+    public int sampleCount() {
+        return position.sampleCount();
+    }
+
+    /** @return time of the first sample (s) */
+    public double startTime() {
+        return position.startTime();
+    }
+
+    /** @return time of the last sample (s) */
+    public double endTime() {
+        return position.endTime();
+    }
+
+    /**
+     * Time of one sample.
+     *
+     * @param index sample index, in [0, sampleCount())
+     * @return its time (s)
+     */
+    public double sampleTime(int index) {
+        return position.sampleTime(index);
+    }
+
+    /** @return the stated largest gap between samples (s) */
+    public double maxGap() {
+        return maxGap;
+    }
+
+    /**
+     * The survey quantities at one time (see {@link SurveyPoint}): Eotvos correction, vertical
+     * acceleration, and the reading of an ideal scalar gravimeter on a level platform carried
+     * along this track, from an {@link IdealSensor} on the carried level frame with the Earth's
+     * gravitation.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param t time (s), within the track
+     * @return the survey point
+     * @throws IllegalArgumentException if {@code t} is outside the track or the height outside the
+     *         range of normal gravity's series
+     */
+    public SurveyPoint surveyAt(EarthFrames earth, double t) {
+        Arguments.nonNull("earth", earth);
+        ReferenceFrame level = earth.carriedLevel("survey platform", this, LocalAxes.ENU);
+        return survey(earth, IdealSensor.of(level, earth.gravitationIn(level)), t);
+    }
+
+    /**
+     * The survey quantities at every sample time of the track.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @return one point per sample, in time order
+     */
+    public List<SurveyPoint> surveyAtSamples(EarthFrames earth) {
+        Arguments.nonNull("earth", earth);
+        ReferenceFrame level = earth.carriedLevel("survey platform", this, LocalAxes.ENU);
+        IdealSensor gravimeter = IdealSensor.of(level, earth.gravitationIn(level));
+        List<SurveyPoint> out = new ArrayList<>(sampleCount());
+        for (int i = 0; i < sampleCount(); i++) {
+            out.add(survey(earth, gravimeter, sampleTime(i)));
+        }
+        return out;
+    }
+
+    private SurveyPoint survey(EarthFrames earth, IdealSensor gravimeter, double t) {
+        PathSample s = at(t);
+        Ellipsoid shape = earth.model().ellipsoid();
+        double lat = s.latitude();
+        double ve = (shape.primeVerticalRadius(lat) + s.height()) * Math.cos(lat) * s.longitudeRate();
+        double vn = (shape.meridianRadius(lat) + s.height()) * s.latitudeRate();
+        LatLonHeight where = s.position();
+        double eotvos = earth.model().eotvosCorrection(where, new Vector3D(ve, vn, 0.0), LocalAxes.ENU);
+        double reading = gravimeter.readingAt(t).specificForce().getZ();
+        return new SurveyPoint(t, where, eotvos, s.heightAcceleration(), reading, earth.model().normalGravity(where));
+    }
+
+    @Override
+    public String toString() {
+        return "GeodeticTrack{" + sampleCount() + " samples, [" + Formats.number(startTime()) + ", "
+                + Formats.number(endTime()) + "] s, maxGap " + Formats.number(maxGap) + " s"
+                + (angles == null ? "" : ", with attitude") + "}";
+    }
+}

@@ -1,0 +1,40 @@
+package dev.noninertial.geodesy;
+
+import java.io.Serializable;
+
+import dev.noninertial.frames.Formats;
+
+/**
+ * What a marine or airborne gravity survey needs at one sample of a track: the Eotvos correction,
+ * the platform's vertical acceleration, and what an ideal scalar gravimeter on a level,
+ * stabilised platform reads there.
+ *
+ * <p><b>Conventions.</b> SI units (m/s^2; 1 mGal = 1e-5 m/s^2). The gravimeter reading is the
+ * upward component (along the ellipsoid normal) of the specific force {@code f = a_inertial -
+ * gravitation} of the carried level frame's origin: at rest it equals normal gravity; under way
+ * it is lowered by the Eotvos effect and raised by the platform's upward acceleration, so to first
+ * order {@code reading = normalGravity - eotvosCorrection + verticalAcceleration}. The Eotvos correction
+ * is {@link EarthModel#eotvosCorrection(LatLonHeight, org.hipparchus.geometry.euclidean.threed.Vector3D, LocalAxes)}
+ * of the horizontal ground velocity (its constant-height formula; the vertical velocity does not
+ * enter). The vertical acceleration is {@code d2h/dt2} of the track's interpolant.
+ *
+ * <p>Immutable and thread-safe.
+ *
+ * @param time time (s from the frames' epoch)
+ * @param position geodetic position of the platform
+ * @param eotvosCorrection Eotvos correction, to be added to the reading (m/s^2)
+ * @param verticalAcceleration upward acceleration d2h/dt2 (m/s^2)
+ * @param gravimeterReading upward specific force on the level platform (m/s^2)
+ * @param normalGravity normal gravity at the position, TR8350.2 Eq. 4-3 (m/s^2)
+ */
+public record SurveyPoint(double time, LatLonHeight position, double eotvosCorrection, double verticalAcceleration,
+                          double gravimeterReading, double normalGravity) implements Serializable {
+
+    @Override
+    public String toString() {
+        return "SurveyPoint{t=" + Formats.number(time) + " s, " + position + ", eotvos="
+                + Formats.number(eotvosCorrection / 1e-5) + " mGal, vertical acceleration="
+                + Formats.number(verticalAcceleration / 1e-5) + " mGal, reading=" + Formats.number(gravimeterReading)
+                + " m/s^2, normal gravity=" + Formats.number(normalGravity) + " m/s^2}";
+    }
+}

@@ -1,0 +1,61 @@
+package dev.noninertial.geodesy.fuzz;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Instant;
+
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+import org.junit.jupiter.api.Test;
+
+import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.fuzz.ApiFuzz;
+import dev.noninertial.frames.fuzz.CoreSamples;
+import dev.noninertial.frames.fuzz.FuzzReports;
+import dev.noninertial.frames.fuzz.SampleValues;
+import dev.noninertial.geodesy.AttitudeProfile;
+import dev.noninertial.geodesy.AttitudeSample;
+import dev.noninertial.geodesy.EarthFrames;
+import dev.noninertial.geodesy.EarthModel;
+import dev.noninertial.geodesy.Ellipsoid;
+import dev.noninertial.geodesy.GeodeticPath;
+import dev.noninertial.geodesy.LatLonHeight;
+import dev.noninertial.geodesy.LocalAxes;
+
+/**
+ * The reflection fuzz of frames-geodesy's public API (issue 15), with the rule of {@link ApiFuzz}.
+ * Valid values: WGS84 (REFERENCES.md, WGS84) and invented sites near 47.5 deg N (demo values).
+ */
+class GeodesyApiFuzzTest {
+
+    private static final EarthFrames EARTH = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-03-20T12:00:00Z"));
+    private static final LatLonHeight SITE = LatLonHeight.ofDegrees(47.5, 8.2, 420.0);
+    private static final ReferenceFrame ENU = EARTH.localLevel("site", SITE, LocalAxes.ENU);
+
+    static SampleValues table() {
+        SampleValues s = CoreSamples.table();
+        // geodetic and Earth-tree values first: frames of the Earth tree, sites, the WGS84 models
+        s.put(ReferenceFrame.class, () -> ENU, EARTH::earthFixed, EARTH::inertial);
+        s.put(Double.class, () -> 0.5, () -> 1.0, () -> 0.1, () -> 2.0, () -> 10.0, () -> 0.0, () -> -0.5,
+                () -> 100.0, () -> 1e-3, () -> 0.9, () -> 6378137.0, () -> 3.986004418e14, () -> 7.292115e-5,
+                () -> 298.257223563);
+        s.put(Vector3D.class, () -> Ellipsoid.WGS84.toCartesian(SITE), () -> new Vector3D(3.0, 4.0, 0.0),
+                () -> new Vector3D(0.3, -0.2, 0.9), () -> Vector3D.PLUS_K, () -> Vector3D.ZERO);
+        s.add(Ellipsoid.class, () -> Ellipsoid.WGS84, () -> Ellipsoid.GRS80);
+        s.add(EarthModel.class, () -> EarthModel.WGS84);
+        s.add(EarthFrames.class, () -> EARTH);
+        s.add(LatLonHeight.class, () -> SITE, () -> LatLonHeight.ofDegrees(-12.0, 130.0, 5.0));
+        s.add(Instant.class, () -> Instant.parse("2026-03-20T12:00:00Z"));
+        s.add(GeodeticPath.class, () -> GeodeticPath.stationary(SITE));
+        s.add(AttitudeSample.class, () -> AttitudeSample.stationary(0.3, 0.05, -0.02));
+        s.add(AttitudeProfile.class, () -> AttitudeProfile.stationary(0.3, 0.05, -0.02));
+        return s;
+    }
+
+    @Test
+    void everyPublicCallRefusesOrReturnsFiniteResults() {
+        long start = System.nanoTime();
+        ApiFuzz.Report report = new ApiFuzz("frames-geodesy", Ellipsoid.class, "dev.noninertial.geodesy", table()).run();
+        FuzzReports.write("frames-geodesy", report, (System.nanoTime() - start) * 1e-9);
+        assertTrue(report.failures.isEmpty() && report.exposures.isEmpty(), report.details());
+    }
+}
