@@ -14,3 +14,4 @@ import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;
 import dev.noninertial.geodesy.air.*;
 import dev.noninertial.geodesy.navigation.*;
+import dev.noninertial.frames.sensing.*;

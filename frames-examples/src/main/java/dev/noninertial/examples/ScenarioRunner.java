@@ -56,6 +56,7 @@ public final class ScenarioRunner {
         DemoSetting setting = new DemoSetting();
         List<ScenarioTable> tables = List.of(SiteRotationScenario.run(setting), ShipCraneScenario.run(setting),
                 LongRangeScenario.run(setting));
+        tables = SurveyFlightScenario.appendTo(tables, setting);
         if (out != null) {
             Files.createDirectories(out);
         }
