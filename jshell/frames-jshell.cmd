@@ -26,7 +26,7 @@ goto run
 if not exist "%CACHE%" mkdir "%CACHE%"
 echo frames-jshell: building the library first (sources changed or no cached class path); log in %LOG% 1>&2
 pushd "%ROOT%"
-call mvn -B -Dstyle.color=never -DskipTests -Dmaven.javadoc.skip=true -Dmaven.source.skip=true compile dependency:build-classpath -pl frames-examples -am "-Dmdep.outputFile=%CACHE%\dependencies.txt" -DincludeScope=runtime > "%LOG%" 2>&1
+call mvn -B -Dstyle.color=never -DskipTests -Dmaven.javadoc.skip=true -Dmaven.source.skip=true -Dexec.skip=true package dependency:build-classpath -pl frames-examples -am "-Dmdep.outputFile=%CACHE%\dependencies.txt" -DincludeScope=runtime > "%LOG%" 2>&1
 if errorlevel 1 goto failed
 popd
 set /p DEPS=<"%CACHE%\dependencies.txt"
@@ -42,4 +42,4 @@ exit /b 1
 
 :run
 set /p CP=<"%CPFILE%"
-jshell --class-path "%CP%" --startup DEFAULT --startup "%ROOT%\jshell\frames.jsh" %*
+jshell -J-XX:TieredStopAtLevel=1 --class-path "%CP%" --startup DEFAULT --startup "%ROOT%\jshell\frames.jsh" %*

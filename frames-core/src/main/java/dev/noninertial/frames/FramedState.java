@@ -40,17 +40,29 @@ public final class FramedState implements Serializable {
         return new FramedState(frame, time, state);
     }
 
-    /** @return the frame the state is seen in and resolved in */
+    /**
+     * Returns the frame the state is seen in and resolved in.
+     *
+     * @return the frame the state is seen in and resolved in
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return time (s) */
+    /**
+     * Returns time (s).
+     *
+     * @return time (s)
+     */
     public double time() {
         return time;
     }
 
-    /** @return the state, seen in and resolved in {@link #frame()} */
+    /**
+     * Returns the state, seen in and resolved in {@link #frame()}.
+     *
+     * @return the state, seen in and resolved in {@link #frame()}
+     */
     public PointState state() {
         return state;
     }

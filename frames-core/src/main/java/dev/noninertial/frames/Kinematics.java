@@ -38,7 +38,11 @@ final class Kinematics {
     private Kinematics() {
     }
 
-    /** @return the refusal of a non-finite result, with the message of every path */
+    /**
+     * Returns the refusal of a non-finite result, with the message of every path.
+     *
+     * @return the refusal of a non-finite result, with the message of every path
+     */
     static IllegalArgumentException notFinite() {
         return new IllegalArgumentException(NOT_FINITE);
     }

@@ -35,7 +35,11 @@ public final class Orientations {
     private Orientations() {
     }
 
-    /** @return the orientation of a frame aligned with its base */
+    /**
+     * Returns the orientation of a frame aligned with its base.
+     *
+     * @return the orientation of a frame aligned with its base
+     */
     public static Rotation identity() {
         return Rotation.IDENTITY;
     }

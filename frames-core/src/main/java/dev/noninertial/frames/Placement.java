@@ -100,7 +100,11 @@ public final class Placement implements Serializable {
         this.c = c;
     }
 
-    /** @return the placement of a frame in itself: zero offset, identity orientation, no rates */
+    /**
+     * Returns the placement of a frame in itself: zero offset, identity orientation, no rates.
+     *
+     * @return the placement of a frame in itself: zero offset, identity orientation, no rates
+     */
     public static Placement identity() {
         return IDENTITY;
     }
@@ -372,17 +376,29 @@ public final class Placement implements Serializable {
 
     // ------------------------------------------------------------------ accessors
 
-    /** @return position o of F's origin seen from B, resolved in B (m) */
+    /**
+     * Returns position o of F's origin seen from B, resolved in B (m).
+     *
+     * @return position o of F's origin seen from B, resolved in B (m)
+     */
     public Vector3D origin() {
         return new Vector3D(c[0], c[1], c[2]);
     }
 
-    /** @return velocity o' of F's origin seen from B, resolved in B (m/s) */
+    /**
+     * Returns velocity o' of F's origin seen from B, resolved in B (m/s).
+     *
+     * @return velocity o' of F's origin seen from B, resolved in B (m/s)
+     */
     public Vector3D originVelocity() {
         return new Vector3D(c[3], c[4], c[5]);
     }
 
-    /** @return acceleration o'' of F's origin seen from B, resolved in B (m/s^2) */
+    /**
+     * Returns acceleration o'' of F's origin seen from B, resolved in B (m/s^2).
+     *
+     * @return acceleration o'' of F's origin seen from B, resolved in B (m/s^2)
+     */
     public Vector3D originAcceleration() {
         return new Vector3D(c[6], c[7], c[8]);
     }
@@ -405,12 +421,20 @@ public final class Placement implements Serializable {
         return new double[][] {{c[9], c[10], c[11]}, {c[12], c[13], c[14]}, {c[15], c[16], c[17]}};
     }
 
-    /** @return angular velocity w of F relative to B, resolved in F (rad/s) */
+    /**
+     * Returns angular velocity w of F relative to B, resolved in F (rad/s).
+     *
+     * @return angular velocity w of F relative to B, resolved in F (rad/s)
+     */
     public Vector3D angularVelocity() {
         return new Vector3D(c[18], c[19], c[20]);
     }
 
-    /** @return angular acceleration al of F relative to B, resolved in F (rad/s^2) */
+    /**
+     * Returns angular acceleration al of F relative to B, resolved in F (rad/s^2).
+     *
+     * @return angular acceleration al of F relative to B, resolved in F (rad/s^2)
+     */
     public Vector3D angularAcceleration() {
         return new Vector3D(c[21], c[22], c[23]);
     }

@@ -117,17 +117,29 @@ public final class PointState implements Serializable {
         System.arraycopy(c, 0, target, offset, COMPONENTS);
     }
 
-    /** @return position (m) */
+    /**
+     * Returns position (m).
+     *
+     * @return position (m)
+     */
     public Vector3D position() {
         return new Vector3D(c[0], c[1], c[2]);
     }
 
-    /** @return velocity (m/s) */
+    /**
+     * Returns velocity (m/s).
+     *
+     * @return velocity (m/s)
+     */
     public Vector3D velocity() {
         return new Vector3D(c[3], c[4], c[5]);
     }
 
-    /** @return acceleration (m/s^2) */
+    /**
+     * Returns acceleration (m/s^2).
+     *
+     * @return acceleration (m/s^2)
+     */
     public Vector3D acceleration() {
         return new Vector3D(c[6], c[7], c[8]);
     }

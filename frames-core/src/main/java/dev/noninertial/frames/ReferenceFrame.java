@@ -73,27 +73,47 @@ public final class ReferenceFrame implements Serializable {
         return name;
     }
 
-    /** @return the name given at creation */
+    /**
+     * Returns the name given at creation.
+     *
+     * @return the name given at creation
+     */
     public String name() {
         return name;
     }
 
-    /** @return the parent, empty for a root */
+    /**
+     * Returns the parent, empty for a root.
+     *
+     * @return the parent, empty for a root
+     */
     public Optional<ReferenceFrame> parent() {
         return Optional.ofNullable(parent);
     }
 
-    /** @return the motion in the parent, empty for a root */
+    /**
+     * Returns the motion in the parent, empty for a root.
+     *
+     * @return the motion in the parent, empty for a root
+     */
     public Optional<Motion> motion() {
         return Optional.ofNullable(motion);
     }
 
-    /** @return number of links from the root (0 for a root) */
+    /**
+     * Returns number of links from the root (0 for a root).
+     *
+     * @return number of links from the root (0 for a root)
+     */
     public int depth() {
         return depth;
     }
 
-    /** @return the root of this frame's tree (itself for a root) */
+    /**
+     * Returns the root of this frame's tree (itself for a root).
+     *
+     * @return the root of this frame's tree (itself for a root)
+     */
     public ReferenceFrame root() {
         ReferenceFrame f = this;
         while (f.parent != null) {
@@ -102,7 +122,11 @@ public final class ReferenceFrame implements Serializable {
         return f;
     }
 
-    /** @return true for a root, which is inertial by declaration */
+    /**
+     * Returns true for a root, which is inertial by declaration.
+     *
+     * @return true for a root, which is inertial by declaration
+     */
     public boolean isInertialRoot() {
         return parent == null;
     }

@@ -64,7 +64,14 @@ final class Courses {
                 + " deg");
     }
 
-    /** Constant rates of latitude, longitude and height. */
+    /**
+     * Constant rates of latitude, longitude and height.
+     *
+     * @param start the position at time zero
+     * @param latitudeRate rate of latitude (rad/s)
+     * @param longitudeRate rate of longitude (rad/s)
+     * @param heightRate rate of height (m/s)
+     */
     record ConstantRates(LatLonHeight start, double latitudeRate, double longitudeRate, double heightRate)
             implements GeodeticPath, Serializable {
         /**

@@ -133,22 +133,38 @@ public final class EarthFrames implements Serializable {
         return rotating ? new EarthFrames(model, epoch, false) : this;
     }
 
-    /** @return false for the comparison Earth of {@link #withoutRotation()}, true otherwise */
+    /**
+     * Returns false for the comparison Earth of {@link #withoutRotation()}, true otherwise.
+     *
+     * @return false for the comparison Earth of {@link #withoutRotation()}, true otherwise
+     */
     public boolean isRotating() {
         return rotating;
     }
 
-    /** @return the Earth model */
+    /**
+     * Returns the Earth model.
+     *
+     * @return the Earth model
+     */
     public EarthModel model() {
         return model;
     }
 
-    /** @return the epoch (t = 0), UT1 */
+    /**
+     * Returns the epoch (t = 0), UT1.
+     *
+     * @return the epoch (t = 0), UT1
+     */
     public Instant epoch() {
         return epoch;
     }
 
-    /** @return the Earth rotation angle at the epoch (rad), in [0, 2 pi) */
+    /**
+     * Returns the Earth rotation angle at the epoch (rad), in [0, 2 pi).
+     *
+     * @return the Earth rotation angle at the epoch (rad), in [0, 2 pi)
+     */
     public double angleAtEpoch() {
         return angleAtEpoch;
     }
@@ -165,12 +181,20 @@ public final class EarthFrames implements Serializable {
         return angleAtEpoch + spinRate() * t;
     }
 
-    /** @return the Earth-centred inertial root ("ECI"), z along the rotation axis */
+    /**
+     * Returns the Earth-centred inertial root ("ECI"), z along the rotation axis.
+     *
+     * @return the Earth-centred inertial root ("ECI"), z along the rotation axis
+     */
     public ReferenceFrame inertial() {
         return inertial;
     }
 
-    /** @return the Earth-fixed frame ("ECEF"), spinning about z under {@link #inertial()} */
+    /**
+     * Returns the Earth-fixed frame ("ECEF"), spinning about z under {@link #inertial()}.
+     *
+     * @return the Earth-fixed frame ("ECEF"), spinning about z under {@link #inertial()}
+     */
     public ReferenceFrame earthFixed() {
         return earthFixed;
     }
@@ -351,7 +375,13 @@ public final class EarthFrames implements Serializable {
         }
     }
 
-    /** Gravitation evaluated in Earth-fixed axes and resolved in the integration frame. */
+    /**
+     * Gravitation evaluated in Earth-fixed axes and resolved in the integration frame.
+     *
+     * @param model the Earth model giving the gravitation
+     * @param frame the integration frame
+     * @param earthFixed the Earth-fixed frame of the same tree
+     */
     private record GravitationForce(EarthModel model, ReferenceFrame frame, ReferenceFrame earthFixed)
             implements SpecificForce, Serializable {
 

@@ -131,37 +131,65 @@ public final class EarthModel implements Serializable {
         return model;
     }
 
-    /** @return the level ellipsoid */
+    /**
+     * Returns the level ellipsoid.
+     *
+     * @return the level ellipsoid
+     */
     public Ellipsoid ellipsoid() {
         return ellipsoid;
     }
 
-    /** @return geocentric gravitational constant GM (m^3/s^2) */
+    /**
+     * Returns geocentric gravitational constant GM (m^3/s^2).
+     *
+     * @return geocentric gravitational constant GM (m^3/s^2)
+     */
     public double gm() {
         return gm;
     }
 
-    /** @return rotation rate w of the Earth-fixed frame relative to inertial space (rad/s) */
+    /**
+     * Returns rotation rate w of the Earth-fixed frame relative to inertial space (rad/s).
+     *
+     * @return rotation rate w of the Earth-fixed frame relative to inertial space (rad/s)
+     */
     public double rotationRate() {
         return omega;
     }
 
-    /** @return normal gravity on the equator (m/s^2), from the closed form (TR8350.2 Eq. 4-4 form) */
+    /**
+     * Returns normal gravity on the equator (m/s^2), from the closed form (TR8350.2 Eq. 4-4 form).
+     *
+     * @return normal gravity on the equator (m/s^2), from the closed form (TR8350.2 Eq. 4-4 form)
+     */
     public double equatorialGravity() {
         return gammaE;
     }
 
-    /** @return normal gravity at the poles (m/s^2), from the closed form */
+    /**
+     * Returns normal gravity at the poles (m/s^2), from the closed form.
+     *
+     * @return normal gravity at the poles (m/s^2), from the closed form
+     */
     public double polarGravity() {
         return gammaP;
     }
 
-    /** @return Somigliana's constant k = b gp / (a ge) - 1 */
+    /**
+     * Returns somigliana's constant k = b gp / (a ge) - 1.
+     *
+     * @return Somigliana's constant k = b gp / (a ge) - 1
+     */
     public double somiglianaConstant() {
         return k;
     }
 
-    /** @return the ratio m = w^2 a^2 b / GM of centrifugal to gravitational effect at the equator */
+    /**
+     * Returns the ratio m = w^2 a^2 b / GM of centrifugal to gravitational effect at the equator.
+     *
+     * @return the ratio m = w^2 a^2 b / GM of centrifugal to gravitational effect at the equator
+     */
     public double centrifugalRatio() {
         return m;
     }

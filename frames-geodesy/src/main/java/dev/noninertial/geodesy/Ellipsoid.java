@@ -101,32 +101,56 @@ public final class Ellipsoid implements Serializable {
         return of(semiMajorAxis, 1.0 / inverseFlattening);
     }
 
-    /** @return semi-major (equatorial) axis a (m) */
+    /**
+     * Returns semi-major (equatorial) axis a (m).
+     *
+     * @return semi-major (equatorial) axis a (m)
+     */
     public double semiMajorAxis() {
         return a;
     }
 
-    /** @return semi-minor (polar) axis b = a (1 - f) (m) */
+    /**
+     * Returns semi-minor (polar) axis b = a (1 - f) (m).
+     *
+     * @return semi-minor (polar) axis b = a (1 - f) (m)
+     */
     public double semiMinorAxis() {
         return b;
     }
 
-    /** @return flattening f = (a - b) / a */
+    /**
+     * Returns flattening f = (a - b) / a.
+     *
+     * @return flattening f = (a - b) / a
+     */
     public double flattening() {
         return f;
     }
 
-    /** @return first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2 */
+    /**
+     * Returns first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2.
+     *
+     * @return first eccentricity squared e^2 = f (2 - f) = (a^2 - b^2) / a^2
+     */
     public double eccentricitySquared() {
         return e2;
     }
 
-    /** @return second eccentricity squared e'^2 = (a^2 - b^2) / b^2 */
+    /**
+     * Returns second eccentricity squared e'^2 = (a^2 - b^2) / b^2.
+     *
+     * @return second eccentricity squared e'^2 = (a^2 - b^2) / b^2
+     */
     public double secondEccentricitySquared() {
         return ep2;
     }
 
-    /** @return linear eccentricity E = sqrt(a^2 - b^2) (m) */
+    /**
+     * Returns linear eccentricity E = sqrt(a^2 - b^2) (m).
+     *
+     * @return linear eccentricity E = sqrt(a^2 - b^2) (m)
+     */
     public double linearEccentricity() {
         return Math.sqrt(linear2);
     }

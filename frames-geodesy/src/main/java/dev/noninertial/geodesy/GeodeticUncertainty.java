@@ -111,22 +111,38 @@ public final class GeodeticUncertainty implements Serializable {
                 symmetric(j.multiply(localCovariance).multiplyTransposed(j).getData()));
     }
 
-    /** @return the ellipsoid */
+    /**
+     * Returns the ellipsoid.
+     *
+     * @return the ellipsoid
+     */
     public Ellipsoid ellipsoid() {
         return ellipsoid;
     }
 
-    /** @return the mean position */
+    /**
+     * Returns the mean position.
+     *
+     * @return the mean position
+     */
     public LatLonHeight position() {
         return position;
     }
 
-    /** @return a new copy of the covariance of (lat (rad), lon (rad), h (m)) */
+    /**
+     * Returns a new copy of the covariance of (lat (rad), lon (rad), h (m)).
+     *
+     * @return a new copy of the covariance of (lat (rad), lon (rad), h (m))
+     */
     public RealMatrix covariance() {
         return MatrixUtils.createRealMatrix(covariance);
     }
 
-    /** @return the mean position in Earth-fixed Cartesian coordinates (m) */
+    /**
+     * Returns the mean position in Earth-fixed Cartesian coordinates (m).
+     *
+     * @return the mean position in Earth-fixed Cartesian coordinates (m)
+     */
     public Vector3D earthFixedPosition() {
         return ellipsoid.toCartesian(position);
     }

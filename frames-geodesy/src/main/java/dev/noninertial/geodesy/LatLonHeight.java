@@ -73,12 +73,20 @@ public record LatLonHeight(double latitude, double longitude, double height) imp
         return new LatLonHeight(lat, Math.toRadians(longitudeDegrees), height);
     }
 
-    /** @return geodetic latitude (deg) */
+    /**
+     * Returns geodetic latitude (deg).
+     *
+     * @return geodetic latitude (deg)
+     */
     public double latitudeDegrees() {
         return Math.toDegrees(latitude);
     }
 
-    /** @return longitude (deg) */
+    /**
+     * Returns longitude (deg).
+     *
+     * @return longitude (deg)
+     */
     public double longitudeDegrees() {
         return Math.toDegrees(longitude);
     }

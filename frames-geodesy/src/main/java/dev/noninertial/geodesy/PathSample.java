@@ -56,7 +56,11 @@ public record PathSample(double latitude, double longitude, double height,
         Arguments.finite("heightAcceleration", heightAcceleration);
     }
 
-    /** @return the position part as a geodetic position */
+    /**
+     * Returns the position part as a geodetic position.
+     *
+     * @return the position part as a geodetic position
+     */
     public LatLonHeight position() {
         return new LatLonHeight(latitude, longitude, height);
     }

@@ -39,9 +39,13 @@ public final class DispersionResult implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
+    /** Names of the drawn inputs, in column order. */
     private final List<String> inputNames;
+    /** Names of the outcomes, in column order after the inputs. */
     private final List<String> outcomeNames;
+    /** Values per row: inputs then outcomes. */
     private final int width;
+    /** Number of rows, one per case. */
     private final int rows;
     /** Row-major table, {@code rows * width} values. */
     private final double[] table;
@@ -91,17 +95,29 @@ public final class DispersionResult implements Serializable {
         return column < inputs.size() ? inputs.get(column) : outcomes.get(column - inputs.size());
     }
 
-    /** @return the number of cases (rows) */
+    /**
+     * Returns the number of cases (rows).
+     *
+     * @return the number of cases (rows)
+     */
     public int caseCount() {
         return rows;
     }
 
-    /** @return the input names in declaration order (unmodifiable) */
+    /**
+     * Returns the input names in declaration order (unmodifiable).
+     *
+     * @return the input names in declaration order (unmodifiable)
+     */
     public List<String> inputNames() {
         return inputNames;
     }
 
-    /** @return the outcome names in order (unmodifiable) */
+    /**
+     * Returns the outcome names in order (unmodifiable).
+     *
+     * @return the outcome names in order (unmodifiable)
+     */
     public List<String> outcomeNames() {
         return outcomeNames;
     }

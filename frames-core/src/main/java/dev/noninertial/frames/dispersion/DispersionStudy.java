@@ -49,11 +49,17 @@ public final class DispersionStudy implements Serializable {
     /** Cases handed to a worker thread at a time by the local runner. */
     private static final int BLOCK = 32;
 
+    /** The model run once per case. */
     private final DispersionModel model;
+    /** Names of the model's outcomes. */
     private final List<String> outcomeNames;
+    /** Names of the drawn inputs, in drawing order. */
     private final List<String> inputNames;
+    /** Distribution of each input, in the order of the names. */
     private final List<InputDistribution> distributions;
+    /** Number of cases. */
     private final int cases;
+    /** Master seed from which every case's seed is derived. */
     private final long seed;
 
     private DispersionStudy(DispersionModel model, List<String> outcomeNames, List<String> inputNames,
@@ -158,32 +164,56 @@ public final class DispersionStudy implements Serializable {
         return new DispersionStudy(newModel, outcomeNames, inputNames, distributions, cases, seed);
     }
 
-    /** @return the model */
+    /**
+     * Returns the model.
+     *
+     * @return the model
+     */
     public DispersionModel model() {
         return model;
     }
 
-    /** @return the outcome names in order (unmodifiable) */
+    /**
+     * Returns the outcome names in order (unmodifiable).
+     *
+     * @return the outcome names in order (unmodifiable)
+     */
     public List<String> outcomeNames() {
         return outcomeNames;
     }
 
-    /** @return the input names in declaration (drawing) order (unmodifiable) */
+    /**
+     * Returns the input names in declaration (drawing) order (unmodifiable).
+     *
+     * @return the input names in declaration (drawing) order (unmodifiable)
+     */
     public List<String> inputNames() {
         return inputNames;
     }
 
-    /** @return the input distributions in declaration order (unmodifiable) */
+    /**
+     * Returns the input distributions in declaration order (unmodifiable).
+     *
+     * @return the input distributions in declaration order (unmodifiable)
+     */
     public List<InputDistribution> distributions() {
         return distributions;
     }
 
-    /** @return the number of cases */
+    /**
+     * Returns the number of cases.
+     *
+     * @return the number of cases
+     */
     public int cases() {
         return cases;
     }
 
-    /** @return the master seed */
+    /**
+     * Returns the master seed.
+     *
+     * @return the master seed
+     */
     public long seed() {
         return seed;
     }

@@ -35,12 +35,17 @@ public final class InputDistribution implements Serializable {
     private final RealDistribution distribution;
     /** Human-readable description with the parameters. */
     private final String text;
-    /** Truncated normal only: mean, standard deviation, standardized bounds, mirrored flag. */
+    /** Truncated normal only: the mean. */
     private final double mean;
+    /** Truncated normal only: the standard deviation. */
     private final double sigma;
+    /** Truncated normal only: standard normal probability below the lower standardized bound (mirrored if so). */
     private final double lowProbability;
+    /** Truncated normal only: standard normal probability below the upper standardized bound (mirrored if so). */
     private final double highProbability;
+    /** Truncated normal only: whether the standardized bounds were mirrored (drawn as -b..-a). */
     private final boolean mirrored;
+    /** Whether this is a truncated normal distribution. */
     private final boolean truncated;
 
     private InputDistribution(RealDistribution distribution, String text, double mean, double sigma,

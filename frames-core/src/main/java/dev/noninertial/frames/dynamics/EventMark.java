@@ -35,7 +35,11 @@ public record EventMark(String eventName, FramedState state, boolean rising, boo
         Arguments.nonNull("state", state);
     }
 
-    /** @return the event time (s from the user's epoch) */
+    /**
+     * Returns the event time (s from the user's epoch).
+     *
+     * @return the event time (s from the user's epoch)
+     */
     public double time() {
         return state.time();
     }

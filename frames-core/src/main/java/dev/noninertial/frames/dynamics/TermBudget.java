@@ -84,12 +84,20 @@ public final class TermBudget {
         return new TermBudget(reference, Collections.unmodifiableMap(without));
     }
 
-    /** @return the end point of the run with every term the solver adds */
+    /**
+     * Returns the end point of the run with every term the solver adds.
+     *
+     * @return the end point of the run with every term the solver adds
+     */
     public FramedState reference() {
         return reference;
     }
 
-    /** @return the terms budgeted (those the solver adds) */
+    /**
+     * Returns the terms budgeted (those the solver adds).
+     *
+     * @return the terms budgeted (those the solver adds)
+     */
     public Set<InertialTerm> terms() {
         return without.keySet();
     }

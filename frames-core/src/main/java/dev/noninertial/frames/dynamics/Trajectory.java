@@ -65,27 +65,47 @@ public final class Trajectory {
         this.method = method;
     }
 
-    /** @return the integration frame, in which every state of this trajectory is seen and resolved */
+    /**
+     * Returns the integration frame, in which every state of this trajectory is seen and resolved.
+     *
+     * @return the integration frame, in which every state of this trajectory is seen and resolved
+     */
     public ReferenceFrame frame() {
         return equations.frame();
     }
 
-    /** @return start time of the span (s from the user's epoch) */
+    /**
+     * Returns start time of the span (s from the user's epoch).
+     *
+     * @return start time of the span (s from the user's epoch)
+     */
     public double startTime() {
         return startTime;
     }
 
-    /** @return end time of the span (s): the requested end, or the time of the event that stopped the run */
+    /**
+     * Returns end time of the span (s): the requested end, or the time of the event that stopped the run.
+     *
+     * @return end time of the span (s): the requested end, or the time of the event that stopped the run
+     */
     public double endTime() {
         return endTime;
     }
 
-    /** @return the point at {@link #startTime()}, in the integration frame, acceleration from the equations */
+    /**
+     * Returns the point at {@link #startTime()}, in the integration frame, acceleration from the equations.
+     *
+     * @return the point at {@link #startTime()}, in the integration frame, acceleration from the equations
+     */
     public FramedState initialState() {
         return equations.framed(startTime, startY);
     }
 
-    /** @return the point at {@link #endTime()}, in the integration frame, acceleration from the equations */
+    /**
+     * Returns the point at {@link #endTime()}, in the integration frame, acceleration from the equations.
+     *
+     * @return the point at {@link #endTime()}, in the integration frame, acceleration from the equations
+     */
     public FramedState finalState() {
         return equations.framed(endTime, endY);
     }
@@ -199,12 +219,20 @@ public final class Trajectory {
         return b.toString();
     }
 
-    /** @return the occurrence that ended the run, empty if the run reached the requested end time */
+    /**
+     * Returns the occurrence that ended the run, empty if the run reached the requested end time.
+     *
+     * @return the occurrence that ended the run, empty if the run reached the requested end time
+     */
     public Optional<EventMark> stopEvent() {
         return Optional.ofNullable(stop);
     }
 
-    /** @return every counted event occurrence, stopping one included, in time order */
+    /**
+     * Returns every counted event occurrence, stopping one included, in time order.
+     *
+     * @return every counted event occurrence, stopping one included, in time order
+     */
     public List<EventMark> events() {
         return marks;
     }
@@ -226,17 +254,29 @@ public final class Trajectory {
         return Collections.unmodifiableList(out);
     }
 
-    /** @return number of integration steps taken (pieces of dense output) */
+    /**
+     * Returns number of integration steps taken (pieces of dense output).
+     *
+     * @return number of integration steps taken (pieces of dense output)
+     */
     public int stepCount() {
         return steps.size();
     }
 
-    /** @return number of evaluations of the equations of motion during the run */
+    /**
+     * Returns number of evaluations of the equations of motion during the run.
+     *
+     * @return number of evaluations of the equations of motion during the run
+     */
     public int evaluations() {
         return evaluations;
     }
 
-    /** @return name of the integration method used */
+    /**
+     * Returns name of the integration method used.
+     *
+     * @return name of the integration method used
+     */
     public String method() {
         return method;
     }

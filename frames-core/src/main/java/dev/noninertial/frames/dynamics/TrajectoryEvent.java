@@ -148,22 +148,38 @@ public final class TrajectoryEvent {
         return name;
     }
 
-    /** @return a copy that ends the integration at its first counted occurrence */
+    /**
+     * Returns a copy that ends the integration at its first counted occurrence.
+     *
+     * @return a copy that ends the integration at its first counted occurrence
+     */
     public TrajectoryEvent stopping() {
         return new TrajectoryEvent(name, function, direction, true, checkInterval, timeAccuracy);
     }
 
-    /** @return a copy that records every counted occurrence and lets the integration go on */
+    /**
+     * Returns a copy that records every counted occurrence and lets the integration go on.
+     *
+     * @return a copy that records every counted occurrence and lets the integration go on
+     */
     public TrajectoryEvent recording() {
         return new TrajectoryEvent(name, function, direction, false, checkInterval, timeAccuracy);
     }
 
-    /** @return a copy counting only negative-to-positive crossings */
+    /**
+     * Returns a copy counting only negative-to-positive crossings.
+     *
+     * @return a copy counting only negative-to-positive crossings
+     */
     public TrajectoryEvent risingOnly() {
         return withDirection(Direction.RISING);
     }
 
-    /** @return a copy counting only positive-to-negative crossings */
+    /**
+     * Returns a copy counting only positive-to-negative crossings.
+     *
+     * @return a copy counting only positive-to-negative crossings
+     */
     public TrajectoryEvent fallingOnly() {
         return withDirection(Direction.FALLING);
     }
@@ -205,32 +221,56 @@ public final class TrajectoryEvent {
                 Arguments.positive("seconds", seconds));
     }
 
-    /** @return the name reported in {@link EventMark#eventName()} */
+    /**
+     * Returns the name reported in {@link EventMark#eventName()}.
+     *
+     * @return the name reported in {@link EventMark#eventName()}
+     */
     public String name() {
         return name;
     }
 
-    /** @return the crossing function */
+    /**
+     * Returns the crossing function.
+     *
+     * @return the crossing function
+     */
     public CrossingFunction function() {
         return function;
     }
 
-    /** @return which crossing directions count */
+    /**
+     * Returns which crossing directions count.
+     *
+     * @return which crossing directions count
+     */
     public Direction direction() {
         return direction;
     }
 
-    /** @return true if the first counted occurrence ends the integration */
+    /**
+     * Returns true if the first counted occurrence ends the integration.
+     *
+     * @return true if the first counted occurrence ends the integration
+     */
     public boolean stops() {
         return stops;
     }
 
-    /** @return largest time between sign checks (s) */
+    /**
+     * Returns largest time between sign checks (s).
+     *
+     * @return largest time between sign checks (s)
+     */
     public double checkInterval() {
         return checkInterval;
     }
 
-    /** @return accuracy of located event times (s) */
+    /**
+     * Returns accuracy of located event times (s).
+     *
+     * @return accuracy of located event times (s)
+     */
     public double timeAccuracy() {
         return timeAccuracy;
     }

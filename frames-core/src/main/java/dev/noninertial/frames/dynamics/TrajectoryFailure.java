@@ -38,7 +38,11 @@ public final class TrajectoryFailure extends RuntimeException {
                 y[0], y[1], y[2], y[3], y[4], y[5]);
     }
 
-    /** @return time of the failure (s from the user's epoch) */
+    /**
+     * Returns time of the failure (s from the user's epoch).
+     *
+     * @return time of the failure (s from the user's epoch)
+     */
     public double time() {
         return time;
     }

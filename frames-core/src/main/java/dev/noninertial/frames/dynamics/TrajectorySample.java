@@ -40,12 +40,20 @@ public record TrajectorySample(FramedState state, Vector3D realForce, Fictitious
         Arguments.nonNull("fictitious", fictitious);
     }
 
-    /** @return time of the sample (s from the user's epoch) */
+    /**
+     * Returns time of the sample (s from the user's epoch).
+     *
+     * @return time of the sample (s from the user's epoch)
+     */
     public double time() {
         return state.time();
     }
 
-    /** @return total acceleration seen in the integration frame: real force plus the four terms (m/s^2) */
+    /**
+     * Returns total acceleration seen in the integration frame: real force plus the four terms (m/s^2).
+     *
+     * @return total acceleration seen in the integration frame: real force plus the four terms (m/s^2)
+     */
     public Vector3D acceleration() {
         return realForce.add(fictitious.total());
     }

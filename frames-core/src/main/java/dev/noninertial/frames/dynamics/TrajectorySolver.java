@@ -304,22 +304,38 @@ public final class TrajectorySolver {
                 Collections.unmodifiableSet(copy));
     }
 
-    /** @return the inertial terms this solver adds (all four unless some were left out) */
+    /**
+     * Returns the inertial terms this solver adds (all four unless some were left out).
+     *
+     * @return the inertial terms this solver adds (all four unless some were left out)
+     */
     public Set<InertialTerm> terms() {
         return included;
     }
 
-    /** @return the integration frame */
+    /**
+     * Returns the integration frame.
+     *
+     * @return the integration frame
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return the real specific forces, in the order given */
+    /**
+     * Returns the real specific forces, in the order given.
+     *
+     * @return the real specific forces, in the order given
+     */
     public List<SpecificForce> forces() {
         return forces;
     }
 
-    /** @return the events watched, in the order given */
+    /**
+     * Returns the events watched, in the order given.
+     *
+     * @return the events watched, in the order given
+     */
     public List<TrajectoryEvent> events() {
         return events;
     }

@@ -287,17 +287,29 @@ public final class SampledMotion implements Motion, Serializable {
 
     // ------------------------------------------------------------------ accessors
 
-    /** @return number of samples */
+    /**
+     * Returns number of samples.
+     *
+     * @return number of samples
+     */
     public int sampleCount() {
         return times.length;
     }
 
-    /** @return time of the first sample (s) */
+    /**
+     * Returns time of the first sample (s).
+     *
+     * @return time of the first sample (s)
+     */
     public double startTime() {
         return times[0];
     }
 
-    /** @return time of the last sample (s) */
+    /**
+     * Returns time of the last sample (s).
+     *
+     * @return time of the last sample (s)
+     */
     public double endTime() {
         return times[times.length - 1];
     }
@@ -316,17 +328,29 @@ public final class SampledMotion implements Motion, Serializable {
         return times[index];
     }
 
-    /** @return longest interval between samples that is still interpolated (s), infinite if no limit */
+    /**
+     * Returns longest interval between samples that is still interpolated (s), infinite if no limit.
+     *
+     * @return longest interval between samples that is still interpolated (s), infinite if no limit
+     */
     public double maxGap() {
         return maxGap;
     }
 
-    /** @return whether measured origin velocities are used */
+    /**
+     * Returns whether measured origin velocities are used.
+     *
+     * @return whether measured origin velocities are used
+     */
     public boolean hasMeasuredVelocities() {
         return velocities != null;
     }
 
-    /** @return whether measured angular rates are used */
+    /**
+     * Returns whether measured angular rates are used.
+     *
+     * @return whether measured angular rates are used
+     */
     public boolean hasMeasuredAngularVelocities() {
         return rates != null;
     }
@@ -345,7 +369,11 @@ public final class SampledMotion implements Motion, Serializable {
         return usableSegment(t, segment(t)) >= 0;
     }
 
-    /** @return bytes held by the sample arrays (array headers included, 16 bytes each) */
+    /**
+     * Returns bytes held by the sample arrays (array headers included, 16 bytes each).
+     *
+     * @return bytes held by the sample arrays (array headers included, 16 bytes each)
+     */
     long heldBytes() {
         long bytes = 16L * 3 + 8L * (times.length + positions.length + attitudes.length);
         if (velocities != null) {
@@ -465,7 +493,11 @@ public final class SampledMotion implements Motion, Serializable {
         return lo;
     }
 
-    /** @return the interval index the search finds for t (tests compare it with the JDK's search) */
+    /**
+     * Returns the interval index the search finds for t (tests compare it with the JDK's search).
+     *
+     * @return the interval index the search finds for t (tests compare it with the JDK's search)
+     */
     int intervalIndex(double t) {
         return segment(t);
     }

@@ -76,7 +76,11 @@ public final class PlacementUncertainty implements Serializable {
         return new PlacementUncertainty(diagonal(attitudeSigma * attitudeSigma), diagonal(originSigma * originSigma));
     }
 
-    /** @return an exactly known placement: both covariances zero */
+    /**
+     * Returns an exactly known placement: both covariances zero.
+     *
+     * @return an exactly known placement: both covariances zero
+     */
     public static PlacementUncertainty none() {
         return NONE;
     }
@@ -85,12 +89,20 @@ public final class PlacementUncertainty implements Serializable {
         return new double[][] {{variance, 0, 0}, {0, variance, 0}, {0, 0, variance}};
     }
 
-    /** @return a new 3x3 covariance of the attitude rotation vector, resolved in F (rad^2) */
+    /**
+     * Returns a new 3x3 covariance of the attitude rotation vector, resolved in F (rad^2).
+     *
+     * @return a new 3x3 covariance of the attitude rotation vector, resolved in F (rad^2)
+     */
     public RealMatrix attitudeCovariance() {
         return MatrixUtils.createRealMatrix(attitude);
     }
 
-    /** @return a new 3x3 covariance of the origin error, resolved in B (m^2) */
+    /**
+     * Returns a new 3x3 covariance of the origin error, resolved in B (m^2).
+     *
+     * @return a new 3x3 covariance of the origin error, resolved in B (m^2)
+     */
     public RealMatrix originCovariance() {
         return MatrixUtils.createRealMatrix(origin);
     }

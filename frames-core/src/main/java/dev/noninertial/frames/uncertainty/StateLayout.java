@@ -24,7 +24,11 @@ public enum StateLayout {
         this.size = size;
     }
 
-    /** @return number of state components (6 or 9), the row and column count of the covariance */
+    /**
+     * Returns number of state components (6 or 9), the row and column count of the covariance.
+     *
+     * @return number of state components (6 or 9), the row and column count of the covariance
+     */
     public int size() {
         return size;
     }

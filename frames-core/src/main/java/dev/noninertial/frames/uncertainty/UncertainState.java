@@ -84,27 +84,47 @@ public final class UncertainState implements Serializable {
         return new UncertainState(mean, layout, CovarianceCheck.checkedCopy("covariance", covariance, layout.size()));
     }
 
-    /** @return the mean state, tagged with frame and time */
+    /**
+     * Returns the mean state, tagged with frame and time.
+     *
+     * @return the mean state, tagged with frame and time
+     */
     public FramedState mean() {
         return mean;
     }
 
-    /** @return the frame the mean and the covariance are seen in and resolved in */
+    /**
+     * Returns the frame the mean and the covariance are seen in and resolved in.
+     *
+     * @return the frame the mean and the covariance are seen in and resolved in
+     */
     public ReferenceFrame frame() {
         return mean.frame();
     }
 
-    /** @return time (s) */
+    /**
+     * Returns time (s).
+     *
+     * @return time (s)
+     */
     public double time() {
         return mean.time();
     }
 
-    /** @return which components the covariance covers */
+    /**
+     * Returns which components the covariance covers.
+     *
+     * @return which components the covariance covers
+     */
     public StateLayout layout() {
         return layout;
     }
 
-    /** @return a new copy of the covariance, {@code layout().size()} square */
+    /**
+     * Returns a new copy of the covariance, {@code layout().size()} square.
+     *
+     * @return a new copy of the covariance, {@code layout().size()} square
+     */
     public RealMatrix covariance() {
         return MatrixUtils.createRealMatrix(covariance);
     }

@@ -164,22 +164,38 @@ public final class AirDrag implements SpecificForce, Serializable {
         return new AirDrag(frame, earthFixed, ellipsoid, air, curve, newAreaOverMass, wind);
     }
 
-    /** @return the integration frame */
+    /**
+     * Returns the integration frame.
+     *
+     * @return the integration frame
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return the reference area over the mass (m^2/kg) */
+    /**
+     * Returns the reference area over the mass (m^2/kg).
+     *
+     * @return the reference area over the mass (m^2/kg)
+     */
     public double areaOverMass() {
         return areaOverMass;
     }
 
-    /** @return the drag coefficient table */
+    /**
+     * Returns the drag coefficient table.
+     *
+     * @return the drag coefficient table
+     */
     public DragCurve curve() {
         return curve;
     }
 
-    /** @return the wind */
+    /**
+     * Returns the wind.
+     *
+     * @return the wind
+     */
     public WindProfile wind() {
         return wind;
     }

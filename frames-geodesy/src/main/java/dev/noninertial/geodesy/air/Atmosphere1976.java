@@ -86,7 +86,11 @@ public final class Atmosphere1976 implements Serializable {
     private Atmosphere1976() {
     }
 
-    /** @return the standard atmosphere (one shared, immutable instance) */
+    /**
+     * Returns the standard atmosphere (one shared, immutable instance).
+     *
+     * @return the standard atmosphere (one shared, immutable instance)
+     */
     public static Atmosphere1976 standard() {
         return STANDARD;
     }

@@ -93,17 +93,29 @@ public final class DragCurve implements Serializable {
         return new DragCurve(new double[] {0.0, Double.MAX_VALUE}, new double[] {dragCoefficient, dragCoefficient});
     }
 
-    /** @return the smallest Mach number of the table */
+    /**
+     * Returns the smallest Mach number of the table.
+     *
+     * @return the smallest Mach number of the table
+     */
     public double minMach() {
         return mach[0];
     }
 
-    /** @return the largest Mach number of the table */
+    /**
+     * Returns the largest Mach number of the table.
+     *
+     * @return the largest Mach number of the table
+     */
     public double maxMach() {
         return mach[mach.length - 1];
     }
 
-    /** @return the number of table points */
+    /**
+     * Returns the number of table points.
+     *
+     * @return the number of table points
+     */
     public int size() {
         return mach.length;
     }

@@ -43,7 +43,11 @@ public interface WindProfile extends Serializable {
         return false;
     }
 
-    /** @return no wind at any height and time */
+    /**
+     * Returns no wind at any height and time.
+     *
+     * @return no wind at any height and time
+     */
     static WindProfile calm() {
         return Calm.INSTANCE;
     }

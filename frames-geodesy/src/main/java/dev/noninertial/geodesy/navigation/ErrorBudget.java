@@ -58,9 +58,13 @@ public final class ErrorBudget implements Serializable {
         }
     }
 
+    /** The final state of the run with every term included. */
     private final NavigationState reference;
+    /** Duration of each run (s). */
     private final double duration;
+    /** Number of steps of each run. */
     private final int steps;
+    /** The effect of leaving out each term, one entry per term. */
     private final List<TermEffect> effects;
 
     private ErrorBudget(NavigationState reference, double duration, int steps, List<TermEffect> effects) {
@@ -194,22 +198,38 @@ public final class ErrorBudget implements Serializable {
         return 2.0 * Math.asin(Math.min(1.0, Math.sqrt(x * x + y * y + z * z)));
     }
 
-    /** @return the end state of the reference run (every term included) */
+    /**
+     * Returns the end state of the reference run (every term included).
+     *
+     * @return the end state of the reference run (every term included)
+     */
     public NavigationState reference() {
         return reference;
     }
 
-    /** @return duration of the run (s) */
+    /**
+     * Returns duration of the run (s).
+     *
+     * @return duration of the run (s)
+     */
     public double duration() {
         return duration;
     }
 
-    /** @return number of steps of the run */
+    /**
+     * Returns number of steps of the run.
+     *
+     * @return number of steps of the run
+     */
     public int steps() {
         return steps;
     }
 
-    /** @return one effect per term, in the order of {@link NavigationTerm#values()} */
+    /**
+     * Returns one effect per term, in the order of {@link NavigationTerm#values()}.
+     *
+     * @return one effect per term, in the order of {@link NavigationTerm#values()}
+     */
     public List<TermEffect> effects() {
         return effects;
     }

@@ -92,11 +92,17 @@ public final class LevelNavigator implements Serializable {
     /** Values per step written by the traced bulk run: time, lat, lon, h, velocity (3), attitude quaternion (4). */
     public static final int TRACE_VALUES = 11;
 
+    /** The Earth model (ellipsoid, rotation rate, normal gravity). */
     private final EarthModel model;
+    /** The local-level axes of the navigation frame. */
     private final LocalAxes axes;
+    /** The terms included in the mechanization. */
     private final EnumSet<NavigationTerm> included;
+    /** Lever arms of the x, y and z accelerometers from the centre, body axes (m), nine values. */
     private final double[] offsets;
+    /** Where gravity is taken when its height or latitude dependence is left out; null: at zero. */
     private final LatLonHeight gravityReference;
+    /** The step kernel on primitives. */
     private final LevelKernel kernel;
 
     private LevelNavigator(EarthModel model, LocalAxes axes, EnumSet<NavigationTerm> included, double[] offsets,
@@ -128,17 +134,29 @@ public final class LevelNavigator implements Serializable {
         return new LevelNavigator(model, axes, EnumSet.allOf(NavigationTerm.class), new double[9], null);
     }
 
-    /** @return the Earth model */
+    /**
+     * Returns the Earth model.
+     *
+     * @return the Earth model
+     */
     public EarthModel model() {
         return model;
     }
 
-    /** @return the level axes of states and terms */
+    /**
+     * Returns the level axes of states and terms.
+     *
+     * @return the level axes of states and terms
+     */
     public LocalAxes axes() {
         return axes;
     }
 
-    /** @return the terms included (a copy) */
+    /**
+     * Returns the terms included (a copy).
+     *
+     * @return the terms included (a copy)
+     */
     public Set<NavigationTerm> included() {
         return EnumSet.copyOf(included);
     }
@@ -504,7 +522,11 @@ public final class LevelNavigator implements Serializable {
         }
     }
 
-    /** @return the gravity reference, or null if none is set */
+    /**
+     * Returns the gravity reference, or null if none is set.
+     *
+     * @return the gravity reference, or null if none is set
+     */
     LatLonHeight gravityReference() {
         return gravityReference;
     }

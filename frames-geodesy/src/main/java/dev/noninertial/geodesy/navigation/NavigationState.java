@@ -104,42 +104,74 @@ public final class NavigationState implements Serializable {
                 q[0], q[1], q[2], q[3], 0L, null);
     }
 
-    /** @return time (s) */
+    /**
+     * Returns time (s).
+     *
+     * @return time (s)
+     */
     public double time() {
         return time;
     }
 
-    /** @return geodetic position (rad, m) */
+    /**
+     * Returns geodetic position (rad, m).
+     *
+     * @return geodetic position (rad, m)
+     */
     public LatLonHeight position() {
         return position;
     }
 
-    /** @return the level axes of {@link #velocity()} and {@link #attitude()} */
+    /**
+     * Returns the level axes of {@link #velocity()} and {@link #attitude()}.
+     *
+     * @return the level axes of {@link #velocity()} and {@link #attitude()}
+     */
     public LocalAxes axes() {
         return axes;
     }
 
-    /** @return velocity relative to the Earth-fixed frame (m/s), resolved in {@link #axes()} */
+    /**
+     * Returns velocity relative to the Earth-fixed frame (m/s), resolved in {@link #axes()}.
+     *
+     * @return velocity relative to the Earth-fixed frame (m/s), resolved in {@link #axes()}
+     */
     public Vector3D velocity() {
         return new Vector3D(v1, v2, v3);
     }
 
-    /** @return orientation of the body in the level frame, {@code v_body = R v_level} */
+    /**
+     * Returns orientation of the body in the level frame, {@code v_body = R v_level}.
+     *
+     * @return orientation of the body in the level frame, {@code v_body = R v_level}
+     */
     public Rotation attitude() {
         return Orientations.fromQuaternion(q0, q1, q2, q3);
     }
 
-    /** @return number of steps taken since the state made by {@link #of} */
+    /**
+     * Returns number of steps taken since the state made by {@link #of}.
+     *
+     * @return number of steps taken since the state made by {@link #of}
+     */
     public long step() {
         return step;
     }
 
-    /** @return true if the state carries the previous step's increments (for coning and sculling) */
+    /**
+     * Returns true if the state carries the previous step's increments (for coning and sculling).
+     *
+     * @return true if the state carries the previous step's increments (for coning and sculling)
+     */
     public boolean hasHistory() {
         return history != null;
     }
 
-    /** @return a copy without the increment history (the next step starts the corrections afresh) */
+    /**
+     * Returns a copy without the increment history (the next step starts the corrections afresh).
+     *
+     * @return a copy without the increment history (the next step starts the corrections afresh)
+     */
     public NavigationState withoutHistory() {
         return new NavigationState(time, position, axes, v1, v2, v3, q0, q1, q2, q3, step, null);
     }

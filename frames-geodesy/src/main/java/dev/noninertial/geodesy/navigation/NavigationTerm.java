@@ -42,7 +42,11 @@ public enum NavigationTerm {
         this.label = label;
     }
 
-    /** @return a short readable label, as printed in the error-budget table */
+    /**
+     * Returns a short readable label, as printed in the error-budget table.
+     *
+     * @return a short readable label, as printed in the error-budget table
+     */
     public String label() {
         return label;
     }
