@@ -54,9 +54,10 @@ public final class ScenarioRunner {
         print.println(CAUTION);
         print.println();
         DemoSetting setting = new DemoSetting();
-        List<ScenarioTable> tables = List.of(SiteRotationScenario.run(setting), ShipCraneScenario.run(setting),
-                LongRangeScenario.run(setting));
-        tables = SurveyFlightScenario.appendTo(tables, setting);
+        List<ScenarioTable> tables = new java.util.ArrayList<>(List.of(SiteRotationScenario.run(setting),
+                ShipCraneScenario.run(setting), LongRangeScenario.run(setting)));
+        tables.addAll(SensorTruthScenario.run(setting));
+        tables.addAll(List.of(SurveyFlightScenario.run(setting)));
         if (out != null) {
             Files.createDirectories(out);
         }

@@ -26,14 +26,23 @@ final class ShipCraneScenario {
     private ShipCraneScenario() {
     }
 
-    static ScenarioTable run(DemoSetting s) {
+    /** Crane tip: 22 m forward, 9 m to port, 31 m above the hull origin; hook lowered at 0.4 m/s. */
+    static final PointState HOOK = PointState.of(new Vector3D(22.0, -9.0, -31.0), new Vector3D(0.0, 0.0, 0.4));
+
+    /** The carried level frame (NED) of MV Tarrowind, 9 kn on course 060. */
+    static ReferenceFrame level(DemoSetting s) {
         double speed = Units.knots(9.0);
         double course = Units.degrees(60.0);
         LatLonHeight start = LatLonHeight.ofDegrees(57.60, 11.20, 0.0);
-        ReferenceFrame level = s.earth.carriedLevel("Tarrowind level (NED)",
+        return s.earth.carriedLevel("Tarrowind level (NED)",
                 GeodeticPath.steadyCourse(s.model.ellipsoid(), start,
                         new Vector3D(speed * Math.cos(course), speed * Math.sin(course), 0), LocalAxes.NED),
                 LocalAxes.NED);
+    }
+
+    /** The heaving, rolling, pitching hull (x fwd, y stbd, z down) on a level frame made by {@link #level}. */
+    static ReferenceFrame hull(DemoSetting s, ReferenceFrame level) {
+        double course = Units.degrees(60.0);
         // heave: 1.1 m amplitude, 9 s period, along NED down
         ReferenceFrame heaving = level.attach("Tarrowind heave", Motions.heave(Vector3D.PLUS_K, 1.1,
                 2 * Math.PI / 9.0, 0.0));
@@ -41,15 +50,19 @@ final class ShipCraneScenario {
         double rollW = 2 * Math.PI / 10.0;
         double pitchAmp = Units.degrees(1.5);
         double pitchW = 2 * Math.PI / 7.0;
-        ReferenceFrame hull = s.earth.body("Tarrowind hull (x fwd, y stbd, z down)", heaving, t -> {
+        return s.earth.body("Tarrowind hull (x fwd, y stbd, z down)", heaving, t -> {
             double sr = Math.sin(rollW * t);
             double sp = Math.sin(pitchW * t + 0.7);
             return new AttitudeSample(course, pitchAmp * sp, rollAmp * sr,
                     0.0, pitchAmp * pitchW * Math.cos(pitchW * t + 0.7), rollAmp * rollW * Math.cos(rollW * t),
                     0.0, -pitchW * pitchW * pitchAmp * sp, -rollW * rollW * rollAmp * sr);
         }, LocalAxes.NED);
-        // crane tip: 22 m forward, 9 m to port, 31 m above the hull origin; hook lowered at 0.4 m/s
-        PointState hook = PointState.of(new Vector3D(22.0, -9.0, -31.0), new Vector3D(0.0, 0.0, 0.4));
+    }
+
+    static ScenarioTable run(DemoSetting s) {
+        ReferenceFrame level = level(s);
+        ReferenceFrame hull = hull(s, level);
+        PointState hook = HOOK;
         ReferenceFrame inertial = s.earth.inertial();
         ScenarioTable table = new ScenarioTable("ship-crane",
                 "MV Tarrowind (invented) crane hook: inertial terms against ECI, hull axes, 9 kn on 060")

@@ -134,19 +134,6 @@ final class SurveyFlightScenario {
         return new ScenarioTable[] {table, terms};
     }
 
-    /**
-     * The tables of this scenario after those given (the runner's one-line hook).
-     *
-     * @param before the tables of the other scenarios
-     * @param s the shared setting
-     * @return a new list: {@code before}, then the navigation and error-budget tables
-     */
-    static java.util.List<ScenarioTable> appendTo(java.util.List<ScenarioTable> before, DemoSetting s) {
-        java.util.List<ScenarioTable> all = new java.util.ArrayList<>(before);
-        all.addAll(java.util.List.of(run(s)));
-        return all;
-    }
-
     /** Horizontal and vertical position error (m) and attitude error (rad) of trace record k. */
     private static double[] errors(double[] trace, int k, NavigationState truth) {
         int o = LevelNavigator.TRACE_VALUES * k;

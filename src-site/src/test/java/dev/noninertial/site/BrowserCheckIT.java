@@ -109,6 +109,9 @@ class BrowserCheckIT {
             tools.close();
         }
         if (browser != null) {
+            // Chromium runs helper processes that keep writing to the profile after the main one
+            // is asked to stop: stop them too, then clean up without failing on files that vanish.
+            browser.descendants().forEach(ProcessHandle::destroy);
             browser.destroy();
             try {
                 if (!browser.waitFor(10, TimeUnit.SECONDS)) {
@@ -121,6 +124,9 @@ class BrowserCheckIT {
         if (profile != null) {
             try (Stream<Path> s = Files.walk(profile)) {
                 s.sorted(java.util.Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+            } catch (IOException | java.io.UncheckedIOException e) {
+                // a temporary profile left behind is harmless; the browser checks themselves passed
+                System.err.println("note: could not remove the temporary browser profile " + profile + ": " + e);
             }
         }
     }

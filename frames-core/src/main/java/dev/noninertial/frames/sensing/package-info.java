@@ -1,7 +1,8 @@
 /**
  * What inertial sensors fixed in a frame read: ideal specific force and angular rate
  * ({@link dev.noninertial.frames.sensing.IdealSensor}), their exact increments over intervals
- * ({@link dev.noninertial.frames.sensing.SensorIncrements}).
+ * ({@link dev.noninertial.frames.sensing.SensorIncrements}), and a seeded model of the errors of
+ * real sensors ({@link dev.noninertial.frames.sensing.SensorImperfections}).
  *
  * <p><b>Sign rule.</b> An accelerometer measures specific force, {@code f = a_inertial - gravitation}:
  * at rest on the Earth it reads minus normal gravity (upward, about 9.8 m/s^2). A gyro measures the
