@@ -61,10 +61,15 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
         Vector3D eu = k.euler();
         Vector3D co = k.coriolis();
         Vector3D ce = k.centrifugal();
-        return new double[] {y[3], y[4], y[5],
+        double[] d = {y[3], y[4], y[5],
             f.getX() + fr.getX() + eu.getX() + co.getX() + ce.getX(),
             f.getY() + fr.getY() + eu.getY() + co.getY() + ce.getY(),
             f.getZ() + fr.getZ() + eu.getZ() + co.getZ() + ce.getZ()};
+        if (!Double.isFinite(d[3]) || !Double.isFinite(d[4]) || !Double.isFinite(d[5])) {
+            throw new TrajectoryFailure("the acceleration overflows: real forces " + f + " m/s^2 plus the inertial terms "
+                    + k + " of frame '" + frame.path() + "'", t, y, null);
+        }
+        return d;
     }
 
     /** The four terms with the left-out ones set to zero. */
@@ -115,11 +120,10 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
             } catch (TrajectoryFailure e) {
                 throw e;
             } catch (RuntimeException e) {
-                // a trial step of an adaptive scheme may probe far past an event (underground, say):
-                // the usual cure is a step limit, so say so
-                throw new TrajectoryFailure("specific force #" + i + " (" + forces[i] + ") threw " + e
-                        + "; if the force is defined only in a region, limit the step with"
-                        + " TrajectorySolver.withMaxStep", t, y, e);
+                // an argument refusal may come from a trial step probing past the force's region:
+                // the solver then adds the hint about a step limit (not for other exceptions)
+                throw new TrajectoryFailure("specific force #" + i + " (" + forces[i] + ") threw " + e, t, y, e,
+                        e instanceof IllegalArgumentException);
             }
             if (f == null) {
                 throw new TrajectoryFailure("specific force #" + i + " returned null", t, y, null);
@@ -131,6 +135,10 @@ final class MotionEquations implements OrdinaryDifferentialEquation {
             fx += f.getX();
             fy += f.getY();
             fz += f.getZ();
+            if (!Double.isFinite(fx) || !Double.isFinite(fy) || !Double.isFinite(fz)) {
+                throw new TrajectoryFailure("the sum of the specific forces overflows when force #" + i + " ("
+                        + forces[i] + ") adds (" + f.getX() + ", " + f.getY() + ", " + f.getZ() + ") m/s^2", t, y, null);
+            }
         }
         return new Vector3D(fx, fy, fz);
     }

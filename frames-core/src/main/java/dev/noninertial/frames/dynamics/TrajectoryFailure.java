@@ -1,6 +1,7 @@
 package dev.noninertial.frames.dynamics;
 
 import java.util.Locale;
+import java.util.Optional;
 
 import dev.noninertial.frames.Formats;
 
@@ -13,7 +14,12 @@ import dev.noninertial.frames.Formats;
  * <p><b>Conventions.</b> {@link #time()} in s from the user's epoch; {@link #components()} are
  * x, y, z (m) and vx, vy, vz (m/s), seen in and resolved in the integration frame.
  *
- * <p>Immutable once thrown and safe to pass between threads.
+ * <p>A failure during {@link TrajectorySolver#solve} carries the part of the trajectory computed
+ * before it ({@link #partial()}): every accepted step up to the last one before the failure,
+ * with its dense output, events and breakdown, like any {@link Trajectory}.
+ *
+ * <p>Immutable once thrown and safe to pass between threads. The partial trajectory is not
+ * serialized (it holds the integrator's dense output).
  */
 public final class TrajectoryFailure extends RuntimeException {
 
@@ -23,11 +29,55 @@ public final class TrajectoryFailure extends RuntimeException {
     private final double time;
     /** x, y, z, vx, vy, vz at the failure, empty if unknown. */
     private final double[] components;
+    /** The trajectory up to the last accepted step before the failure, null if none. */
+    private final transient Trajectory partial;
+    /** Whether a force refused its arguments (a region limit): a step limit may then help. */
+    private final boolean forceRefusal;
 
     TrajectoryFailure(String what, double time, double[] y, Throwable cause) {
+        this(what, time, y, cause, false);
+    }
+
+    TrajectoryFailure(String what, double time, double[] y, Throwable cause, boolean forceRefusal) {
         super(what + " at t = " + Formats.number(time) + " s, " + describe(y), cause);
         this.time = time;
         this.components = y == null ? new double[0] : y.clone();
+        this.partial = null;
+        this.forceRefusal = forceRefusal;
+    }
+
+    /** The same failure with a message, a time and the partial trajectory set by the solver. */
+    private TrajectoryFailure(String message, double time, double[] components, Throwable cause,
+                              Trajectory partial, boolean forceRefusal) {
+        super(message, cause);
+        this.time = time;
+        this.components = components;
+        this.partial = partial;
+        this.forceRefusal = forceRefusal;
+    }
+
+    /**
+     * The failure as the solver reports it: the partial trajectory attached, a time that is never
+     * NaN (the last accepted time when the integrator failed at an unknown time), and the hint
+     * about a step limit only where it can help.
+     */
+    TrajectoryFailure completed(Trajectory computed, double lastGoodTime, double startTime) {
+        double t = Double.isFinite(time) ? time : lastGoodTime;
+        String message = getMessage();
+        if (!Double.isFinite(time)) {
+            message = message + " (the integrator reported no valid time; last accepted time "
+                    + Formats.number(lastGoodTime) + " s)";
+        }
+        if (forceRefusal && t != startTime) {
+            // a trial step of an adaptive scheme may probe past the region where a force is
+            // defined (underground, say): the usual cure is a step limit. Not at the start state,
+            // where no step was taken and a step limit cannot help
+            message = message + "; if the force is defined only in a region, limit the step with"
+                    + " TrajectorySolver.withMaxStep";
+        }
+        TrajectoryFailure done = new TrajectoryFailure(message, t, components, getCause(), computed, forceRefusal);
+        done.setStackTrace(getStackTrace());
+        return done;
     }
 
     static String describe(double[] y) {
@@ -54,5 +104,15 @@ public final class TrajectoryFailure extends RuntimeException {
      */
     public double[] components() {
         return components.clone();
+    }
+
+    /**
+     * The trajectory computed before the failure.
+     *
+     * @return the accepted steps from the start up to the last one before the failure, empty if
+     *         the failure came before the first accepted step (or the failure was deserialized)
+     */
+    public Optional<Trajectory> partial() {
+        return Optional.ofNullable(partial);
     }
 }

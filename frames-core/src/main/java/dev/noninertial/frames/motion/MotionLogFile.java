@@ -83,14 +83,32 @@ final class MotionLogFile {
     }
 
     static MotionLogFile read(Path file) throws IOException {
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return parse(in, file.toString());
+        // two passes: count the rows first, then parse into arrays of their final size, so the
+        // peak memory stays near the result (no growth copies, no final trimming copy)
+        int rows = 0;
+        try (BufferedReader in = LogText.open(file)) {
+            String line;
+            boolean header = false;
+            while ((line = in.readLine()) != null) {
+                String trimmed = line.trim();
+                if (trimmed.isEmpty() || trimmed.charAt(0) == '#') {
+                    continue;
+                }
+                if (header) {
+                    rows++;
+                } else {
+                    header = true;
+                }
+            }
+        }
+        try (BufferedReader in = LogText.open(file)) {
+            return parse(in, file.toString(), Math.max(rows, 2));
         }
     }
 
     static MotionLogFile read(Reader source, String name) throws IOException {
         BufferedReader in = source instanceof BufferedReader ? (BufferedReader) source : new BufferedReader(source);
-        return parse(in, name);
+        return parse(in, name, 1024);
     }
 
     SampledMotion toMotion() {
@@ -106,13 +124,13 @@ final class MotionLogFile {
 
     // ------------------------------------------------------------------ parsing
 
-    private static MotionLogFile parse(BufferedReader in, String source) throws IOException {
+    private static MotionLogFile parse(BufferedReader in, String source, int expectedRows) throws IOException {
         String line;
         int lineNumber = 0;
         Column[] columns = null;
         double[] factors = null;
         int headerLine = 0;
-        int capacity = 1024;
+        int capacity = expectedRows;
         int n = 0;
         double[] t = new double[capacity];
         double[] pos = new double[3 * capacity];
@@ -128,12 +146,14 @@ final class MotionLogFile {
             if (lineNumber == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') {
                 line = line.substring(1);
             }
+            LogText.checkLine(line, source, lineNumber);
             String trimmed = line.trim();
             if (trimmed.isEmpty() || trimmed.charAt(0) == '#') {
                 continue;
             }
             if (columns == null) {
                 headerLine = lineNumber;
+                LogText.checkSeparator(trimmed, source, lineNumber);
                 columns = header(trimmed, source, lineNumber);
                 Arrays.fill(slot, -1);
                 for (int c = 0; c < columns.length; c++) {
@@ -201,6 +221,10 @@ final class MotionLogFile {
             throw new IllegalArgumentException(source + ": needs at least 2 sample rows after the header on line "
                     + headerLine + ", got " + n);
         }
+        if (n == capacity) {
+            // the counted size: the arrays are already exact, no trimming copy
+            return new MotionLogFile(source, n, t, pos, quat, vel, rate, lines);
+        }
         return new MotionLogFile(source, n, Arrays.copyOf(t, n), Arrays.copyOf(pos, 3 * n),
                 Arrays.copyOf(quat, 4 * n), vel == null ? null : Arrays.copyOf(vel, 3 * n),
                 rate == null ? null : Arrays.copyOf(rate, 3 * n), lines);
@@ -219,13 +243,14 @@ final class MotionLogFile {
             int open = field.indexOf('[');
             if (open <= 0 || !field.endsWith("]")) {
                 throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
-                        + ": '" + field + "' must read name[unit], for example t[s] or yaw[deg]");
+                        + ": " + LogText.quoted(field) + " must read name[unit], for example t[s] or yaw[deg]");
             }
             String name = field.substring(0, open).trim();
             Column c = byLabel.get(name);
             if (c == null) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header): unknown column '"
-                        + name + "'; known columns: " + String.join(", ", byLabel.keySet()));
+                throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
+                        + ": unknown column " + LogText.quoted(name) + "; known columns: "
+                        + String.join(", ", byLabel.keySet()));
             }
             if (seen[c.ordinal()]) {
                 throw new IllegalArgumentException(source + " line " + lineNumber + " (header): column '" + name
@@ -279,8 +304,8 @@ final class MotionLogFile {
             Kind kind = columns[k].kind;
             int u = Arrays.asList(kind.units).indexOf(unit);
             if (u < 0) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header): unit '" + unit
-                        + "' not allowed for column " + columns[k].label + "; allowed: "
+                throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
+                        + ": unit " + LogText.quoted(unit) + " not allowed for column " + columns[k].label + "; allowed: "
                         + String.join(", ", kind.units));
             }
             factors[k] = kind.factors[u];
@@ -304,15 +329,12 @@ final class MotionLogFile {
                         + " comma-separated fields as in the header, got more");
             }
             int stop = comma < 0 ? length : comma;
-            double parsed = decimal(text, start, stop);
-            if (Double.isNaN(parsed)) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + ", column " + columns[k].label
-                        + ": '" + text.substring(start, stop).trim() + "' is not a decimal number");
-            }
+            double parsed = LogText.number(text, start, stop, source, lineNumber, columns[k].label);
             double value = parsed * factors[k];
-            if (!Double.isFinite(value)) {
+            if (!Double.isFinite(value) || (value == 0.0 && parsed != 0.0)) {
                 throw new IllegalArgumentException(source + " line " + lineNumber + ", column " + columns[k].label
-                        + ": value " + text.substring(start, stop).trim() + " is not finite");
+                        + " (character " + (start + 1) + "): value " + LogText.quoted(text.substring(start, stop).trim())
+                        + " leaves the double range in SI units");
             }
             row[columns[k].ordinal()] = value;
             start = stop + 1;

@@ -141,7 +141,7 @@ class MotionLogFileTest {
         m = refusal(HEADER + ok + "1, 0, NaN, 0, 1, 0, 0, 0\n");
         assertTrue(m.contains("line 5, column y"), m);
         m = refusal(HEADER + ok + "1, 0, 1e999, 0, 1, 0, 0, 0\n");
-        assertTrue(m.contains("line 5, column y") && m.contains("not finite"), m);
+        assertTrue(m.contains("line 5, column y") && m.contains("overflows the double range"), m);
         m = refusal(HEADER + ok + "1, 0, , 0, 1, 0, 0, 0\n");
         assertTrue(m.contains("line 5, column y"), m);
         m = refusal(HEADER + ok + "# note\n0, 0, 0, 0, 1, 0, 0, 0\n");
