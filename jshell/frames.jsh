@@ -16,3 +16,4 @@ import dev.noninertial.frames.sensing.*;
 import dev.noninertial.geodesy.*;
 import dev.noninertial.geodesy.air.*;
 import dev.noninertial.geodesy.navigation.*;
+import dev.noninertial.frames.sensing.*;
