@@ -115,6 +115,21 @@ public final class IdealSensor implements Serializable {
         this.root = frame.root();
     }
 
+    /** A stream is untrusted input: the checks of the factory and of {@link #withTolerance(double)}. */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("frame", frame);
+            Arguments.nonNull("gravitation", gravitation);
+            Arguments.inRange("tolerance", tolerance, 1e-15, 1e-3);
+            if (root != frame.root()) {
+                throw new IllegalArgumentException("root must be the root of the sensor frame's tree");
+            }
+        } catch (RuntimeException e) {
+            throw Arguments.refusedStream(IdealSensor.class, e);
+        }
+    }
+
     /**
      * An ideal sensor fixed in a frame.
      *
@@ -208,7 +223,9 @@ public final class IdealSensor implements Serializable {
         double[] s = new double[GRAVITY + 3];
         for (int k = 0; k < count; k++) {
             double t = times[timeOffset + k];
-            Arguments.finite("times[" + (timeOffset + k) + "]", t);
+            if (!Double.isFinite(t)) {
+                throw new IllegalArgumentException("times[" + (timeOffset + k) + "] must be finite, got " + t);
+            }
             read(t, s, target, targetOffset + InertialReading.COMPONENTS * k);
         }
     }
@@ -267,7 +284,9 @@ public final class IdealSensor implements Serializable {
         for (int k = 0; k < count; k++) {
             double a = start + k * interval;
             double b = start + (k + 1) * interval;
-            Arguments.finite("end of increment " + k, b);
+            if (!Double.isFinite(b)) {
+                throw new IllegalArgumentException("end of increment " + k + " must be finite, got " + b);
+            }
             System.arraycopy(s, LEVELS + 4 * 7, s, LEVELS, 6);
             read(b, s, s, LEVELS + 4 * 7);
             increment(a, b, s, target, targetOffset + SensorIncrements.COMPONENTS * k);
