@@ -10,6 +10,7 @@ import dev.noninertial.frames.*;
 import dev.noninertial.frames.motion.*;
 import dev.noninertial.frames.dynamics.*;
 import dev.noninertial.frames.uncertainty.*;
+import dev.noninertial.frames.dispersion.*;
 import dev.noninertial.frames.units.*;
 import dev.noninertial.geodesy.*;
 import dev.noninertial.geodesy.air.*;

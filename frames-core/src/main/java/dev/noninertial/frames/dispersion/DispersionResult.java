@@ -39,13 +39,13 @@ public final class DispersionResult implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
-    /** Names of the drawn inputs, in column order. */
+    /** Input names in declaration order. */
     private final List<String> inputNames;
-    /** Names of the outcomes, in column order after the inputs. */
+    /** Outcome names in order. */
     private final List<String> outcomeNames;
-    /** Values per row: inputs then outcomes. */
+    /** Values per row: inputs plus outcomes. */
     private final int width;
-    /** Number of rows, one per case. */
+    /** Number of rows (cases). */
     private final int rows;
     /** Row-major table, {@code rows * width} values. */
     private final double[] table;

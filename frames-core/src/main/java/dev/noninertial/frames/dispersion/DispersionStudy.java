@@ -43,23 +43,26 @@ public final class DispersionStudy implements Serializable {
     /** Largest number of cases of one study (the outcome table is held in memory). */
     public static final int MAX_CASES = 100_000_000;
 
+    /** Largest number of values (cases times columns) of a table held in one Java array. */
+    public static final int MAX_TABLE_VALUES = Integer.MAX_VALUE - 8;
+
     /** Allowed input and outcome names: letters, digits, underscore, dot, minus (CSV-safe). */
     private static final Pattern NAME = Pattern.compile("[A-Za-z][A-Za-z0-9_.\\-]*");
 
     /** Cases handed to a worker thread at a time by the local runner. */
     private static final int BLOCK = 32;
 
-    /** The model run once per case. */
+    /** The user's model. */
     private final DispersionModel model;
-    /** Names of the model's outcomes. */
+    /** Outcome names in order. */
     private final List<String> outcomeNames;
-    /** Names of the drawn inputs, in drawing order. */
+    /** Input names in declaration (drawing) order. */
     private final List<String> inputNames;
-    /** Distribution of each input, in the order of the names. */
+    /** Input distributions, same order as {@code inputNames}. */
     private final List<InputDistribution> distributions;
     /** Number of cases. */
     private final int cases;
-    /** Master seed from which every case's seed is derived. */
+    /** Master seed. */
     private final long seed;
 
     private DispersionStudy(DispersionModel model, List<String> outcomeNames, List<String> inputNames,
@@ -318,7 +321,8 @@ public final class DispersionStudy implements Serializable {
      * @param threads number of worker threads, in [1, 1024]
      * @return the result table and statistics
      * @throws IllegalArgumentException if {@code threads} is out of range
-     * @throws IllegalStateException if a case fails (the first failure, naming the case)
+     * @throws IllegalStateException if a case fails (the first failure, naming the case), or the
+     *         table would exceed {@link #MAX_TABLE_VALUES} values
      */
     public DispersionResult run(int threads) {
         if (threads < 1 || threads > 1024) {
@@ -328,7 +332,13 @@ public final class DispersionStudy implements Serializable {
             throw new IllegalStateException("the study has no input: add one with withInput(name, distribution)");
         }
         int width = inputNames.size() + outcomeNames.size();
-        double[] table = new double[Math.multiplyExact(cases, width)];
+        long size = (long) cases * width;
+        if (size > MAX_TABLE_VALUES) {
+            throw new IllegalStateException("cases x (inputs + outcomes) = " + cases + " x " + width + " = " + size
+                    + " values must fit one table of at most " + MAX_TABLE_VALUES
+                    + " values: run fewer cases here, or keep the table on a cluster");
+        }
+        double[] table = new double[(int) size];
         AtomicInteger nextBlock = new AtomicInteger();
         AtomicReference<RuntimeException> failure = new AtomicReference<>();
         Runnable worker = () -> {

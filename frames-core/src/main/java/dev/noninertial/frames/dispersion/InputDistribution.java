@@ -35,17 +35,17 @@ public final class InputDistribution implements Serializable {
     private final RealDistribution distribution;
     /** Human-readable description with the parameters. */
     private final String text;
-    /** Truncated normal only: the mean. */
+    /** Mean (of the untruncated normal for the truncated kind). */
     private final double mean;
-    /** Truncated normal only: the standard deviation. */
+    /** Truncated normal: standard deviation of the untruncated normal; NaN otherwise. */
     private final double sigma;
-    /** Truncated normal only: standard normal probability below the lower standardized bound (mirrored if so). */
+    /** Truncated normal: standard normal probability at the (possibly mirrored) lower bound. */
     private final double lowProbability;
-    /** Truncated normal only: standard normal probability below the upper standardized bound (mirrored if so). */
+    /** Truncated normal: standard normal probability at the (possibly mirrored) upper bound. */
     private final double highProbability;
-    /** Truncated normal only: whether the standardized bounds were mirrored (drawn as -b..-a). */
+    /** Truncated normal: true if the interval lies above the mean and is drawn mirrored. */
     private final boolean mirrored;
-    /** Whether this is a truncated normal distribution. */
+    /** True for the truncated normal. */
     private final boolean truncated;
 
     private InputDistribution(RealDistribution distribution, String text, double mean, double sigma,

@@ -131,5 +131,13 @@ class DispersionStudyTest {
         assertTrue(bad.getMessage().contains("case 7") && bad.getMessage().contains("'x'"), bad.getMessage());
         DispersionStudy wrong = ok.withModel(c -> new double[] {1.0, 2.0});
         assertThrows(IllegalStateException.class, () -> wrong.run(1));
+        // a table beyond one Java array is refused before any case runs: 1e8 cases x 23 columns (22 inputs, 1 outcome)
+        DispersionStudy huge = ok.withCases(DispersionStudy.MAX_CASES);
+        for (int i = 0; i < 21; i++) {
+            huge = huge.withInput("u" + i, InputDistribution.uniform(0, 1));
+        }
+        DispersionStudy tooLarge = huge;
+        IllegalStateException big = assertThrows(IllegalStateException.class, () -> tooLarge.run(1));
+        assertTrue(big.getMessage().contains("2300000000"), big.getMessage());
     }
 }

@@ -16,11 +16,33 @@ public final class Curve {
     private final String label;
     private final double[] x;
     private final double[] y;
+    private final boolean markers;
 
-    private Curve(String label, double[] x, double[] y) {
+    private Curve(String label, double[] x, double[] y, boolean markers) {
         this.label = label;
         this.x = x;
         this.y = y;
+        this.markers = markers;
+    }
+
+    /**
+     * Points drawn as small dots, not joined (a scatter, for example landing points of a
+     * dispersion study); same checks as {@link #of(String, double[], double[])}.
+     *
+     * @param label legend text, not blank
+     * @param x abscissas in the unit of the sheet's horizontal axis, finite, at least two
+     * @param y ordinates in the unit of the sheet's vertical axis, finite, as many as {@code x}
+     * @return the point set
+     * @throws IllegalArgumentException as {@link #of(String, double[], double[])}
+     */
+    public static Curve points(String label, double[] x, double[] y) {
+        Curve c = of(label, x, y);
+        return new Curve(c.label, c.x, c.y, true);
+    }
+
+    /** @return true if drawn as separate dots, false for a polyline */
+    public boolean markers() {
+        return markers;
     }
 
     /**
@@ -51,7 +73,7 @@ public final class Curve {
             Arguments.finite("x[" + i + "]", x[i]);
             Arguments.finite("y[" + i + "]", y[i]);
         }
-        return new Curve(label, x.clone(), y.clone());
+        return new Curve(label, x.clone(), y.clone(), false);
     }
 
     /** @return the legend text */
@@ -91,7 +113,7 @@ public final class Curve {
             return false;
         }
         Curve c = (Curve) other;
-        return label.equals(c.label) && Arrays.equals(x, c.x) && Arrays.equals(y, c.y);
+        return label.equals(c.label) && markers == c.markers && Arrays.equals(x, c.x) && Arrays.equals(y, c.y);
     }
 
     @Override

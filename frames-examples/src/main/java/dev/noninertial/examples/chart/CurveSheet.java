@@ -234,6 +234,15 @@ public final class CurveSheet {
            .append(" stroke-linejoin=\"round\">\n");
         for (int k = 0; k < curves.size(); k++) {
             Curve c = curves.get(k);
+            if (c.markers()) {
+                svg.append("<g fill=\"").append(COLOURS[k]).append("\" fill-opacity=\"0.55\" stroke=\"none\">\n");
+                for (int i = 0; i < c.size(); i++) {
+                    svg.append("<circle cx=\"").append(fmt(xs.toPixel(c.xAt(i), left, right))).append("\" cy=\"")
+                       .append(fmt(ys.toPixel(c.yAt(i), bottom, top))).append("\" r=\"1.6\"/>\n");
+                }
+                svg.append("</g>\n");
+                continue;
+            }
             svg.append("<polyline stroke=\"").append(COLOURS[k]).append('"');
             if (!DASHES[k].isEmpty()) {
                 svg.append(" stroke-dasharray=\"").append(DASHES[k]).append('"');
@@ -256,6 +265,13 @@ public final class CurveSheet {
         for (int k = 0; k < curves.size(); k++) {
             double lx = left + (k % 2) * column;
             double ly = bottom + AXIS_BAND + (k / 2) * LEGEND_ROW + 6;
+            if (curves.get(k).markers()) {
+                svg.append("<circle cx=\"").append(fmt(lx + 15)).append("\" cy=\"").append(fmt(ly))
+                   .append("\" r=\"3\" fill=\"").append(COLOURS[k]).append("\"/>\n<text x=\"").append(fmt(lx + 38))
+                   .append("\" y=\"").append(fmt(ly + 4)).append("\">").append(escape(curves.get(k).label()))
+                   .append("</text>\n");
+                continue;
+            }
             svg.append("<line x1=\"").append(fmt(lx)).append("\" y1=\"").append(fmt(ly)).append("\" x2=\"")
                .append(fmt(lx + 30)).append("\" y2=\"").append(fmt(ly)).append("\" stroke=\"").append(COLOURS[k])
                .append("\" stroke-width=\"2\"");
