@@ -12,6 +12,8 @@ import dev.noninertial.frames.dynamics.*;
 import dev.noninertial.frames.uncertainty.*;
 import dev.noninertial.frames.dispersion.*;
 import dev.noninertial.frames.units.*;
+import dev.noninertial.frames.sensing.*;
 import dev.noninertial.geodesy.*;
 import dev.noninertial.geodesy.air.*;
 import dev.noninertial.geodesy.navigation.*;
+import dev.noninertial.frames.sensing.*;

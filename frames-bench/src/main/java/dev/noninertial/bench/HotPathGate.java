@@ -159,6 +159,13 @@ public final class HotPathGate {
         // a run allocates its work array and its result (state, position, history): about 0.6 kB
         rows.add(new Allocation("LevelNavigator.run(start, STATES steps)", bytes(mx,
                 () -> nav.navigator.run(nav.start, navRun[0], navRun[1], navRun[2])), STATES, 1024));
+        SensorScenario sensor = new SensorScenario();
+        // per call: the scratch array of the readings (about 0.4 kB); nothing per reading
+        rows.add(new Allocation("IdealSensor.readingsAt(times...) Earth tree, lever arm", bytes(mx,
+                sensor::readings), STATES, 1024));
+        // per call: the scratch of the adaptive quadrature (about 17 kB); nothing per increment
+        rows.add(new Allocation("IdealSensor.incrementsOver(grid...) Earth tree, 100 Hz", bytes(mx,
+                () -> sensor.increments(STATES)), STATES, 20_000));
         rows.add(new Allocation("control: one new double[STATES] per call (info: proves the counter)",
                 bytes(mx, () -> CONTROL[0] = new double[STATES]), STATES, -1));
         return rows;
@@ -197,6 +204,13 @@ public final class HotPathGate {
         rows.add(pair("bulk Motion.toBase spin-up, per state", rounds, true,
                 () -> in.spin.toBase(in.times, 0, in.source, 0, in.target, 0, STATES),
                 () -> PrimitiveBaseline.spinUpToBaseAll(in.times, in.source, in.target, STATES)));
+        SensorScenario sensor = new SensorScenario();
+        rows.add(pair("bulk IdealSensor.readingsAt vs placement in root + gravitation, per reading", rounds, true,
+                sensor::readings, sensor::baseline));
+        // information: cost of one increment (4 readings per increment on a grid, plus the
+        // quadrature) over one reading; goal 8x
+        rows.add(pair("IdealSensor increments / readings (info), per sample", rounds, false,
+                () -> sensor.increments(STATES), sensor::readings));
         NavigationScenario nav = new NavigationScenario();
         double[] navWork = nav.navigator.newWork(nav.start);
         double[] navBase = nav.baselineState();

@@ -57,6 +57,7 @@ public final class ScenarioRunner {
         List<ScenarioTable> tables = new java.util.ArrayList<>(List.of(SiteRotationScenario.run(setting),
                 ShipCraneScenario.run(setting), LongRangeScenario.run(setting)));
         tables.addAll(SensorTruthScenario.run(setting));
+        tables.addAll(List.of(SurveyFlightScenario.run(setting)));
         if (out != null) {
             Files.createDirectories(out);
         }

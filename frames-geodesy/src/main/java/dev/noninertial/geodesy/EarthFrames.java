@@ -375,6 +375,10 @@ public final class EarthFrames implements Serializable {
         }
     }
 
+    /** Per-thread scratch of the primitive gravitation: two placements and one vector. */
+    private static final ThreadLocal<double[]> WORK =
+            ThreadLocal.withInitial(() -> new double[2 * Placement.COMPONENTS + 3]);
+
     /**
      * Gravitation evaluated in Earth-fixed axes and resolved in the integration frame.
      *
@@ -401,6 +405,36 @@ public final class EarthFrames implements Serializable {
         public Vector3D at(double time, PointState state) {
             Placement p = frame.placementIn(earthFixed, time);
             return p.vectorFromBase(model.gravitation(p.positionToBase(state.position())));
+        }
+
+        /**
+         * Allocation-free form (after a thread's first call): the placement in Earth-fixed on
+         * primitives, then {@link EarthModel#gravitation(double, double, double, double[], int)}.
+         * Frames that do not hang below Earth-fixed (the inertial root) take the object path.
+         */
+        @Override
+        public void at(double time, double[] state, int stateOffset, double[] target, int targetOffset) {
+            SpecificForce.checkPrimitive(state, stateOffset, target, targetOffset);
+            if (frame == earthFixed.root()) {
+                SpecificForce.super.at(time, state, stateOffset, target, targetOffset);
+                return;
+            }
+            double[] w = WORK.get();
+            frame.placementIn(earthFixed, time, w, 0);
+            double x = state[stateOffset];
+            double y = state[stateOffset + 1];
+            double z = state[stateOffset + 2];
+            // r_B = o + R^T r, with R rows at 9..17 (v_F = R v_B)
+            double ex = w[0] + w[9] * x + w[12] * y + w[15] * z;
+            double ey = w[1] + w[10] * x + w[13] * y + w[16] * z;
+            double ez = w[2] + w[11] * x + w[14] * y + w[17] * z;
+            model.gravitation(ex, ey, ez, w, 48);
+            double gx = w[48];
+            double gy = w[49];
+            double gz = w[50];
+            target[targetOffset] = w[9] * gx + w[10] * gy + w[11] * gz;
+            target[targetOffset + 1] = w[12] * gx + w[13] * gy + w[14] * gz;
+            target[targetOffset + 2] = w[15] * gx + w[16] * gy + w[17] * gz;
         }
 
         @Override

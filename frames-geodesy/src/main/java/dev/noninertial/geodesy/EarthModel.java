@@ -383,6 +383,29 @@ public final class EarthModel implements Serializable {
     }
 
     /**
+     * {@link #gravitation(Vector3D)} on primitives, for hot paths: the same formula (one copy),
+     * written into {@code out[offset, offset + 3)}; allocates nothing.
+     *
+     * @param x Earth-fixed x (m)
+     * @param y Earth-fixed y (m)
+     * @param z Earth-fixed z (m)
+     * @param out receives gravitation (m/s^2), ECEF axes
+     * @param offset index of the x component
+     * @throws IllegalArgumentException if the position is not finite or too deep, or the range does not fit
+     */
+    public void gravitation(double x, double y, double z, double[] out, int offset) {
+        Arguments.nonNull("out", out);
+        Arguments.finite("x", x);
+        Arguments.finite("y", y);
+        Arguments.finite("z", z);
+        if (offset < 0 || offset > out.length - 3) {
+            throw new IllegalArgumentException("offset must be in [0, " + (out.length - 3) + "] for out of length "
+                    + out.length + " (3 doubles written), got " + offset);
+        }
+        fieldAt(x, y, z, false, out, offset);
+    }
+
+    /**
      * The centrifugal acceleration of a point at rest in the Earth-fixed frame,
      * {@code -w x (w x r) = w^2 (x, y, 0)}: the part of gravity that is not gravitation.
      *

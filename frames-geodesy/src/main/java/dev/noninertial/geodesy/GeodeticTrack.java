@@ -362,7 +362,11 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         return new PathSample(x.getX(), x.getY(), x.getZ(), v.getX(), v.getY(), v.getZ(), a.getX(), a.getY(), a.getZ());
     }
 
-    /** @return true if the log carries heading, pitch and roll */
+    /**
+     * Returns true if the log carries heading, pitch and roll.
+     *
+     * @return true if the log carries heading, pitch and roll
+     */
     public boolean hasAttitude() {
         return angles != null;
     }
@@ -381,7 +385,11 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         return new LoggedAttitude(angles);
     }
 
-    /** Interpolated heading, pitch, roll as an attitude profile. */
+    /**
+     * Interpolated heading, pitch, roll as an attitude profile.
+     *
+     * @param angles the logged heading, pitch and roll as a sampled motion
+     */
     private record LoggedAttitude(SampledMotion angles) implements AttitudeProfile, Serializable {
         @Override
         public AttitudeSample at(double t) {
@@ -394,17 +402,29 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         }
     }
 
-    /** @return number of samples */
+    /**
+     * Returns number of samples.
+     *
+     * @return number of samples
+     */
     public int sampleCount() {
         return position.sampleCount();
     }
 
-    /** @return time of the first sample (s) */
+    /**
+     * Returns time of the first sample (s).
+     *
+     * @return time of the first sample (s)
+     */
     public double startTime() {
         return position.startTime();
     }
 
-    /** @return time of the last sample (s) */
+    /**
+     * Returns time of the last sample (s).
+     *
+     * @return time of the last sample (s)
+     */
     public double endTime() {
         return position.endTime();
     }
@@ -419,7 +439,11 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         return position.sampleTime(index);
     }
 
-    /** @return the stated largest gap between samples (s) */
+    /**
+     * Returns the stated largest gap between samples (s).
+     *
+     * @return the stated largest gap between samples (s)
+     */
     public double maxGap() {
         return maxGap;
     }

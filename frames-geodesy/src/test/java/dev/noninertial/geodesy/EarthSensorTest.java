@@ -77,6 +77,29 @@ class EarthSensorTest {
     }
 
     @Test
+    void primitiveGravitationIsTheObjectGravitation() {
+        // the allocation-free form used by the sensor must return what the object form returns
+        ReferenceFrame ned = EARTH.localLevel(LatLonHeight.ofDegrees(33.0, -71.0, 150.0), LocalAxes.NED);
+        ReferenceFrame hull = ned.attach("hull", Motions.oscillation(Vector3D.PLUS_I, 0.1, 0.7, 0.2));
+        for (ReferenceFrame f : new ReferenceFrame[] {hull, EARTH.inertial(), EARTH.earthFixed()}) {
+            dev.noninertial.frames.dynamics.SpecificForce g = EARTH.gravitationIn(f);
+            double[] state = {3.0, -2.0, 40.0, 1.0, 0.5, 0.0};
+            if (f != hull) {
+                Vector3D onSurface = EARTH.earthFixed().placementIn(f, 7.0).positionToBase(
+                        Ellipsoid.WGS84.toCartesian(LatLonHeight.ofDegrees(10, 20, 0)));
+                state = new double[] {onSurface.getX(), onSurface.getY(), onSurface.getZ(), 0, 0, 0};
+            }
+            double[] out = new double[3];
+            g.at(7.0, state, 0, out, 0);
+            Vector3D expected = g.at(7.0, dev.noninertial.frames.PointState.of(new Vector3D(state[0], state[1],
+                    state[2]), new Vector3D(state[3], state[4], state[5])));
+            // 1e-14 relative: the two paths round the chain differently
+            assertTrue(new Vector3D(out[0], out[1], out[2]).subtract(expected).getNorm() <= 1e-14 * expected.getNorm(),
+                    f.path());
+        }
+    }
+
+    @Test
     void drivingAlongAParallelReadsTheTextbookTerms() {
         // velocity equation in NED with dv/dt = 0 (Titterton & Weston Eq. 3.71, REFERENCES.md,
         // Inertial navigation): f = (2 w_ie + w_en) x v - g, gyro w_ie + w_en

@@ -6,6 +6,8 @@ import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
 import org.jsoup.nodes.Node;
 import org.jsoup.nodes.TextNode;
+import org.jsoup.select.NodeTraversor;
+import org.jsoup.select.NodeVisitor;
 
 /**
  * The offline search index of the guide, written as {@code search-index.js} when the site is
@@ -36,24 +38,37 @@ public final class SearchIndex {
                 continue;
             }
             Document doc = Markup.parseFragment(p.body());
-            String heading = p.title();
-            String anchor = "";
+            String[] heading = {p.title()};
+            String[] anchor = {""};
             StringBuilder text = new StringBuilder();
-            for (Node n : doc.body().childNodes()) {
-                if (n instanceof Element e && e.normalName().matches("h[123]")) {
-                    first = entry(b, first, p, heading, anchor, text);
-                    heading = e.normalName().equals("h1") ? p.title() : e.text().strip();
-                    anchor = e.normalName().equals("h1") ? "" : e.id();
-                    text.setLength(0);
-                } else if (n instanceof Element e) {
-                    text.append(' ').append(e.text());
-                } else if (n instanceof TextNode t) {
-                    text.append(' ').append(t.text());
+            boolean[] open = {first};
+            // every heading, at any depth (accuracy areas sit in sections), starts a new entry
+            NodeTraversor.traverse(new NodeVisitor() {
+                @Override
+                public void head(Node n, int depth) {
+                    if (n instanceof Element e && e.normalName().matches("h[123]")) {
+                        open[0] = entry(b, open[0], p, heading[0], anchor[0], text);
+                        heading[0] = e.normalName().equals("h1") ? p.title() : e.text().strip();
+                        anchor[0] = e.normalName().equals("h1") ? "" : e.id();
+                        text.setLength(0);
+                    } else if (n instanceof TextNode t && !insideHeading(t)) {
+                        text.append(' ').append(t.getWholeText());
+                    }
                 }
-            }
-            first = entry(b, first, p, heading, anchor, text);
+            }, doc.body());
+            first = open[0];
+            first = entry(b, first, p, heading[0], anchor[0], text);
         }
         return b.append("\n];\n").toString();
+    }
+
+    private static boolean insideHeading(Node n) {
+        for (Node up = n.parent(); up != null; up = up.parent()) {
+            if (up instanceof Element e && e.normalName().matches("h[1-6]")) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean entry(StringBuilder b, boolean first, Page p, String heading, String anchor,

@@ -57,6 +57,9 @@ public final class SitePlots {
         CurveSheet[] pendulum = TrajectoryPlots.foucault();
         write(folder, "foucault-swing-plane.svg", pendulum[0], written);
         write(folder, "foucault-difference.svg", pendulum[1], written);
+        CurveSheet[] sensors = SensorPlots.survey();
+        write(folder, "sensor-survey-line.svg", sensors[0], written);
+        write(folder, "sensor-triads-track.svg", sensors[1], written);
         write(folder, "airdrop-footprint.svg", DispersionPlots.footprint(), written);
         return written;
     }

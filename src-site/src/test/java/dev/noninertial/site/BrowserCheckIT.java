@@ -234,6 +234,18 @@ class BrowserCheckIT {
         waitFor("document.readyState === 'complete'");
         shot("phone-conventions");
         assertTrue((Double) eval("document.documentElement.scrollWidth") <= inner + 1, "conventions.html overflows");
+        // drawings inline in the page: smallest font size in SVG units times the drawing's scale on screen
+        List<?> drawings = (List<?>) eval("Array.from(document.querySelectorAll('main svg[viewBox]')).map(function(s){"
+                + "var sizes = Array.from(s.querySelectorAll('[font-size]')).concat([s]).map(function(e){"
+                + "return parseFloat(e.getAttribute('font-size'));}).filter(function(x){return x > 0;});"
+                + "return [Math.min.apply(null, sizes), s.getBoundingClientRect().width, s.viewBox.baseVal.width];})");
+        assertTrue(!drawings.isEmpty(), "conventions.html has an inline drawing");
+        for (Object o : drawings) {
+            List<?> d = (List<?>) o;
+            double rendered = (Double) d.get(0) * (Double) d.get(1) / (Double) d.get(2);
+            assertTrue(rendered >= READABLE_PX, "inline drawing: smallest text " + String.format("%.1f", rendered)
+                    + " px on a phone");
+        }
         assertTrue((Boolean) eval("Array.from(document.querySelectorAll('main table')).every(function(t){"
                 + "var s=t.parentElement; return s.classList.contains('scroll') &&"
                 + " getComputedStyle(s).overflowX === 'auto';})"), "every table scrolls inside its own box");

@@ -172,13 +172,16 @@ class SiteBuilderTest {
     @Test
     void searchIndexHasOneEntryPerSection() {
         Page p = Page.fromFragment("x.html", "<h1>Spin</h1><p>Intro about Coriolis.</p><h2 id=\"a\">First</h2><p>alpha "
-                + "\"quoted\" &lt;tag&gt;</p><h3>Deeper</h3><p>beta</p>");
+                + "\"quoted\" &lt;tag&gt;</p><h3>Deeper</h3><p>beta</p><section><h2 id=\"s\">Inside</h2><p>gamma</p></section>");
         String js = SearchIndex.script(List.of(p));
         assertTrue(js.startsWith("// Search index"), js);
         assertTrue(js.contains("{\"u\":\"x.html\",\"t\":\"Spin\",\"p\":\"Spin\",\"x\":\"Intro about Coriolis.\"}"), js);
         assertTrue(js.contains("\"u\":\"x.html#a\",\"t\":\"First\""), js);
         assertTrue(js.contains("alpha \\\"quoted\\\" \\u003ctag>"), js);
         assertTrue(js.contains("\"u\":\"x.html#deeper\""), js);
+        // a heading nested in a section (as in the accuracy report) starts its own entry
+        assertTrue(js.contains("{\"u\":\"x.html#s\",\"t\":\"Inside\",\"p\":\"Spin\",\"x\":\"gamma\"}"), js);
+        assertTrue(js.contains("\"x\":\"beta\"}"), "the section's text is not in the entry before it: " + js);
     }
 
     @Test

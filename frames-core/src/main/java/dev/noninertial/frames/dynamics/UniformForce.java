@@ -7,7 +7,11 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import dev.noninertial.frames.Formats;
 import dev.noninertial.frames.PointState;
 
-/** The same vector at every time and place; the primitive form allocates nothing. */
+/**
+ * The same vector at every time and place; the primitive form allocates nothing.
+ *
+ * @param vector the specific force, resolved in the integration frame (m/s^2)
+ */
 record UniformForce(Vector3D vector) implements SpecificForce, Serializable {
 
     @Override

@@ -83,17 +83,29 @@ public final class SpinProfile implements Serializable {
                 new double[] {angle, rate, 0.0, 0.0});
     }
 
-    /** @return start of the span (s) */
+    /**
+     * Returns start of the span (s).
+     *
+     * @return start of the span (s)
+     */
     public double start() {
         return times[0];
     }
 
-    /** @return end of the span (s) */
+    /**
+     * Returns end of the span (s).
+     *
+     * @return end of the span (s)
+     */
     public double end() {
         return times[times.length - 1];
     }
 
-    /** @return number of pieces */
+    /**
+     * Returns number of pieces.
+     *
+     * @return number of pieces
+     */
     public int pieceCount() {
         return kinds.length;
     }

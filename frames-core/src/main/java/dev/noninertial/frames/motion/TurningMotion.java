@@ -11,6 +11,9 @@ import dev.noninertial.frames.Placement;
 /**
  * A turn about a fixed axis through the parent's origin whose angle follows a {@link SpinProfile};
  * rate and angular acceleration are the profile's, so they are the exact derivatives of the angle.
+ *
+ * @param axis the fixed turning axis, in parent axes
+ * @param profile the angle, rate and angular acceleration against time
  */
 record TurningMotion(Vector3D axis, SpinProfile profile) implements Motion, Serializable {
 

@@ -143,17 +143,29 @@ public final class IdealSensor implements Serializable {
                 1e-15, 1e-3));
     }
 
-    /** @return the sensor frame S */
+    /**
+     * Returns the sensor frame S.
+     *
+     * @return the sensor frame S
+     */
     public ReferenceFrame frame() {
         return frame;
     }
 
-    /** @return the gravitation field, resolved in S axes */
+    /**
+     * Returns the gravitation field, resolved in S axes.
+     *
+     * @return the gravitation field, resolved in S axes
+     */
     public SpecificForce gravitation() {
         return gravitation;
     }
 
-    /** @return the relative quadrature tolerance of the increments */
+    /**
+     * Returns the relative quadrature tolerance of the increments.
+     *
+     * @return the relative quadrature tolerance of the increments
+     */
     public double tolerance() {
         return tolerance;
     }
@@ -196,7 +208,9 @@ public final class IdealSensor implements Serializable {
         double[] s = new double[GRAVITY + 3];
         for (int k = 0; k < count; k++) {
             double t = times[timeOffset + k];
-            Arguments.finite("times[" + (timeOffset + k) + "]", t);
+            if (!Double.isFinite(t)) {
+                throw new IllegalArgumentException("times[" + (timeOffset + k) + "] must be finite, got " + t);
+            }
             read(t, s, target, targetOffset + InertialReading.COMPONENTS * k);
         }
     }
@@ -255,7 +269,9 @@ public final class IdealSensor implements Serializable {
         for (int k = 0; k < count; k++) {
             double a = start + k * interval;
             double b = start + (k + 1) * interval;
-            Arguments.finite("end of increment " + k, b);
+            if (!Double.isFinite(b)) {
+                throw new IllegalArgumentException("end of increment " + k + " must be finite, got " + b);
+            }
             System.arraycopy(s, LEVELS + 4 * 7, s, LEVELS, 6);
             read(b, s, s, LEVELS + 4 * 7);
             increment(a, b, s, target, targetOffset + SensorIncrements.COMPONENTS * k);

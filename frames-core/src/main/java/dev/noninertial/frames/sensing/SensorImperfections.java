@@ -59,14 +59,21 @@ public final class SensorImperfections implements Serializable {
 
     private static final long serialVersionUID = 1L;
 
-    /** Per triad (0 accelerometers, 1 gyros), per axis. */
+    /** Per triad (0 accelerometers, 1 gyros), per axis: constant bias. */
     private final double[][] bias;
+    /** Per triad, per axis: scale-factor error (dimensionless). */
     private final double[][] scale;
+    /** Per triad: the 3x3 small misalignment angles (rad), row-major. */
     private final double[][] misalignment;
+    /** Per triad, per axis: white-noise density. */
     private final double[][] noise;
+    /** Per triad, per axis: stationary standard deviation of the Gauss-Markov bias instability. */
     private final double[][] instability;
+    /** Per triad: correlation time of the Gauss-Markov bias instability (s). */
     private final double[] correlationTime;
+    /** Per triad: output quantum (m/s or rad), 0 for none. */
     private final double[] quantum;
+    /** Seed of the noise generator. */
     private final long seed;
 
     private SensorImperfections(double[][] bias, double[][] scale, double[][] misalignment, double[][] noise,
@@ -93,7 +100,11 @@ public final class SensorImperfections implements Serializable {
                 new double[2], seed);
     }
 
-    /** @return the seed */
+    /**
+     * Returns the seed.
+     *
+     * @return the seed
+     */
     public long seed() {
         return seed;
     }

@@ -51,7 +51,11 @@ public record SensorIncrements(double start, double end, Vector3D deltaVelocity,
         Arguments.finite("deltaAngle", deltaAngle);
     }
 
-    /** @return the interval length {@code end - start} (s) */
+    /**
+     * Returns the interval length {@code end - start} (s).
+     *
+     * @return the interval length {@code end - start} (s)
+     */
     public double duration() {
         return end - start;
     }

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
@@ -19,8 +20,8 @@ import dev.noninertial.geodesy.LocalAxes;
  *
  * <pre>{@code
  * LevelNavigator nav = LevelNavigator.of(EarthModel.WGS84, LocalAxes.NED);
- * NavigationState next = nav.advance(state, t1, deltaVelocity, deltaAngle);
- * StepTerms terms = nav.terms(state, t1, deltaVelocity, deltaAngle);
+ * NavigationState next = nav.advance(state, sensor.incrementsOver(t0, t1));   // IdealSensor fixed in the body
+ * StepTerms terms = nav.terms(state, sensor.incrementsOver(t0, t1));
  * }</pre>
  *
  * <h2>Method (published multi-rate strapdown algorithms)</h2>
@@ -30,8 +31,11 @@ import dev.noninertial.geodesy.LocalAxes;
  *   <li><b>Size effect</b> (Savage 1998, part 1, size-effect compensation): accelerometer i at
  *       offset {@code r_i} from the navigation centre senses
  *       {@code e_i . (f + dw/dt x r_i + w x (w x r_i))}; its increment is corrected by
- *       {@code e_i . (Dw x r_i + da x (da x r_i) / h)} with {@code Dw} the change of rate over
- *       the step from the two mean rates {@code da'/h'} and {@code da/h}.</li>
+ *       {@code e_i . (Dw x r_i + da x (da x r_i) / h + (h/12) Dw x (Dw x r_i))}, the integrals
+ *       for a rate linear in time, with {@code Dw} the change of rate over the step: the rate at
+ *       the step's end is estimated from the mean rates {@code da'/h'} and {@code da/h} and kept
+ *       for the next step, so the corrections telescope over a run. The first step after a state
+ *       without history takes no {@code Dw} term; the second makes it up.</li>
  *   <li><b>Coning</b> (Bortz 1971 rotation vector; previous-interval algorithm of Ignagni 1990
  *       and Savage 1998 part 1, exact for a rate linear in time): body rotation vector
  *       {@code phi = da + (1/12) da' x da}.</li>
@@ -267,6 +271,72 @@ public final class LevelNavigator implements Serializable {
                 deltaAngle.getY(), deltaAngle.getZ(), t, 0);
         return new StepTerms(state.step(), start, end, axes, level(t, 0), level(t, 3), level(t, 6), level(t, 9),
                 body(t, 12), body(t, 15), body(t, 18), body(t, 21), level(t, 24), level(t, 27));
+    }
+
+    /**
+     * Advances a state by the increments of a sensor fixed in the body
+     * ({@code sensor.incrementsOver(t0, t1)} of {@link dev.noninertial.frames.sensing.IdealSensor},
+     * or any {@link SensorIncrements} in body axes).
+     *
+     * @param state the state at {@code increments.start()}, in this navigator's axes
+     * @param increments delta-velocity and delta-angle over [start, end], body axes
+     * @return the state at {@code increments.end()}
+     * @throws IllegalArgumentException if the increments do not start at the state's time
+     *         (within 1e-9 s), or for a refused step
+     */
+    public NavigationState advance(NavigationState state, SensorIncrements increments) {
+        checkStart(state, increments);
+        return advance(state, increments.end(), increments.deltaVelocity(), increments.deltaAngle());
+    }
+
+    /**
+     * The named terms of the step that {@link #advance(NavigationState, SensorIncrements)} would take.
+     *
+     * @param state the state at {@code increments.start()}, in this navigator's axes
+     * @param increments delta-velocity and delta-angle, body axes
+     * @return the terms
+     * @throws IllegalArgumentException as for {@link #advance(NavigationState, SensorIncrements)}
+     */
+    public StepTerms terms(NavigationState state, SensorIncrements increments) {
+        checkStart(state, increments);
+        return terms(state, increments.end(), increments.deltaVelocity(), increments.deltaAngle());
+    }
+
+    /**
+     * Navigates consecutive increments, allocating nothing per step beyond reading them.
+     *
+     * @param start the state at the start of the first increments, in this navigator's axes
+     * @param increments consecutive increments (each starting where the previous ended), body axes
+     * @return the state at the end of the last increments
+     * @throws IllegalArgumentException if an increment does not start where the previous one ended
+     *         (within 1e-9 s), or for a refused step (named in the message)
+     */
+    public NavigationState run(NavigationState start, SensorIncrements... increments) {
+        Arguments.nonNull("increments", increments);
+        double[] w = newWork(start);
+        double t = start.time();
+        for (int k = 0; k < increments.length; k++) {
+            SensorIncrements inc = Arguments.nonNull("increments[" + k + "]", increments[k]);
+            if (!(Math.abs(inc.start() - t) <= 1e-9 * Math.max(1.0, Math.abs(t)))) {
+                throw new IllegalArgumentException("step " + (long) w[LevelKernel.STEP] + ": increments[" + k
+                        + "] start at " + inc.start() + " s, the state is at " + t + " s (gap or overlap)");
+            }
+            Vector3D dv = inc.deltaVelocity();
+            Vector3D da = inc.deltaAngle();
+            kernel.step(w, inc.end(), dv.getX(), dv.getY(), dv.getZ(), da.getX(), da.getY(), da.getZ(), null, 0);
+            t = inc.end();
+        }
+        return NavigationState.fromWork(w, axes);
+    }
+
+    private static void checkStart(NavigationState state, SensorIncrements increments) {
+        Arguments.nonNull("state", state);
+        Arguments.nonNull("increments", increments);
+        double t = state.time();
+        if (!(Math.abs(increments.start() - t) <= 1e-9 * Math.max(1.0, Math.abs(t)))) {
+            throw new IllegalArgumentException("step " + state.step() + ": increments start at " + increments.start()
+                    + " s, the state is at " + t + " s (they must start at the state's time)");
+        }
     }
 
     private Vector3D level(double[] t, int o) {
