@@ -353,6 +353,25 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         return u;
     }
 
+    /** A stream is untrusted input: the interpolants are re-checked by their own proxies; here the rest. */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("position", position);
+            Arguments.positive("maxGap", maxGap);
+            if (angles != null && angles.sampleCount() != position.sampleCount()) {
+                throw new IllegalArgumentException("attitude and position must have the same samples");
+            }
+            for (int i = 1; i < position.sampleCount(); i++) {
+                if (position.sampleTime(i) - position.sampleTime(i - 1) > maxGap) {
+                    throw new IllegalArgumentException("gap before sample " + i + " exceeds maxGap");
+                }
+            }
+        } catch (RuntimeException e) {
+            throw Arguments.refusedStream(GeodeticTrack.class, e);
+        }
+    }
+
     @Override
     public PathSample at(double t) {
         Placement p = position.at(t);

@@ -132,8 +132,8 @@ public final class ApiReference {
         }
         try {
             List<String> lines = Files.readAllLines(Path.of(d.getSource().toUri()));
-            // the report points at the component, on the declaration's first line or a continuation
-            for (long k = d.getLineNumber() - 1; k >= 0 && k >= d.getLineNumber() - 3; k--) {
+            // the report points at the component, on the declaration's first line or a continuation (up to 10 lines)
+            for (long k = d.getLineNumber() - 1; k >= 0 && k >= d.getLineNumber() - 10; k--) {
                 String text = lines.get((int) k);
                 if (text.matches(".*\\brecord\\s+\\w+\\s*[(<].*")) {
                     return true;

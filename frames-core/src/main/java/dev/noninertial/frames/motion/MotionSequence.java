@@ -28,8 +28,34 @@ final class MotionSequence implements Motion, Serializable {
     MotionSequence(double[] joins, Motion[] motions) {
         this.joins = joins;
         this.motions = motions;
+        validate();
+    }
+
+    private void validate() {
+        if (joins == null || motions == null || motions.length != joins.length + 1) {
+            throw new IllegalArgumentException("a sequence needs one more motion than join times");
+        }
+        for (int i = 0; i < motions.length; i++) {
+            if (motions[i] == null) {
+                throw new IllegalArgumentException("motions[" + i + "] must not be null");
+            }
+        }
         for (int i = 0; i < joins.length; i++) {
+            if (!Double.isFinite(joins[i]) || (i > 0 && !(joins[i] > joins[i - 1]))) {
+                throw new IllegalArgumentException("joinTimes must be finite and increase strictly, got joinTimes["
+                        + i + "] = " + joins[i]);
+            }
             check(i, motions[i].at(joins[i]), motions[i + 1].at(joins[i]));
+        }
+    }
+
+    /** A stream is untrusted input: the same checks as the factory. */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            validate();
+        } catch (RuntimeException e) {
+            throw dev.noninertial.frames.Arguments.refusedStream(MotionSequence.class, e);
         }
     }
 

@@ -63,6 +63,39 @@ public final class SpinProfile implements Serializable {
         this.params = params;
     }
 
+    /** A stream is untrusted input: array shapes, finite values, increasing times, continuous joins. */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            if (times == null || kinds == null || params == null || kinds.length < 1 || times.length != kinds.length + 1
+                    || params.length != 4 * kinds.length) {
+                throw new IllegalArgumentException("arrays of inconsistent lengths");
+            }
+            for (int i = 0; i < times.length; i++) {
+                Arguments.finite("times[" + i + "]", times[i]);
+                if (i > 0 && !(times[i] > times[i - 1]) && !(kinds.length == 1 && times[1] == times[0])) {
+                    throw new IllegalArgumentException("times must increase strictly at index " + i);
+                }
+            }
+            for (int i = 0; i < params.length; i++) {
+                Arguments.finite("params[" + i + "]", params[i]);
+            }
+            for (int i = 0; i < kinds.length; i++) {
+                if (kinds[i] != POLYNOMIAL && kinds[i] != COSINE) {
+                    throw new IllegalArgumentException("unknown piece kind " + kinds[i]);
+                }
+                if (i > 0) {
+                    double[] before = new double[3];
+                    evaluatePiece(i - 1, times[i], before);
+                    checkJoin("angle", "rad", times[i], before[0], params[4 * i]);
+                    checkJoin("rate", "rad/s", times[i], before[1], params[4 * i + 1]);
+                }
+            }
+        } catch (RuntimeException e) {
+            throw Arguments.refusedStream(SpinProfile.class, e);
+        }
+    }
+
     /**
      * A profile that starts at a given state; add pieces with {@link #ramp(double, double)},
      * {@link #hold(double)}, {@link #rampTo(double, double)}, {@link #steps(double[], double, double)}
@@ -306,6 +339,11 @@ public final class SpinProfile implements Serializable {
             i = -i - 2;
         }
         i = Math.min(Math.max(i, 0), kinds.length - 1);
+        evaluatePiece(i, t, out);
+    }
+
+    /** Writes {angle, rate, acceleration} of piece i at t (no span check). */
+    private void evaluatePiece(int i, double t, double[] out) {
         double tau = t - times[i];
         double a0 = params[4 * i];
         double r0 = params[4 * i + 1];

@@ -17,6 +17,15 @@ import dev.noninertial.frames.Placement;
  */
 record TurningMotion(Vector3D axis, SpinProfile profile) implements Motion, Serializable {
 
+    /** Re-runs the factory's checks (records deserialize through their canonical constructor). */
+    TurningMotion {
+        dev.noninertial.frames.Arguments.nonNull("profile", profile);
+        Vector3D unit = dev.noninertial.frames.Arguments.unitAxis("axis", axis);
+        if (unit.distance(axis) > 1e-15) {
+            throw new IllegalArgumentException("axis must be a unit vector, got " + axis);
+        }
+    }
+
     @Override
     public Placement at(double t) {
         if (!Double.isFinite(t)) {

@@ -115,6 +115,21 @@ public final class IdealSensor implements Serializable {
         this.root = frame.root();
     }
 
+    /** A stream is untrusted input: the checks of the factory and of {@link #withTolerance(double)}. */
+    private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
+        in.defaultReadObject();
+        try {
+            Arguments.nonNull("frame", frame);
+            Arguments.nonNull("gravitation", gravitation);
+            Arguments.inRange("tolerance", tolerance, 1e-15, 1e-3);
+            if (root != frame.root()) {
+                throw new IllegalArgumentException("root must be the root of the sensor frame's tree");
+            }
+        } catch (RuntimeException e) {
+            throw Arguments.refusedStream(IdealSensor.class, e);
+        }
+    }
+
     /**
      * An ideal sensor fixed in a frame.
      *

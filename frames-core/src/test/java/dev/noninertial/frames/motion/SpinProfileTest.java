@@ -134,4 +134,24 @@ class SpinProfileTest {
                 () -> Motions.sequence(new double[] {1.0, 2.0}, Motions.spin(n, 0, 1))).getMessage()
                 .contains("at least two"));
     }
+
+    @Test
+    void profilesAndTheirMotionsSurviveSerialization() throws Exception {
+        Motion m = Motions.sequence(new double[] {100.0}, Motions.turning(Vector3D.PLUS_K, RUN.hold(5.0)),
+                Motions.spin(Vector3D.PLUS_K, 240.0 - 0.0 * 100.0, 0.0));
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (java.io.ObjectOutputStream out = new java.io.ObjectOutputStream(bytes)) {
+            out.writeObject(m);
+            out.writeObject(RUN);
+        }
+        try (java.io.ObjectInputStream in = new java.io.ObjectInputStream(
+                new java.io.ByteArrayInputStream(bytes.toByteArray()))) {
+            Motion back = (Motion) in.readObject();
+            SpinProfile p = (SpinProfile) in.readObject();
+            // the same values after the round trip (same arithmetic on the same fields)
+            assertEquals(m.at(42.0), back.at(42.0));
+            assertEquals(RUN, p);
+            assertEquals(RUN.angle(55.5), p.angle(55.5), 0.0);
+        }
+    }
 }
