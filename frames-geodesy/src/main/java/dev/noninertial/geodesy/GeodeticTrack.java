@@ -353,7 +353,13 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         return u;
     }
 
-    /** A stream is untrusted input: the interpolants are re-checked by their own proxies; here the rest. */
+    /**
+     * A stream is untrusted input: the interpolants are re-checked by their own proxies; here the rest.
+     *
+     * @param in the stream
+     * @throws java.io.IOException if the stream cannot be read or holds invalid values
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
     private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
         in.defaultReadObject();
         try {

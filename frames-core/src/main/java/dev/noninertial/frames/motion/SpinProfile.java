@@ -63,7 +63,13 @@ public final class SpinProfile implements Serializable {
         this.params = params;
     }
 
-    /** A stream is untrusted input: array shapes, finite values, increasing times, continuous joins. */
+    /**
+     * A stream is untrusted input: array shapes, finite values, increasing times, continuous joins.
+     *
+     * @param in the stream
+     * @throws java.io.IOException if the stream cannot be read or holds invalid values
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
     private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
         in.defaultReadObject();
         try {

@@ -115,7 +115,13 @@ public final class IdealSensor implements Serializable {
         this.root = frame.root();
     }
 
-    /** A stream is untrusted input: the checks of the factory and of {@link #withTolerance(double)}. */
+    /**
+     * A stream is untrusted input: the checks of the factory and of {@link #withTolerance(double)}.
+     *
+     * @param in the stream
+     * @throws java.io.IOException if the stream cannot be read or holds invalid values
+     * @throws ClassNotFoundException if a class of the stream is missing
+     */
     private void readObject(java.io.ObjectInputStream in) throws java.io.IOException, ClassNotFoundException {
         in.defaultReadObject();
         try {
