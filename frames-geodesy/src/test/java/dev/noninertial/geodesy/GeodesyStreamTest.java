@@ -28,6 +28,9 @@ import dev.noninertial.frames.ReferenceFrame;
  */
 class GeodesyStreamTest {
 
+    // The stream helpers below repeat frames-core's test class dev.noninertial.frames.StreamPatch on
+    // purpose: the frames-core jar is sealed, so that class cannot be loaded from the core test jar
+    // in this module (tried: "sealing violation: package dev.noninertial.frames is sealed").
     private static byte[] bytes(Object value) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try (ObjectOutputStream o = new ObjectOutputStream(out)) {
