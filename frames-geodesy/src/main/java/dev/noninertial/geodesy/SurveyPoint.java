@@ -2,6 +2,7 @@ package dev.noninertial.geodesy;
 
 import java.io.Serializable;
 
+import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Formats;
 
 /**
@@ -18,7 +19,8 @@ import dev.noninertial.frames.Formats;
  * of the horizontal ground velocity (its constant-height formula; the vertical velocity does not
  * enter). The vertical acceleration is {@code d2h/dt2} of the track's interpolant.
  *
- * <p>Immutable and thread-safe.
+ * <p>Immutable and thread-safe. Every component must be finite and the position non-null
+ * (also on reading from a stream, where the canonical constructor runs again).
  *
  * @param time time (s from the frames' epoch)
  * @param position geodetic position of the platform
@@ -29,6 +31,21 @@ import dev.noninertial.frames.Formats;
  */
 public record SurveyPoint(double time, LatLonHeight position, double eotvosCorrection, double verticalAcceleration,
                           double gravimeterReading, double normalGravity) implements Serializable {
+
+    /**
+     * Checks the components.
+     *
+     * @throws NullPointerException if {@code position} is null
+     * @throws IllegalArgumentException if a number is not finite
+     */
+    public SurveyPoint {
+        Arguments.finite("time", time);
+        Arguments.nonNull("position", position);
+        Arguments.finite("eotvosCorrection", eotvosCorrection);
+        Arguments.finite("verticalAcceleration", verticalAcceleration);
+        Arguments.finite("gravimeterReading", gravimeterReading);
+        Arguments.finite("normalGravity", normalGravity);
+    }
 
     @Override
     public String toString() {

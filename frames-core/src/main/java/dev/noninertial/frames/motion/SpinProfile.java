@@ -160,8 +160,12 @@ public final class SpinProfile implements Serializable {
     public SpinProfile ramp(double duration, double angularAcceleration) {
         Arguments.positive("duration", duration);
         Arguments.finite("angularAcceleration", angularAcceleration);
+        return ramp("duration", duration, angularAcceleration);
+    }
+
+    private SpinProfile ramp(String source, double duration, double angularAcceleration) {
         double[] end = stateAt(end());
-        return append(duration, POLYNOMIAL, end[0], end[1], angularAcceleration, 0.0);
+        return append(source, duration, POLYNOMIAL, end[0], end[1], angularAcceleration, 0.0);
     }
 
     /**
@@ -195,7 +199,8 @@ public final class SpinProfile implements Serializable {
         if (change == 0.0) {
             return this;
         }
-        return ramp(Math.abs(change) / angularAcceleration, Math.copySign(angularAcceleration, change));
+        return ramp("|rate - current rate| / angularAcceleration", Math.abs(change) / angularAcceleration,
+                Math.copySign(angularAcceleration, change));
     }
 
     /**
@@ -217,7 +222,14 @@ public final class SpinProfile implements Serializable {
         Arguments.positive("angularAcceleration", angularAcceleration);
         SpinProfile p = this;
         for (int i = 0; i < rates.length; i++) {
-            p = p.rampTo(Arguments.finite("rates[" + i + "]", rates[i]), angularAcceleration).hold(holdDuration);
+            double rate = Arguments.finite("rates[" + i + "]", rates[i]);
+            double change = rate - p.stateAt(p.end())[1];
+            if (change != 0.0) {
+                // the end time this ramp must move was set by the earlier holds: name both
+                p = p.ramp("ramp to rates[" + i + "] at angularAcceleration, after " + i + " holds of holdDuration",
+                        Math.abs(change) / angularAcceleration, Math.copySign(angularAcceleration, change));
+            }
+            p = p.ramp("holdDuration", holdDuration, 0.0);
         }
         return p;
     }
@@ -241,7 +253,8 @@ public final class SpinProfile implements Serializable {
         Arguments.positive("angularFrequency", angularFrequency);
         Arguments.positive("cycles", cycles);
         double[] end = stateAt(end());
-        return appendCosine(2.0 * Math.PI * cycles / angularFrequency, end[0], end[1], amplitude, angularFrequency);
+        return append("2 pi cycles / angularFrequency", 2.0 * Math.PI * cycles / angularFrequency, COSINE, end[0],
+                end[1], amplitude, angularFrequency);
     }
 
     /**
@@ -375,12 +388,17 @@ public final class SpinProfile implements Serializable {
         return times[times.length - 1] > times[0];
     }
 
-    private SpinProfile append(double duration, int kind, double a0, double r0, double p2, double p3) {
+    /**
+     * Appends a piece. {@code source} names the arguments the duration was computed from, for the
+     * message when the piece cannot move the end time to a later finite time.
+     */
+    private SpinProfile append(String source, double duration, int kind, double a0, double r0, double p2,
+                               double p3) {
         double t0 = end();
         double t1 = t0 + duration;
         if (!(t1 > t0) || !Double.isFinite(t1)) {
-            throw new IllegalArgumentException("duration " + duration + " s is too short to move the end time "
-                    + t0 + " s, or too long");
+            throw new IllegalArgumentException("the piece's duration (" + source + ") " + duration
+                    + " s must move the end time " + t0 + " s to a later finite time (too short or too long)");
         }
         if (!hasDuration()) {
             return new SpinProfile(new double[] {t0, t1}, new int[] {kind}, new double[] {a0, r0, p2, p3});
@@ -398,9 +416,6 @@ public final class SpinProfile implements Serializable {
         return new SpinProfile(nt, nk, np);
     }
 
-    private SpinProfile appendCosine(double duration, double a0, double r0, double amplitude, double w) {
-        return append(duration, COSINE, a0, r0, amplitude, w);
-    }
 
     @Override
     public boolean equals(Object other) {

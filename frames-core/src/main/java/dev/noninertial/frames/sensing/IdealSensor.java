@@ -224,8 +224,9 @@ public final class IdealSensor implements Serializable {
     public void readingsAt(double[] times, int timeOffset, double[] target, int targetOffset, int count) {
         Arguments.nonNull("times", times);
         Arguments.nonNull("target", target);
-        checkRange("times", "timeOffset", times.length, timeOffset, count, 1);
-        checkRange("target", "targetOffset", target.length, targetOffset, count, InertialReading.COMPONENTS);
+        Arguments.fromIndexSize("times", times, "timeOffset", timeOffset, "count", count, 1);
+        Arguments.fromIndexSize("target", target, "targetOffset", targetOffset, "count", count,
+                InertialReading.COMPONENTS);
         double[] s = new double[GRAVITY + 3];
         for (int k = 0; k < count; k++) {
             double t = times[timeOffset + k];
@@ -281,7 +282,8 @@ public final class IdealSensor implements Serializable {
         Arguments.finite("start", start);
         Arguments.positive("interval", interval);
         Arguments.nonNull("target", target);
-        checkRange("target", "targetOffset", target.length, targetOffset, count, SensorIncrements.COMPONENTS);
+        Arguments.fromIndexSize("target", target, "targetOffset", targetOffset, "count", count,
+                SensorIncrements.COMPONENTS);
         if (count == 0) {
             return;
         }
@@ -420,17 +422,6 @@ public final class IdealSensor implements Serializable {
         System.arraycopy(s, base + 4 * 7, s, next + 4 * 7, 7);
         fillInner(mid, b, s, d + 1);
         piece(mid, b, d + 1, tolF, tolW, s);
-    }
-
-    private static void checkRange(String array, String offsetName, int length, int offset, int count, int stride) {
-        if (count < 0) {
-            throw new IllegalArgumentException("count must be >= 0, got " + count);
-        }
-        long span = (long) count * stride;
-        if (offset < 0 || offset + span > length) {
-            throw new IllegalArgumentException(offsetName + " must be in [0, " + (length - span) + "] for "
-                    + count + " entries in " + array + " of length " + length + ", got " + offset);
-        }
     }
 
     @Override

@@ -300,18 +300,9 @@ public final class SensorImperfections implements Serializable {
         Arguments.nonNull("ideal", ideal);
         Arguments.nonNull("target", target);
         Arguments.positive("interval", dt);
-        if (count < 0) {
-            throw new IllegalArgumentException("count must be >= 0, got " + count);
-        }
+        Arguments.fromIndexSize("ideal", ideal, "offset", offset, "count", count, 6);
+        Arguments.fromIndexSize("target", target, "targetOffset", targetOffset, "count", count, 6);
         long span = 6L * count;
-        if (offset < 0 || offset + span > ideal.length) {
-            throw new IllegalArgumentException("offset must be in [0, " + (ideal.length - span) + "] for " + count
-                    + " entries, got " + offset);
-        }
-        if (targetOffset < 0 || targetOffset + span > target.length) {
-            throw new IllegalArgumentException("targetOffset must be in [0, " + (target.length - span) + "] for "
-                    + count + " entries, got " + targetOffset);
-        }
         if (ideal == target && offset != targetOffset && Math.abs((long) offset - targetOffset) < span) {
             throw new IllegalArgumentException("ideal and target ranges overlap with different offsets");
         }

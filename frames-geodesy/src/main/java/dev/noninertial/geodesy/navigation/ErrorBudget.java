@@ -50,6 +50,21 @@ public final class ErrorBudget implements Serializable {
     public record TermEffect(NavigationTerm term, double horizontalAtEnd, double verticalAtEnd,
                              double attitudeAtEnd, double peakPosition, double peakAttitude) implements Serializable {
 
+        /**
+         * Checks the components.
+         *
+         * @throws NullPointerException if {@code term} is null
+         * @throws IllegalArgumentException if a number is not finite
+         */
+        public TermEffect {
+            Arguments.nonNull("term", term);
+            Arguments.finite("horizontalAtEnd", horizontalAtEnd);
+            Arguments.finite("verticalAtEnd", verticalAtEnd);
+            Arguments.finite("attitudeAtEnd", attitudeAtEnd);
+            Arguments.finite("peakPosition", peakPosition);
+            Arguments.finite("peakAttitude", peakAttitude);
+        }
+
         @Override
         public String toString() {
             return String.format(Locale.ROOT, "%s: horizontal %.3e m, vertical %.3e m, attitude %.3e rad at the end; "

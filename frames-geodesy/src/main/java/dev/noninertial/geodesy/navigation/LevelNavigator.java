@@ -226,6 +226,7 @@ public final class LevelNavigator implements Serializable {
      * @return the copy
      */
     public LevelNavigator withSensorOffset(Vector3D offset) {
+        Arguments.finite("offset (m)", offset);
         return withAccelerometerOffsets(offset, offset, offset);
     }
 

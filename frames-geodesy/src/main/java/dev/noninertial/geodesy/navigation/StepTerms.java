@@ -5,6 +5,7 @@ import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Formats;
 import dev.noninertial.geodesy.LocalAxes;
 
@@ -40,6 +41,35 @@ public record StepTerms(long step, double start, double end, LocalAxes axes, Vec
                         Vector3D coriolis, Vector3D transportRateTerm, Vector3D gravity, Vector3D coning,
                         Vector3D sculling, Vector3D rotationCompensation, Vector3D sizeEffect,
                         Vector3D earthRateAngle, Vector3D transportRateAngle) implements Serializable {
+
+    /**
+     * Checks the components: a step index of at least 0, finite times with {@code end >= start},
+     * non-null axes and non-null finite vectors.
+     *
+     * @throws NullPointerException if {@code axes} or a vector is null
+     * @throws IllegalArgumentException if a component is out of range
+     */
+    public StepTerms {
+        if (step < 0) {
+            throw new IllegalArgumentException("step must be >= 0, got " + step);
+        }
+        Arguments.finite("start", start);
+        Arguments.finite("end", end);
+        if (!(end >= start)) {
+            throw new IllegalArgumentException("end must be >= start " + start + " s, got " + end + " s");
+        }
+        Arguments.nonNull("axes", axes);
+        Arguments.finite("specificForce", specificForce);
+        Arguments.finite("coriolis", coriolis);
+        Arguments.finite("transportRateTerm", transportRateTerm);
+        Arguments.finite("gravity", gravity);
+        Arguments.finite("coning", coning);
+        Arguments.finite("sculling", sculling);
+        Arguments.finite("rotationCompensation", rotationCompensation);
+        Arguments.finite("sizeEffect", sizeEffect);
+        Arguments.finite("earthRateAngle", earthRateAngle);
+        Arguments.finite("transportRateAngle", transportRateAngle);
+    }
 
     /**
      * The sum of the velocity equation's terms: specific force plus Coriolis plus transport-rate
