@@ -100,14 +100,7 @@ public interface Motion {
      */
     default void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                         double[] target, int targetOffset, int count) {
-        Placement.checkBulk(source, sourceOffset, target, targetOffset, count);
-        checkTimes(times, timeOffset, count);
-        double[] p = new double[Placement.COMPONENTS];
-        for (int k = 0; k < count; k++) {
-            at(times[timeOffset + k], p, 0);
-            Kinematics.toBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
-                    target, targetOffset + k * PointState.COMPONENTS, 1);
-        }
+        convertEach(true, times, timeOffset, source, sourceOffset, target, targetOffset, count);
     }
 
     /**
@@ -129,13 +122,28 @@ public interface Motion {
      */
     default void fromBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                           double[] target, int targetOffset, int count) {
+        convertEach(false, times, timeOffset, source, sourceOffset, target, targetOffset, count);
+    }
+
+    /**
+     * The loop of both bulk conversions, each state through the placement at its own time: one
+     * routine for both directions; the per-state branch picks the kernel's loop (which stay apart,
+     * see {@link Kinematics#fromBase}).
+     */
+    private void convertEach(boolean toBase, double[] times, int timeOffset, double[] source, int sourceOffset,
+                             double[] target, int targetOffset, int count) {
         Placement.checkBulk(source, sourceOffset, target, targetOffset, count);
         checkTimes(times, timeOffset, count);
         double[] p = new double[Placement.COMPONENTS];
         for (int k = 0; k < count; k++) {
             at(times[timeOffset + k], p, 0);
-            Kinematics.fromBase(p, 0, source, sourceOffset + k * PointState.COMPONENTS,
-                    target, targetOffset + k * PointState.COMPONENTS, 1);
+            int from = sourceOffset + k * PointState.COMPONENTS;
+            int to = targetOffset + k * PointState.COMPONENTS;
+            if (toBase) {
+                Kinematics.toBase(p, 0, source, from, target, to, 1);
+            } else {
+                Kinematics.fromBase(p, 0, source, from, target, to, 1);
+            }
         }
     }
 

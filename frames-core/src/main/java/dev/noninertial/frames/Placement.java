@@ -364,7 +364,11 @@ public final class Placement implements Serializable {
         System.arraycopy(c, Kinematics.RATE, target, offset + 13, 6);
     }
 
-    /** The components in the matrix layout, for the kernel callers of this package; never modify. */
+    /**
+     * The components in the matrix layout, for the kernel callers of this package: returns the
+     * internal array itself, not a copy, so a caller must never modify it (package-private, so
+     * unreachable from outside the package; public accessors copy).
+     */
     double[] components() {
         return c;
     }

@@ -42,7 +42,11 @@ public final class PointState implements Serializable {
         return new PointState(components);
     }
 
-    /** The components in the bulk layout, for the kernel callers of this package; never modify. */
+    /**
+     * The components in the bulk layout, for the kernel callers of this package: returns the
+     * internal array itself, not a copy, so a caller must never modify it (package-private, so
+     * unreachable from outside the package; public accessors copy).
+     */
     double[] components() {
         return c;
     }
