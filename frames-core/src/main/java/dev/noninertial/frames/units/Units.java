@@ -1,5 +1,7 @@
 package dev.noninertial.frames.units;
 
+import dev.noninertial.frames.Arguments;
+
 /**
  * Named conversions between the units of the trade and the SI units the library computes in, so
  * that the unit shows where a number is written: {@code Units.knots(9)} is 9 knots in m/s,
@@ -15,8 +17,9 @@ package dev.noninertial.frames.units;
  * pi/180 rad; an hour is 3600 s; standard gravity g = 9.80665 m/s^2 exactly (3rd CGPM 1901,
  * ISO 80000-3); 1 Gal = 1 cm/s^2, so 1 mGal = 1e-5 m/s^2; the angle random walk unit deg/sqrt(h)
  * is (pi/180)/60 rad/sqrt(s) and the velocity random walk unit (m/s)/sqrt(h) is 1/60
- * (m/s)/sqrt(s), since sqrt(3600 s) = 60 sqrt(s). No input is refused: NaN and infinities pass
- * through unchanged, as in any multiplication.
+ * (m/s)/sqrt(s), since sqrt(3600 s) = 60 sqrt(s). A value that is NaN or infinite is refused
+ * with an {@link IllegalArgumentException} naming the parameter: a unit conversion is where a
+ * typing slip enters, so it is stopped there, not passed on as NaN.
  *
  * <p>Stateless and thread-safe.
  */
@@ -46,9 +49,10 @@ public final class Units {
      *
      * @param knots speed (kn)
      * @return the speed (m/s)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double knots(double knots) {
-        return knots * KNOT;
+        return Arguments.finite("knots", knots) * KNOT;
     }
 
     /**
@@ -56,9 +60,10 @@ public final class Units {
      *
      * @param metresPerSecond speed (m/s)
      * @return the speed (kn)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toKnots(double metresPerSecond) {
-        return metresPerSecond / KNOT;
+        return Arguments.finite("metresPerSecond", metresPerSecond) / KNOT;
     }
 
     /**
@@ -66,9 +71,10 @@ public final class Units {
      *
      * @param rpm rate (rev/min)
      * @return the rate (rad/s)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double rpm(double rpm) {
-        return rpm * RPM;
+        return Arguments.finite("rpm", rpm) * RPM;
     }
 
     /**
@@ -76,9 +82,10 @@ public final class Units {
      *
      * @param radiansPerSecond rate (rad/s)
      * @return the rate (rev/min)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toRpm(double radiansPerSecond) {
-        return radiansPerSecond / RPM;
+        return Arguments.finite("radiansPerSecond", radiansPerSecond) / RPM;
     }
 
     /**
@@ -86,9 +93,10 @@ public final class Units {
      *
      * @param degrees angle (deg)
      * @return the angle (rad)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double degrees(double degrees) {
-        return degrees * DEGREE;
+        return Arguments.finite("degrees", degrees) * DEGREE;
     }
 
     /**
@@ -96,9 +104,10 @@ public final class Units {
      *
      * @param radians angle (rad)
      * @return the angle (deg)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toDegrees(double radians) {
-        return radians / DEGREE;
+        return Arguments.finite("radians", radians) / DEGREE;
     }
 
     /**
@@ -106,9 +115,10 @@ public final class Units {
      *
      * @param degreesPerSecond rate (deg/s)
      * @return the rate (rad/s)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double degreesPerSecond(double degreesPerSecond) {
-        return degreesPerSecond * DEGREE;
+        return Arguments.finite("degreesPerSecond", degreesPerSecond) * DEGREE;
     }
 
     /**
@@ -116,9 +126,10 @@ public final class Units {
      *
      * @param radiansPerSecond rate (rad/s)
      * @return the rate (deg/s)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toDegreesPerSecond(double radiansPerSecond) {
-        return radiansPerSecond / DEGREE;
+        return Arguments.finite("radiansPerSecond", radiansPerSecond) / DEGREE;
     }
 
     /**
@@ -126,9 +137,10 @@ public final class Units {
      *
      * @param degreesPerHour rate (deg/h)
      * @return the rate (rad/s)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double degreesPerHour(double degreesPerHour) {
-        return degreesPerHour * DEGREE / HOUR;
+        return Arguments.finite("degreesPerHour", degreesPerHour) * DEGREE / HOUR;
     }
 
     /**
@@ -136,9 +148,10 @@ public final class Units {
      *
      * @param radiansPerSecond rate (rad/s)
      * @return the rate (deg/h)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toDegreesPerHour(double radiansPerSecond) {
-        return radiansPerSecond * HOUR / DEGREE;
+        return Arguments.finite("radiansPerSecond", radiansPerSecond) * HOUR / DEGREE;
     }
 
     /**
@@ -146,9 +159,10 @@ public final class Units {
      *
      * @param gees acceleration (g)
      * @return the acceleration (m/s^2)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double standardGravities(double gees) {
-        return gees * STANDARD_GRAVITY;
+        return Arguments.finite("gees", gees) * STANDARD_GRAVITY;
     }
 
     /**
@@ -156,9 +170,10 @@ public final class Units {
      *
      * @param metresPerSecondSquared acceleration (m/s^2)
      * @return the acceleration (g)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toStandardGravities(double metresPerSecondSquared) {
-        return metresPerSecondSquared / STANDARD_GRAVITY;
+        return Arguments.finite("metresPerSecondSquared", metresPerSecondSquared) / STANDARD_GRAVITY;
     }
 
     /**
@@ -166,9 +181,10 @@ public final class Units {
      *
      * @param milligals acceleration (mGal)
      * @return the acceleration (m/s^2)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double milligals(double milligals) {
-        return milligals * MILLIGAL;
+        return Arguments.finite("milligals", milligals) * MILLIGAL;
     }
 
     /**
@@ -176,9 +192,10 @@ public final class Units {
      *
      * @param metresPerSecondSquared acceleration (m/s^2)
      * @return the acceleration (mGal)
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toMilligals(double metresPerSecondSquared) {
-        return metresPerSecondSquared / MILLIGAL;
+        return Arguments.finite("metresPerSecondSquared", metresPerSecondSquared) / MILLIGAL;
     }
 
     /**
@@ -186,9 +203,10 @@ public final class Units {
      *
      * @param degreesPerRootHour angle random walk (deg/sqrt(h))
      * @return the angle random walk (rad/sqrt(s))
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double degreesPerRootHour(double degreesPerRootHour) {
-        return degreesPerRootHour * DEGREE / ROOT_HOUR;
+        return Arguments.finite("degreesPerRootHour", degreesPerRootHour) * DEGREE / ROOT_HOUR;
     }
 
     /**
@@ -196,9 +214,10 @@ public final class Units {
      *
      * @param radiansPerRootSecond angle random walk (rad/sqrt(s))
      * @return the angle random walk (deg/sqrt(h))
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toDegreesPerRootHour(double radiansPerRootSecond) {
-        return radiansPerRootSecond * ROOT_HOUR / DEGREE;
+        return Arguments.finite("radiansPerRootSecond", radiansPerRootSecond) * ROOT_HOUR / DEGREE;
     }
 
     /**
@@ -206,9 +225,10 @@ public final class Units {
      *
      * @param metresPerSecondPerRootHour velocity random walk ((m/s)/sqrt(h))
      * @return the velocity random walk ((m/s)/sqrt(s))
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double metresPerSecondPerRootHour(double metresPerSecondPerRootHour) {
-        return metresPerSecondPerRootHour / ROOT_HOUR;
+        return Arguments.finite("metresPerSecondPerRootHour", metresPerSecondPerRootHour) / ROOT_HOUR;
     }
 
     /**
@@ -216,8 +236,9 @@ public final class Units {
      *
      * @param metresPerSecondPerRootSecond velocity random walk ((m/s)/sqrt(s))
      * @return the velocity random walk ((m/s)/sqrt(h))
+     * @throws IllegalArgumentException if the value is NaN or infinite
      */
     public static double toMetresPerSecondPerRootHour(double metresPerSecondPerRootSecond) {
-        return metresPerSecondPerRootSecond * ROOT_HOUR;
+        return Arguments.finite("metresPerSecondPerRootSecond", metresPerSecondPerRootSecond) * ROOT_HOUR;
     }
 }

@@ -1,6 +1,8 @@
 package dev.noninertial.frames.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.hipparchus.dfp.Dfp;
 import org.hipparchus.dfp.DfpField;
@@ -70,5 +72,17 @@ class UnitsTest {
         // the Eotvos rule of thumb's 0.004154 V^2 mGal (V in knots; REFERENCES.md, Gravimetry) is
         // V^2 / R with R = 6371 km: 1 kn^2 / 6.371e6 m = 4.1541e-6 m/s^2 = 0.0041541 mGal
         assertEquals(0.004154, Units.toMilligals(Units.knots(1) * Units.knots(1) / 6.371e6), 1e-6);
+    }
+
+    @Test
+    void refusesNonFiniteValuesNamingTheParameter() {
+        // a NaN or infinite value is refused where it is converted, naming the parameter
+        IllegalArgumentException nan = assertThrows(IllegalArgumentException.class, () -> Units.knots(Double.NaN));
+        assertTrue(nan.getMessage().contains("knots"), nan.getMessage());
+        IllegalArgumentException inf = assertThrows(IllegalArgumentException.class,
+                () -> Units.toMilligals(Double.POSITIVE_INFINITY));
+        assertTrue(inf.getMessage().contains("metresPerSecondSquared"), inf.getMessage());
+        // the largest finite inputs still convert to finite values (every factor is below 1e4)
+        assertTrue(Double.isFinite(Units.toDegreesPerHour(1e300)));
     }
 }
