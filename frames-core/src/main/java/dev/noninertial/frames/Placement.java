@@ -255,9 +255,16 @@ public final class Placement implements Serializable {
         target[o + 23] = alz;
     }
 
-    /** Parameter names of the primitive factories, in their order (named in refusals). */
-    private static final String[] COMPONENT_NAMES = {"ox", "oy", "oz", "ovx", "ovy", "ovz", "oax", "oay", "oaz",
-        "q0", "q1", "q2", "q3", "wx", "wy", "wz", "alx", "aly", "alz"};
+    /**
+     * Parameter names of the primitive factories, in their order, with the component they are
+     * (named in refusals: motions call these factories, their users know the components).
+     */
+    private static final String[] COMPONENT_NAMES = {"ox (origin x)", "oy (origin y)", "oz (origin z)",
+        "ovx (originVelocity x)", "ovy (originVelocity y)", "ovz (originVelocity z)",
+        "oax (originAcceleration x)", "oay (originAcceleration y)", "oaz (originAcceleration z)",
+        "q0 (quaternion scalar)", "q1 (quaternion x)", "q2 (quaternion y)", "q3 (quaternion z)",
+        "wx (angularVelocity x)", "wy (angularVelocity y)", "wz (angularVelocity z)",
+        "alx (angularAcceleration x)", "aly (angularAcceleration y)", "alz (angularAcceleration z)"};
 
     /** Refuses a non-finite component or a quaternion off unit; returns the quaternion's norm. */
     private static double refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
