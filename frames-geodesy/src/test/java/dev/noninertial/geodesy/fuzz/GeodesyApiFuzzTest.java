@@ -7,7 +7,9 @@ import java.time.Instant;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
+import dev.noninertial.frames.Orientations;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.frames.fuzz.ApiFuzz;
 import dev.noninertial.frames.fuzz.CoreSamples;
 import dev.noninertial.frames.fuzz.FuzzReports;
@@ -20,6 +22,8 @@ import dev.noninertial.geodesy.Ellipsoid;
 import dev.noninertial.geodesy.GeodeticPath;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
+import dev.noninertial.geodesy.navigation.LevelNavigator;
+import dev.noninertial.geodesy.navigation.NavigationState;
 
 /**
  * The reflection fuzz of frames-geodesy's public API (issue 15), with the rule of {@link ApiFuzz}.
@@ -30,6 +34,10 @@ class GeodesyApiFuzzTest {
     private static final EarthFrames EARTH = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-03-20T12:00:00Z"));
     private static final LatLonHeight SITE = LatLonHeight.ofDegrees(47.5, 8.2, 420.0);
     private static final ReferenceFrame ENU = EARTH.localLevel("site", SITE, LocalAxes.ENU);
+    /** A navigator and a state at rest at the site, at t = -0.5 s so that the ends {0, 1, 2} follow it. */
+    private static final LevelNavigator NAVIGATOR = LevelNavigator.of(EarthModel.WGS84, LocalAxes.ENU);
+    private static final NavigationState AT_REST = NavigationState.of(-0.5, SITE, Vector3D.ZERO, LocalAxes.ENU,
+            Orientations.identity());
 
     static SampleValues table() {
         SampleValues s = CoreSamples.table();
@@ -48,7 +56,18 @@ class GeodesyApiFuzzTest {
         s.add(GeodeticPath.class, () -> GeodeticPath.stationary(SITE));
         s.add(AttitudeSample.class, () -> AttitudeSample.stationary(0.3, 0.05, -0.02));
         s.add(AttitudeProfile.class, () -> AttitudeProfile.stationary(0.3, 0.05, -0.02));
+        // navigation: the work array of the navigator (tried after the core arrays), one step of
+        // increments from the state's time (specific force about 1 g up, a small turn)
+        s.add(double[].class, () -> NAVIGATOR.newWork(AT_REST));
+        s.add(LevelNavigator.class, () -> NAVIGATOR);
+        s.add(NavigationState.class, () -> AT_REST);
+        s.add(SensorIncrements.class, GeodesyApiFuzzTest::increments);
+        s.add(SensorIncrements[].class, () -> new SensorIncrements[] {increments()});
         return s;
+    }
+
+    private static SensorIncrements increments() {
+        return new SensorIncrements(-0.5, 0.5, new Vector3D(0.0, 0.0, 9.8), new Vector3D(1e-4, 0.0, 0.0));
     }
 
     @Test
