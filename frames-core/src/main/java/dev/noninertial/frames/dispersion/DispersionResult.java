@@ -155,8 +155,9 @@ public final class DispersionResult implements Serializable {
         }
     }
 
-    private int columnIndex(String name) {
-        Arguments.nonNull("name", name);
+    /** The column of a name, the refusal naming the caller's argument {@code argument}. */
+    private int columnIndex(String argument, String name) {
+        Arguments.nonNull(argument, name);
         int i = inputNames.indexOf(name);
         if (i >= 0) {
             return i;
@@ -165,7 +166,7 @@ public final class DispersionResult implements Serializable {
         if (k >= 0) {
             return inputNames.size() + k;
         }
-        throw new IllegalArgumentException("name must be one of " + inputNames + " or " + outcomeNames
+        throw new IllegalArgumentException(argument + " must be one of " + inputNames + " or " + outcomeNames
                 + ", got '" + name + "'");
     }
 
@@ -177,7 +178,7 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double[] column(String name) {
-        int c = columnIndex(name);
+        int c = columnIndex("name", name);
         double[] values = new double[rows];
         for (int i = 0; i < rows; i++) {
             values[i] = table[i * width + c];
@@ -193,7 +194,7 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double mean(String name) {
-        return meanOf(columnIndex(name));
+        return meanOf(columnIndex("name", name));
     }
 
     private double meanOf(int c) {
@@ -226,8 +227,8 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double covariance(String a, String b) {
-        int ca = columnIndex(a);
-        int cb = columnIndex(b);
+        int ca = columnIndex("a", a);
+        int cb = columnIndex("b", b);
         return covarianceOf(ca, cb, meanOf(ca), meanOf(cb));
     }
 
@@ -267,7 +268,9 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double standardDeviation(String name) {
-        return Math.sqrt(covariance(name, name));
+        int c = columnIndex("name", name);
+        double m = meanOf(c);
+        return Math.sqrt(covarianceOf(c, c, m, m));
     }
 
     /**
@@ -307,8 +310,8 @@ public final class DispersionResult implements Serializable {
      *         probability is out of range, or there are fewer than 3 cases
      */
     public ConfidenceEllipse ellipse(String x, String y, double probability) {
-        int cx = columnIndex(x);
-        int cy = columnIndex(y);
+        int cx = columnIndex("x", x);
+        int cy = columnIndex("y", y);
         if (cx == cy) {
             throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
         }
@@ -330,8 +333,8 @@ public final class DispersionResult implements Serializable {
      */
     public double fractionInside(ConfidenceEllipse ellipse) {
         Arguments.nonNull("ellipse", ellipse);
-        int cx = columnIndex(ellipse.xName());
-        int cy = columnIndex(ellipse.yName());
+        int cx = columnIndex("ellipse.xName()", ellipse.xName());
+        int cy = columnIndex("ellipse.yName()", ellipse.yName());
         int inside = 0;
         for (int i = 0; i < rows; i++) {
             if (ellipse.contains(table[i * width + cx], table[i * width + cy])) {
@@ -351,6 +354,8 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if a name is unknown or {@code x} equals {@code y}
      */
     public double cep(String x, String y) {
+        columnIndex("x", x);
+        columnIndex("y", y);
         return cepAbout(x, y, mean(x), mean(y));
     }
 
@@ -367,8 +372,8 @@ public final class DispersionResult implements Serializable {
      *         centre is not finite
      */
     public double cepAbout(String x, String y, double centreX, double centreY) {
-        int cx = columnIndex(x);
-        int cy = columnIndex(y);
+        int cx = columnIndex("x", x);
+        int cy = columnIndex("y", y);
         if (cx == cy) {
             throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
         }
@@ -392,6 +397,9 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if a name is unknown or {@code x} equals {@code y}
      */
     public String footprint(String x, String y) {
+        if (columnIndex("x", x) == columnIndex("y", y)) {
+            throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
+        }
         double sx = standardDeviation(x);
         double sy = standardDeviation(y);
         double r = covariance(x, y) / (sx * sy);
