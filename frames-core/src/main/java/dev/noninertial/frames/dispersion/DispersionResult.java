@@ -40,8 +40,10 @@ public final class DispersionResult implements Serializable {
     private static final long serialVersionUID = 1L;
 
     /** Input names in declaration order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> inputNames;
     /** Outcome names in order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> outcomeNames;
     /** Values per row: inputs plus outcomes. */
     private final int width;

@@ -43,6 +43,7 @@ public final class InputDistribution implements Serializable {
     private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(0.0, 1.0);
 
     /** The distribution the values come from (for the truncated kind: the standard normal). */
+    @SuppressWarnings("serial") // the Hipparchus distributions made here are serializable
     private final RealDistribution distribution;
     /** Human-readable description with the parameters. */
     private final String text;

@@ -80,6 +80,7 @@ public final class ErrorBudget implements Serializable {
     /** Number of steps of each run. */
     private final int steps;
     /** The effect of leaving out each term, one entry per term. */
+    @SuppressWarnings("serial") // an unmodifiable ArrayList of records: serializable
     private final List<TermEffect> effects;
 
     private ErrorBudget(NavigationState reference, double duration, int steps, List<TermEffect> effects) {
