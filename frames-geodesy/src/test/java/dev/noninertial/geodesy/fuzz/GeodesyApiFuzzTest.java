@@ -7,7 +7,9 @@ import java.time.Instant;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
+import dev.noninertial.frames.FramedState;
 import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
 import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.frames.fuzz.ApiFuzz;
@@ -20,8 +22,10 @@ import dev.noninertial.geodesy.EarthFrames;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.Ellipsoid;
 import dev.noninertial.geodesy.GeodeticPath;
+import dev.noninertial.geodesy.GeodeticTrack;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
+import dev.noninertial.geodesy.air.WindProfile;
 import dev.noninertial.geodesy.navigation.LevelNavigator;
 import dev.noninertial.geodesy.navigation.NavigationState;
 
@@ -45,7 +49,7 @@ class GeodesyApiFuzzTest {
         s.put(ReferenceFrame.class, () -> ENU, EARTH::earthFixed, EARTH::inertial);
         s.put(Double.class, () -> 0.5, () -> 1.0, () -> 0.1, () -> 2.0, () -> 10.0, () -> 0.0, () -> -0.5,
                 () -> 100.0, () -> 1e-3, () -> 0.9, () -> 6378137.0, () -> 3.986004418e14, () -> 7.292115e-5,
-                () -> 298.257223563);
+                () -> 298.257223563, () -> 2460000.5);
         s.put(Vector3D.class, () -> Ellipsoid.WGS84.toCartesian(SITE), () -> new Vector3D(3.0, 4.0, 0.0),
                 () -> new Vector3D(0.3, -0.2, 0.9), () -> Vector3D.PLUS_K, () -> Vector3D.ZERO);
         s.add(Ellipsoid.class, () -> Ellipsoid.WGS84, () -> Ellipsoid.GRS80);
@@ -54,6 +58,15 @@ class GeodesyApiFuzzTest {
         s.add(LatLonHeight.class, () -> SITE, () -> LatLonHeight.ofDegrees(-12.0, 130.0, 5.0));
         s.add(Instant.class, () -> Instant.parse("2026-03-20T12:00:00Z"));
         s.add(GeodeticPath.class, () -> GeodeticPath.stationary(SITE));
+        // a track of three samples 1 s apart near the site (invented), without and with attitude
+        s.add(GeodeticTrack.class, () -> GeodeticTrack.fromArrays(new double[] {0, 1, 2},
+                new double[] {0.829, 0.829, 0.829}, new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422},
+                10.0), () -> GeodeticTrack.fromArrays(new double[] {0, 1, 2}, new double[] {0.829, 0.829, 0.829},
+                new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
+                new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0));
+        s.add(WindProfile.Layered.class, () -> (WindProfile.Layered) WindProfile.layered(new double[] {0.0, 1000.0},
+                new double[] {1.0, 2.0}, new double[] {0.0, 1.0}));
+        s.add(FramedState.class, () -> ENU.stateAt(0.0, PointState.stationary(new Vector3D(1.0, 2.0, 3.0))));
         s.add(AttitudeSample.class, () -> AttitudeSample.stationary(0.3, 0.05, -0.02));
         s.add(AttitudeProfile.class, () -> AttitudeProfile.stationary(0.3, 0.05, -0.02));
         // navigation: the work array of the navigator (tried after the core arrays), one step of
