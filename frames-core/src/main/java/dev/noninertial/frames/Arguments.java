@@ -143,10 +143,20 @@ public final class Arguments {
      * @param offset index of the first element of the range
      * @param size number of elements of the range, at least 0
      * @throws NullPointerException if {@code array} is null
-     * @throws IllegalArgumentException if the range does not fit
+     * @throws IllegalArgumentException if {@code size} is negative (naming the size), the array is
+     *         shorter than {@code size} (naming the array: no offset could fit), or the range does
+     *         not fit from the offset (naming the offset)
      */
     public static void fromIndexSize(String arrayName, double[] array, String offsetName, int offset, int size) {
         nonNull(arrayName, array);
+        if (size < 0) {
+            throw new IllegalArgumentException("size must be at least 0 for a range of " + arrayName + " from "
+                    + offsetName + " " + offset + ", got " + size);
+        }
+        if (size > array.length) {
+            throw new IllegalArgumentException(arrayName + " must have length at least " + size + " for " + size
+                    + " values (from " + offsetName + " " + offset + "), got length " + array.length);
+        }
         if (offset < 0 || offset > array.length - size) {
             throw new IllegalArgumentException(offsetName + " must be in [0, " + ((long) array.length - size)
                     + "] for " + size + " values in " + arrayName + " of length " + array.length + ", got "

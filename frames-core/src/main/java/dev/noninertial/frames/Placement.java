@@ -255,19 +255,34 @@ public final class Placement implements Serializable {
         target[o + 23] = alz;
     }
 
+    /**
+     * Parameter names of the primitive factories, in their order, with the component they are
+     * (named in refusals: motions call these factories, their users know the components).
+     */
+    private static final String[] COMPONENT_NAMES = {"ox (origin x)", "oy (origin y)", "oz (origin z)",
+        "ovx (originVelocity x)", "ovy (originVelocity y)", "ovz (originVelocity z)",
+        "oax (originAcceleration x)", "oay (originAcceleration y)", "oaz (originAcceleration z)",
+        "q0 (quaternion scalar)", "q1 (quaternion x)", "q2 (quaternion y)", "q3 (quaternion z)",
+        "wx (angularVelocity x)", "wy (angularVelocity y)", "wz (angularVelocity z)",
+        "alx (angularAcceleration x)", "aly (angularAcceleration y)", "alz (angularAcceleration z)"};
+
     /** Refuses a non-finite component or a quaternion off unit; returns the quaternion's norm. */
     private static double refuseComponents(double ox, double oy, double oz, double ovx, double ovy, double ovz,
                                            double oax, double oay, double oaz,
                                            double q0, double q1, double q2, double q3,
                                            double wx, double wy, double wz, double alx, double aly, double alz) {
-        Arguments.finite("origin", new Vector3D(ox, oy, oz));
-        Arguments.finite("originVelocity", new Vector3D(ovx, ovy, ovz));
-        Arguments.finite("originAcceleration", new Vector3D(oax, oay, oaz));
-        Arguments.finite("angularVelocity", new Vector3D(wx, wy, wz));
-        Arguments.finite("angularAcceleration", new Vector3D(alx, aly, alz));
+        if (!Double.isFinite(ox + oy + oz + ovx + ovy + ovz + oax + oay + oaz + wx + wy + wz + alx + aly + alz)
+                || !Double.isFinite(q0) || !Double.isFinite(q1) || !Double.isFinite(q2) || !Double.isFinite(q3)) {
+            // the first non-finite component (the sum of finite huge ones may overflow: then none
+            // is refused here), by its parameter name, in parameter order
+            double[] values = {ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3, wx, wy, wz, alx, aly, alz};
+            for (int k = 0; k < values.length; k++) {
+                Arguments.finite(COMPONENT_NAMES[k], values[k]);
+            }
+        }
         double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
         if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
-            throw new IllegalArgumentException("quaternion must be finite and unit (|norm - 1| <= "
+            throw new IllegalArgumentException("quaternion (q0, q1, q2, q3) must be unit (|norm - 1| <= "
                     + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", "
                     + q3 + ") with norm " + norm);
         }

@@ -31,6 +31,7 @@ public final class ReferenceFrame implements Serializable {
     /** Parent frame, null for a root. */
     private final ReferenceFrame parent;
     /** Placement of this frame in its parent over time, null for a root. */
+    @SuppressWarnings("serial") // written with the frame: the library's motions are serializable, a user's must be too
     private final Motion motion;
     /** Number of links from the root. */
     private final int depth;
@@ -365,10 +366,12 @@ public final class ReferenceFrame implements Serializable {
         /** Name of the frame. */
         private final String name;
         /** Motion in the parent, null for a root. */
+        @SuppressWarnings("serial") // written with the frame: the library's motions are serializable, a user's must be too
         private final Motion motion;
         /** Number of links from the root. */
         private final int depth;
         /** Ancestors at depths {@code depth & (depth - 1)} to {@code depth - 1}, root side first. */
+        @SuppressWarnings("serial") // holds ReferenceFrame instances only
         private final Object[] ancestors;
 
         Proxy(String name, Motion motion, int depth, Object[] ancestors) {

@@ -26,8 +26,9 @@ class ArrayRangeRuleTest {
     @Test
     void everyArrayApiNamesTheArgumentAtFault() {
         PointState s = PointState.stationary(Vector3D.PLUS_I);
+        // an array shorter than the range is the array's fault: no offset could fit
         String m = refusal(() -> s.toArray(new double[5], 0));
-        assertTrue(m.startsWith("offset must be in"), m);
+        assertTrue(m.startsWith("target must have length at least 9 for 9 values (from offset 0), got length 5"), m);
         // offset + 9 overflows int: Integer.MAX_VALUE - 3 + 9 < 0
         m = refusal(() -> PointState.fromArray(new double[9], Integer.MAX_VALUE - 3));
         assertTrue(m.startsWith("offset must be in"), m);
@@ -54,6 +55,23 @@ class ArrayRangeRuleTest {
         m = refusal(() -> spin.toBase(new double[3], 2, eighteen, 0, eighteen, 0, 2));
         assertTrue(m.startsWith("timeOffset must be in [0, 1]"), m);
         m = refusal(() -> spin.at(0.0, new double[23], 0));
-        assertTrue(m.startsWith("offset must be in"), m);
+        assertTrue(m.startsWith("target must have length at least 24"), m);
+        m = refusal(() -> spin.at(0.0, new double[30], 7));
+        assertTrue(m.startsWith("offset must be in [0, 6]"), m);
+    }
+
+    @Test
+    void theSizeIsCheckedBeforeTheOffset() {
+        // before, a negative or too large size was blamed on the offset with a negative bound
+        // ("offset must be in [0, -2147483644]")
+        double[] three = new double[3];
+        String m = refusal(() -> Arguments.fromIndexSize("out", three, "offset", 0, -1));
+        assertTrue(m.startsWith("size must be at least 0"), m);
+        m = refusal(() -> Arguments.fromIndexSize("out", three, "offset", 1, Integer.MAX_VALUE));
+        assertTrue(m.startsWith("out must have length at least 2147483647"), m);
+        m = refusal(() -> Arguments.fromIndexSize("out", three, "offset", 1, 3));
+        assertTrue(m.startsWith("offset must be in [0, 0] for 3 values in out of length 3, got 1"), m);
+        Arguments.fromIndexSize("out", three, "offset", 0, 3);
+        Arguments.fromIndexSize("out", three, "offset", 3, 0);
     }
 }

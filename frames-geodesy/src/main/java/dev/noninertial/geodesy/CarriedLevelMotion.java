@@ -18,6 +18,7 @@ final class CarriedLevelMotion implements Motion, Serializable {
     private static final long serialVersionUID = 1L;
 
     private final Ellipsoid ellipsoid;
+    @SuppressWarnings("serial") // the library's paths are serializable, a user's must be too
     private final GeodeticPath path;
     private final LocalAxes axes;
 

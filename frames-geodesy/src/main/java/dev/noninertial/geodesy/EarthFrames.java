@@ -311,6 +311,7 @@ public final class EarthFrames implements Serializable {
      */
     public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, DragCurve dragCurve, double areaOverMass,
                           WindProfile wind) {
+        Arguments.nonNull("dragCurve", dragCurve);
         return AirDrag.of(this, frame, air, dragCurve, areaOverMass, wind);
     }
 
@@ -320,11 +321,11 @@ public final class EarthFrames implements Serializable {
      *
      * @param frame the integration frame, in the tree of {@link #inertial()}
      * @param air the atmosphere
-     * @param ballisticCoefficient B (kg/m^2), positive
+     * @param ballisticCoefficient B (kg/m^2), in [{@link Double#MIN_NORMAL}, {@link Double#MAX_VALUE}]
      * @param wind the air's velocity relative to the Earth, east-north-up at the point
      * @return drag per unit mass (m/s^2), resolved in {@code frame}'s axes
      * @throws IllegalArgumentException if {@code frame} belongs to another tree or {@code B} is
-     *         not positive and finite
+     *         outside that range
      */
     public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, double ballisticCoefficient, WindProfile wind) {
         return AirDrag.ofBallisticCoefficient(this, frame, air, ballisticCoefficient, wind);

@@ -334,7 +334,7 @@ public final class EarthModel implements Serializable {
         double u2 = 0.5 * (d + Math.hypot(d, 2.0 * linear * pz));
         double u = Math.sqrt(u2);
         if (!(u >= b + MIN_HEIGHT)) {
-            throw new IllegalArgumentException("position (" + px + ", " + py + ", " + pz + ") m is deeper than "
+            throw new IllegalArgumentException("position (x, y, z) = (" + px + ", " + py + ", " + pz + ") m is deeper than "
                     + (-MIN_HEIGHT) + " m below the ellipsoid (ellipsoidal coordinate u = " + u + " m, must be >= "
                     + (b + MIN_HEIGHT) + " m): the normal field is not defined inside the masses");
         }
@@ -398,10 +398,7 @@ public final class EarthModel implements Serializable {
         Arguments.finite("x", x);
         Arguments.finite("y", y);
         Arguments.finite("z", z);
-        if (offset < 0 || offset > out.length - 3) {
-            throw new IllegalArgumentException("offset must be in [0, " + (out.length - 3) + "] for out of length "
-                    + out.length + " (3 doubles written), got " + offset);
-        }
+        Arguments.fromIndexSize("out", out, "offset", offset, 3);
         fieldAt(x, y, z, false, out, offset);
     }
 

@@ -35,6 +35,19 @@ class FarAndPolarTest {
     }
 
     @Test
+    void aPointInsideTheMassesIsRefusedNamingItsComponents() {
+        // the normal field is defined outside the masses only (its ellipsoidal coordinate u must
+        // be at least b - 20 km); the primitive form names its parameters x, y, z in the refusal
+        double[] out = new double[3];
+        String m = assertThrows(IllegalArgumentException.class,
+                () -> EarthModel.WGS84.gravitation(Double.MIN_VALUE, 0.0, 100.0, out, 0)).getMessage();
+        assertTrue(m.startsWith("position (x, y, z) = (4.9E-324, 0.0, 100.0) m is deeper than 20000.0 m"), m);
+        m = assertThrows(IllegalArgumentException.class,
+                () -> EarthModel.WGS84.gravitation(7e6, 0.0, 0.0, out, 1)).getMessage();
+        assertTrue(m.startsWith("offset must be in [0, 0] for 3 values in out of length 3"), m);
+    }
+
+    @Test
     void toGeodeticWorksForEveryFinitePosition() {
         // invariant: toCartesian(toGeodetic(X)) = X; far away the latitude tends to the geocentric
         // one corrected by e^2 a / r (below rounding from 1e30 m on)

@@ -121,8 +121,10 @@ public final class SparkFrameConversion {
         private static final long serialVersionUID = 1L;
 
         /** Motions of the frames from {@code from} up to (not including) the common ancestor. */
+        @SuppressWarnings("serial") // shipped to the executors: the library's motions are serializable, a user's must be too
         private final List<Motion> up;
         /** Motions of the frames from just below the common ancestor down to {@code to}. */
+        @SuppressWarnings("serial") // as up
         private final List<Motion> down;
 
         private FramePath(List<Motion> up, List<Motion> down) {

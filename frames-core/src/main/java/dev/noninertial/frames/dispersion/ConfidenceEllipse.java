@@ -37,6 +37,33 @@ public record ConfidenceEllipse(String xName, String yName, double centreX, doub
         double semiMajor, double semiMinor, double orientation, double probability,
         double covXX, double covXY, double covYY) implements Serializable {
 
+    /** Most points {@link #boundary(int)} makes (a plotting outline; more is refused, not truncated). */
+    public static final int MAX_BOUNDARY_POINTS = 1_000_000;
+
+    /**
+     * Checks the components (also on deserialization, which runs this constructor): names
+     * present, centre and covariance finite, variances and semi-axes non-negative and finite,
+     * probability in (0, 1).
+     *
+     * @throws NullPointerException if a name is null
+     * @throws IllegalArgumentException if a number is out of range
+     */
+    public ConfidenceEllipse {
+        Arguments.nonNull("xName", xName);
+        Arguments.nonNull("yName", yName);
+        Arguments.finite("centreX", centreX);
+        Arguments.finite("centreY", centreY);
+        Arguments.inRange("semiMajor", semiMajor, 0.0, Double.MAX_VALUE);
+        Arguments.inRange("semiMinor", semiMinor, 0.0, Double.MAX_VALUE);
+        Arguments.finite("orientation", orientation);
+        if (!(probability > 0.0 && probability < 1.0)) {
+            throw new IllegalArgumentException("probability must be in (0, 1), got " + probability);
+        }
+        Arguments.inRange("covXX", covXX, 0.0, Double.MAX_VALUE);
+        Arguments.finite("covXY", covXY);
+        Arguments.inRange("covYY", covYY, 0.0, Double.MAX_VALUE);
+    }
+
     /**
      * The Mahalanobis radius of the ellipse holding probability {@code P} of a bivariate normal:
      * {@code sqrt(-2 ln(1 - P))} (the chi-square distribution with two degrees of freedom).
@@ -112,13 +139,13 @@ public record ConfidenceEllipse(String xName, String yName, double centreX, doub
      * Points on the boundary, for plotting: {@code count} points evenly spaced in the ellipse's
      * parametric angle, starting on the major axis.
      *
-     * @param count number of points, at least 3
+     * @param count number of points, in [3, {@link #MAX_BOUNDARY_POINTS}]
      * @return array {@code [count][2]} of (x, y)
-     * @throws IllegalArgumentException if {@code count < 3}
+     * @throws IllegalArgumentException if {@code count} is outside [3, {@link #MAX_BOUNDARY_POINTS}]
      */
     public double[][] boundary(int count) {
-        if (count < 3) {
-            throw new IllegalArgumentException("count must be in [3, " + Integer.MAX_VALUE + "], got " + count);
+        if (count < 3 || count > MAX_BOUNDARY_POINTS) {
+            throw new IllegalArgumentException("count must be in [3, " + MAX_BOUNDARY_POINTS + "], got " + count);
         }
         double c = Math.cos(orientation);
         double s = Math.sin(orientation);

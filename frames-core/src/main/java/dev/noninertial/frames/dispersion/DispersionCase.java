@@ -1,5 +1,7 @@
 package dev.noninertial.frames.dispersion;
 
+import dev.noninertial.frames.Arguments;
+
 import java.util.Arrays;
 import java.util.List;
 
@@ -41,6 +43,7 @@ public final class DispersionCase {
      * @throws IllegalArgumentException if the study has no input of that name
      */
     public double value(String name) {
+        Arguments.nonNull("name", name);
         int i = names.indexOf(name);
         if (i < 0) {
             throw new IllegalArgumentException("name must be one of " + names + ", got '" + name + "'");

@@ -40,8 +40,10 @@ public final class DispersionResult implements Serializable {
     private static final long serialVersionUID = 1L;
 
     /** Input names in declaration order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> inputNames;
     /** Outcome names in order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> outcomeNames;
     /** Values per row: inputs plus outcomes. */
     private final int width;
@@ -153,8 +155,9 @@ public final class DispersionResult implements Serializable {
         }
     }
 
-    private int columnIndex(String name) {
-        Arguments.nonNull("name", name);
+    /** The column of a name, the refusal naming the caller's argument {@code argument}. */
+    private int columnIndex(String argument, String name) {
+        Arguments.nonNull(argument, name);
         int i = inputNames.indexOf(name);
         if (i >= 0) {
             return i;
@@ -163,7 +166,7 @@ public final class DispersionResult implements Serializable {
         if (k >= 0) {
             return inputNames.size() + k;
         }
-        throw new IllegalArgumentException("name must be one of " + inputNames + " or " + outcomeNames
+        throw new IllegalArgumentException(argument + " must be one of " + inputNames + " or " + outcomeNames
                 + ", got '" + name + "'");
     }
 
@@ -175,7 +178,7 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double[] column(String name) {
-        int c = columnIndex(name);
+        int c = columnIndex("name", name);
         double[] values = new double[rows];
         for (int i = 0; i < rows; i++) {
             values[i] = table[i * width + c];
@@ -191,7 +194,7 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double mean(String name) {
-        return meanOf(columnIndex(name));
+        return meanOf(columnIndex("name", name));
     }
 
     private double meanOf(int c) {
@@ -224,8 +227,8 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double covariance(String a, String b) {
-        int ca = columnIndex(a);
-        int cb = columnIndex(b);
+        int ca = columnIndex("a", a);
+        int cb = columnIndex("b", b);
         return covarianceOf(ca, cb, meanOf(ca), meanOf(cb));
     }
 
@@ -265,7 +268,9 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if there is no such column
      */
     public double standardDeviation(String name) {
-        return Math.sqrt(covariance(name, name));
+        int c = columnIndex("name", name);
+        double m = meanOf(c);
+        return Math.sqrt(covarianceOf(c, c, m, m));
     }
 
     /**
@@ -305,8 +310,8 @@ public final class DispersionResult implements Serializable {
      *         probability is out of range, or there are fewer than 3 cases
      */
     public ConfidenceEllipse ellipse(String x, String y, double probability) {
-        int cx = columnIndex(x);
-        int cy = columnIndex(y);
+        int cx = columnIndex("x", x);
+        int cy = columnIndex("y", y);
         if (cx == cy) {
             throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
         }
@@ -328,8 +333,8 @@ public final class DispersionResult implements Serializable {
      */
     public double fractionInside(ConfidenceEllipse ellipse) {
         Arguments.nonNull("ellipse", ellipse);
-        int cx = columnIndex(ellipse.xName());
-        int cy = columnIndex(ellipse.yName());
+        int cx = columnIndex("ellipse.xName()", ellipse.xName());
+        int cy = columnIndex("ellipse.yName()", ellipse.yName());
         int inside = 0;
         for (int i = 0; i < rows; i++) {
             if (ellipse.contains(table[i * width + cx], table[i * width + cy])) {
@@ -349,6 +354,8 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if a name is unknown or {@code x} equals {@code y}
      */
     public double cep(String x, String y) {
+        columnIndex("x", x);
+        columnIndex("y", y);
         return cepAbout(x, y, mean(x), mean(y));
     }
 
@@ -365,8 +372,8 @@ public final class DispersionResult implements Serializable {
      *         centre is not finite
      */
     public double cepAbout(String x, String y, double centreX, double centreY) {
-        int cx = columnIndex(x);
-        int cy = columnIndex(y);
+        int cx = columnIndex("x", x);
+        int cy = columnIndex("y", y);
         if (cx == cy) {
             throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
         }
@@ -390,6 +397,9 @@ public final class DispersionResult implements Serializable {
      * @throws IllegalArgumentException if a name is unknown or {@code x} equals {@code y}
      */
     public String footprint(String x, String y) {
+        if (columnIndex("x", x) == columnIndex("y", y)) {
+            throw new IllegalArgumentException("y must differ from x = '" + x + "', got '" + y + "'");
+        }
         double sx = standardDeviation(x);
         double sy = standardDeviation(y);
         double r = covariance(x, y) / (sx * sy);

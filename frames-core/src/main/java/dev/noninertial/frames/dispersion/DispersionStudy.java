@@ -55,10 +55,13 @@ public final class DispersionStudy implements Serializable {
     /** The user's model. */
     private final DispersionModel model;
     /** Outcome names in order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> outcomeNames;
     /** Input names in declaration (drawing) order. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<String> inputNames;
     /** Input distributions, same order as {@code inputNames}. */
+    @SuppressWarnings("serial") // List.copyOf list: serializable
     private final List<InputDistribution> distributions;
     /** Number of cases. */
     private final int cases;

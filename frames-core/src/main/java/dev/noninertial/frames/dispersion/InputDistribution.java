@@ -29,9 +29,21 @@ public final class InputDistribution implements Serializable {
     /** Smallest normal probability a truncation interval must hold (refused below). */
     public static final double MIN_TRUNCATED_MASS = 1e-9;
 
+    /**
+     * Smallest probability {@link #atProbability(double)} takes: 2^-53, the smallest value of
+     * the case generator ({@link SplitMix64#nextOpenUnit()}); the largest is
+     * {@code 1 - MIN_PROBABILITY}. Beyond, the inverse distribution functions of double precision
+     * run to infinity (the normal one at about 1e-17).
+     */
+    public static final double MIN_PROBABILITY = 0x1p-53;
+
+    /** Below this standard normal probability the inversion is refined in the tail. */
+    private static final double TAIL = 0x1p-10;
+
     private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(0.0, 1.0);
 
     /** The distribution the values come from (for the truncated kind: the standard normal). */
+    @SuppressWarnings("serial") // the Hipparchus distributions made here are serializable
     private final RealDistribution distribution;
     /** Human-readable description with the parameters. */
     private final String text;
@@ -122,9 +134,10 @@ public final class InputDistribution implements Serializable {
         double pLow = STANDARD_NORMAL.cumulativeProbability(lo);
         double pHigh = STANDARD_NORMAL.cumulativeProbability(hi);
         if (!(pHigh - pLow >= MIN_TRUNCATED_MASS)) {
-            throw new IllegalArgumentException("[low, high] = [" + low + ", " + high
-                    + "] must hold at least " + MIN_TRUNCATED_MASS + " of normal(" + mean + ", " + sigma
-                    + "), holds " + (pHigh - pLow));
+            throw new IllegalArgumentException("[low, high] = [" + low + ", " + high + "] must hold at least "
+                    + MIN_TRUNCATED_MASS + " of the probability of the normal with mean " + mean + " and sigma "
+                    + sigma + ", holds " + (pHigh - pLow) + " (the interval lies " + Formats.number(Math.min(
+                            Math.abs(a), Math.abs(b))) + " sigma from the mean: move mean or widen sigma)");
         }
         return new InputDistribution(STANDARD_NORMAL,
                 "truncatedNormal(mean " + Formats.number(mean) + ", sigma " + Formats.number(sigma)
@@ -149,15 +162,22 @@ public final class InputDistribution implements Serializable {
     /**
      * The value at a probability: the inverse distribution function.
      *
-     * @param u probability in (0, 1)
-     * @return the value {@code x} with {@code P(X <= x) = u}
-     * @throws IllegalArgumentException if {@code u} is not inside (0, 1)
+     * @param u probability in [{@link #MIN_PROBABILITY}, 1 - {@link #MIN_PROBABILITY}], the range
+     *        of the case generator
+     * @return the value {@code x} with {@code P(X <= x) = u}, finite
+     * @throws IllegalArgumentException if {@code u} is outside that range, or a distribution given
+     *         to {@link #of(RealDistribution)} has an infinite value there
      */
     public double atProbability(double u) {
-        if (!(u > 0.0 && u < 1.0)) {
-            throw new IllegalArgumentException("u must be in (0, 1), got " + u);
+        if (!(u >= MIN_PROBABILITY && u <= 1.0 - MIN_PROBABILITY)) {
+            throw new IllegalArgumentException("u must be in [" + MIN_PROBABILITY + ", " + (1.0 - MIN_PROBABILITY)
+                    + "] (the range of the case generator), got " + u);
         }
-        return draw(u);
+        double x = draw(u);
+        if (!Double.isFinite(x)) {
+            throw new IllegalArgumentException("u = " + u + " gives the non-finite value " + x + " of " + text);
+        }
+        return x;
     }
 
     /** Inversion without the argument check (the generator only makes values in (0, 1)). */
@@ -167,8 +187,35 @@ public final class InputDistribution implements Serializable {
         }
         double p = mirrored ? lowProbability + (1.0 - u) * (highProbability - lowProbability)
                 : lowProbability + u * (highProbability - lowProbability);
-        double z = STANDARD_NORMAL.inverseCumulativeProbability(p);
+        double z = standardQuantile(p);
         return mirrored ? mean - sigma * z : mean + sigma * z;
+    }
+
+    /**
+     * The standard normal inverse distribution function, accurate in the lower tail: Hipparchus'
+     * inversion works on {@code 2p - 1}, which loses the digits of a small {@code p} (and gives
+     * -infinity below about 1e-17), so there it is refined by Newton steps on
+     * {@code ln Phi(z) = ln p}, with Phi from the complementary error function. {@code ln Phi} is
+     * concave, so the steps converge from below without overshooting.
+     */
+    private static double standardQuantile(double p) {
+        double z = STANDARD_NORMAL.inverseCumulativeProbability(p);
+        if (p >= TAIL) {
+            return z;
+        }
+        if (!Double.isFinite(z)) {
+            z = -Math.sqrt(-2.0 * Math.log(p));   // below the root: ln Phi(z) < ln p there
+        }
+        double logP = Math.log(p);
+        for (int i = 0; i < 60; i++) {
+            double phi = STANDARD_NORMAL.cumulativeProbability(z);
+            double step = (Math.log(phi) - logP) * phi / STANDARD_NORMAL.density(z);
+            z -= step;
+            if (!(Math.abs(step) > 1e-15 * Math.abs(z))) {
+                break;
+            }
+        }
+        return z;
     }
 
     /**

@@ -454,7 +454,6 @@ public final class TrajectorySolver {
                 + (included.size() == InertialTerm.values().length ? "" : ", inertial terms " + included) + "}";
     }
 
-    /** Per-run record of event occurrences. */
     /**
      * Most accepted steps one trajectory stores with their dense output. A run that needs more is
      * refused with a {@link TrajectoryFailure} whose {@link TrajectoryFailure#partial()} holds the

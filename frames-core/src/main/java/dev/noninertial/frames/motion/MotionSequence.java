@@ -23,6 +23,7 @@ final class MotionSequence implements Motion, Serializable {
     private static final long serialVersionUID = 1L;
 
     private final double[] joins;
+    @SuppressWarnings("serial") // the library's motions are serializable, a user's must be too
     private final Motion[] motions;
 
     MotionSequence(double[] joins, Motion[] motions) {

@@ -102,6 +102,7 @@ public final class IdealSensor implements Serializable {
     /** The sensor frame S. */
     private final ReferenceFrame frame;
     /** Gravitation at S's origin, resolved in S axes. */
+    @SuppressWarnings("serial") // written with the sensor: the library's gravitation functions are serializable, a user's must be too
     private final SpecificForce gravitation;
     /** Relative quadrature tolerance of the increments. */
     private final double tolerance;

@@ -9,9 +9,13 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.function.Supplier;
 
+import org.hipparchus.distribution.RealDistribution;
+import org.hipparchus.distribution.continuous.NormalDistribution;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.RotationConvention;
 import org.hipparchus.geometry.euclidean.threed.RotationOrder;
@@ -20,17 +24,22 @@ import org.hipparchus.linear.MatrixUtils;
 import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.ode.nonstiff.ClassicalRungeKuttaIntegrator;
 
+import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.FramedState;
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.dispersion.DispersionCase;
 import dev.noninertial.frames.dispersion.DispersionModel;
+import dev.noninertial.frames.dispersion.DispersionResult;
 import dev.noninertial.frames.dispersion.DispersionStudy;
 import dev.noninertial.frames.dispersion.InputDistribution;
 import dev.noninertial.frames.dynamics.CrossingFunction;
+import dev.noninertial.frames.dynamics.InertialTerm;
 import dev.noninertial.frames.dynamics.SpecificForce;
 import dev.noninertial.frames.dynamics.Trajectory;
+import dev.noninertial.frames.dynamics.TrajectoryFailure;
 import dev.noninertial.frames.dynamics.TrajectorySolver;
 import dev.noninertial.frames.motion.Motions;
 import dev.noninertial.frames.motion.SampledMotion;
@@ -90,6 +99,23 @@ public final class CoreSamples {
         return p;
     }
 
+    private static DispersionStudy study() {
+        return DispersionStudy.of(c -> new double[] {c.value(0) * 2.0}, "y")
+                .withInput("x", InputDistribution.normal(0.0, 1.0)).withCases(8);
+    }
+
+    /** A failure of a run whose force refuses every call. */
+    private static TrajectoryFailure failure() {
+        try {
+            TrajectorySolver.of(ROOT).plusForce((t, state) -> {
+                throw new IllegalArgumentException("the demo force refuses t = " + t);
+            }).solve(PointState.stationary(Vector3D.PLUS_I), 0.0, 1.0);
+        } catch (TrajectoryFailure f) {
+            return f;
+        }
+        throw new IllegalStateException("the refusing force did not fail the run");
+    }
+
     /** @return a new table of the core types */
     public static SampleValues table() {
         SampleValues s = new SampleValues();
@@ -99,7 +125,7 @@ public final class CoreSamples {
         s.add(Integer.class, () -> 1, () -> 2, () -> 0, () -> 3, () -> 9, () -> 24, () -> 10);
         s.add(Long.class, () -> 1L, () -> 0L, () -> 42L);
         s.add(Boolean.class, () -> true, () -> false);
-        s.add(String.class, () -> "x", () -> "alpha", () -> "t");
+        s.add(String.class, () -> "x", () -> "alpha", () -> "t", () -> "y");
         s.add(double[].class, () -> new double[] {0, 1, 2}, () -> ramp(48), () -> new double[] {0, 0, 0, 1, 0, 0, 2, 0, 0},
                 () -> new double[] {1, 0, 0, 0, 1, 0, 0, 0, 1, 0, 0, 0}, CoreSamples::identityPlacement,
                 () -> new double[] {0.5, 1, 2, 0, 0.1, 0, 0, 0, -9.8},
@@ -124,9 +150,19 @@ public final class CoreSamples {
                 () -> TrajectorySolver.of(ROOT).withMaxEvaluations(20_000));
         s.add(String[].class, () -> new String[] {"y"});
         s.add(Vector3D[].class, () -> new Vector3D[] {new Vector3D(1, 2, 3), new Vector3D(0.1, 0, 0)});
-        s.add(DispersionStudy.class, () -> DispersionStudy.of(c -> new double[] {c.value(0) * 2.0}, "y")
-                .withInput("x", InputDistribution.normal(0.0, 1.0)).withCases(8));
-        s.add(DispersionModel.class, () -> (DispersionModel) c -> new double[] {c.index() + 0.5});
+        s.add(DispersionStudy.class, CoreSamples::study);
+        s.add(DispersionResult.class, () -> study().run());
+        s.add(DispersionCase.class, () -> study().drawCase(3));
+        s.add(RealDistribution.class, () -> new NormalDistribution(1.0, 2.0));
+        s.add(TrajectoryFailure.class, CoreSamples::failure);
+        s.add(Set.class, () -> EnumSet.noneOf(InertialTerm.class), () -> EnumSet.allOf(InertialTerm.class));
+        s.add(Motion[].class, () -> new Motion[] {Motions.stationary(Vector3D.PLUS_I), Motions.stationary(Vector3D.PLUS_J),
+            Motions.stationary(Vector3D.PLUS_K), Motions.stationary(Vector3D.ZERO)});
+        s.add(double[][].class, () -> new double[3][3], () -> new double[][] {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}});
+        s.add(Class.class, () -> Placement.class);
+        s.add(RuntimeException.class, () -> new IllegalArgumentException("demo refusal"));
+        s.add(DispersionModel.class, () -> (DispersionModel) c -> new double[] {
+            Arguments.nonNull("inputs", c).index() + 0.5});
         s.add(RealMatrix.class, () -> MatrixUtils.createRealIdentityMatrix(6), () -> MatrixUtils.createRealIdentityMatrix(3),
                 () -> MatrixUtils.createRealIdentityMatrix(9));
         s.add(Path.class, CoreSamples::logFile);

@@ -57,8 +57,12 @@ public class SampleValues {
      */
     @SafeVarargs
     public final <T> SampleValues put(Class<T> type, Supplier<? extends T>... values) {
-        table.remove(type);
-        return add(type, values);
+        List<Supplier<Object>> list = new ArrayList<>();
+        for (Supplier<? extends T> v : values) {
+            list.add(v::get);
+        }
+        table.put(type, list);
+        return this;
     }
 
     /** Makes the public factories of these classes available for types without entries. */

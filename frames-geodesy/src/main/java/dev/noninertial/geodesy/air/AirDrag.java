@@ -132,14 +132,16 @@ public final class AirDrag implements SpecificForce, Serializable {
      * @param earth the Earth frames
      * @param frame the integration frame, in the tree of {@code earth}
      * @param air the atmosphere
-     * @param ballisticCoefficient B = m / (Cd A) (kg/m^2), positive
+     * @param ballisticCoefficient B = m / (Cd A) (kg/m^2), in [{@link Double#MIN_NORMAL},
+     *        {@link Double#MAX_VALUE}] (a subnormal B has no finite reciprocal A/m)
      * @param wind the air's velocity relative to the Earth, east-north-up
      * @return the force
-     * @throws IllegalArgumentException as {@link #of(EarthFrames, ReferenceFrame, Atmosphere1976, DragCurve, double, WindProfile)}
+     * @throws IllegalArgumentException if {@code ballisticCoefficient} is out of that range, or as
+     *         {@link #of(EarthFrames, ReferenceFrame, Atmosphere1976, DragCurve, double, WindProfile)}
      */
     public static AirDrag ofBallisticCoefficient(EarthFrames earth, ReferenceFrame frame, Atmosphere1976 air,
                                                  double ballisticCoefficient, WindProfile wind) {
-        Arguments.positive("ballisticCoefficient (kg/m^2)", ballisticCoefficient);
+        Arguments.inRange("ballisticCoefficient (kg/m^2)", ballisticCoefficient, Double.MIN_NORMAL, Double.MAX_VALUE);
         return of(earth, frame, air, DragCurve.constant(1.0), 1.0 / ballisticCoefficient, wind);
     }
 
@@ -212,7 +214,7 @@ public final class AirDrag implements SpecificForce, Serializable {
      */
     @Override
     public Vector3D at(double time, PointState state) {
-        Placement p = frame.placementIn(earthFixed, time);
+        Placement p = placementAt(time, state);
         double[] w = SCRATCH.get();
         airVelocity(p, time, state, w);
         double ux = w[0];
@@ -238,10 +240,20 @@ public final class AirDrag implements SpecificForce, Serializable {
      * @throws IllegalArgumentException if the height is outside the atmosphere or the wind table
      */
     public double machAt(double time, PointState state) {
-        Arguments.nonNull("state", state);
+        Placement p = placementAt(time, state);
         double[] w = SCRATCH.get();
-        airVelocity(frame.placementIn(earthFixed, time), time, state, w);
+        airVelocity(p, time, state, w);
         return Math.sqrt(w[0] * w[0] + w[1] * w[1] + w[2] * w[2]) / air.speedOfSound(w[3]);
+    }
+
+    /**
+     * The checks of the public entry points, naming their parameters, then the placement of the
+     * integration frame in the Earth-fixed frame at {@code time}.
+     */
+    private Placement placementAt(double time, PointState state) {
+        Arguments.finite("time", time);
+        Arguments.nonNull("state", state);
+        return frame.placementIn(earthFixed, time);
     }
 
     /**

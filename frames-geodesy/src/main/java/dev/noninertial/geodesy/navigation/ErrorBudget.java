@@ -80,6 +80,7 @@ public final class ErrorBudget implements Serializable {
     /** Number of steps of each run. */
     private final int steps;
     /** The effect of leaving out each term, one entry per term. */
+    @SuppressWarnings("serial") // an unmodifiable ArrayList of records: serializable
     private final List<TermEffect> effects;
 
     private ErrorBudget(NavigationState reference, double duration, int steps, List<TermEffect> effects) {
@@ -102,6 +103,12 @@ public final class ErrorBudget implements Serializable {
      */
     public static ErrorBudget of(LevelNavigator navigator, NavigationState start, double[] ends,
                                  double[] deltaVelocities, double[] deltaAngles) {
+        return of(navigator, start, ends, deltaVelocities, deltaAngles, StepInputs.OF_ARRAYS);
+    }
+
+    /** The budget, a refused step named as the caller's inputs {@code names}. */
+    private static ErrorBudget of(LevelNavigator navigator, NavigationState start, double[] ends,
+                                  double[] deltaVelocities, double[] deltaAngles, StepInputs names) {
         Arguments.nonNull("navigator", navigator);
         Arguments.nonNull("start", start);
         Arguments.nonNull("ends", ends);
@@ -111,9 +118,13 @@ public final class ErrorBudget implements Serializable {
         if (n == 0) {
             throw new IllegalArgumentException("ends must hold at least one step, got 0");
         }
-        if (deltaVelocities.length != 3 * n || deltaAngles.length != 3 * n) {
-            throw new IllegalArgumentException("deltaVelocities and deltaAngles must have 3 x ends.length = " + 3 * n
-                    + " values, got " + deltaVelocities.length + " and " + deltaAngles.length);
+        if (deltaVelocities.length != 3L * n) {
+            throw new IllegalArgumentException("deltaVelocities must have 3 x ends.length = " + 3L * n
+                    + " values, got " + deltaVelocities.length);
+        }
+        if (deltaAngles.length != 3L * n) {
+            throw new IllegalArgumentException("deltaAngles must have 3 x ends.length = " + 3L * n
+                    + " values, got " + deltaAngles.length);
         }
         LevelNavigator full = navigator.withAllTerms();
         if (full.gravityReference() == null) {
@@ -127,7 +138,7 @@ public final class ErrorBudget implements Serializable {
         for (int k = 0; k < n; k++) {
             int i = 3 * k;
             kernel.step(w, ends[k], deltaVelocities[i], deltaVelocities[i + 1], deltaVelocities[i + 2],
-                    deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0);
+                    deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0, names, k);
             shape.toCartesian(w[LevelKernel.LAT], w[LevelKernel.LON], w[LevelKernel.H], ref, 7 * k);
             System.arraycopy(w, LevelKernel.Q0, ref, 7 * k + 3, 4);
         }
@@ -144,7 +155,7 @@ public final class ErrorBudget implements Serializable {
             for (int k = 0; k < n; k++) {
                 int i = 3 * k;
                 vk.step(v, ends[k], deltaVelocities[i], deltaVelocities[i + 1], deltaVelocities[i + 2],
-                        deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0);
+                        deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0, names, k);
                 shape.toCartesian(v[LevelKernel.LAT], v[LevelKernel.LON], v[LevelKernel.H], x, 0);
                 int o = 7 * k;
                 double dx = x[0] - ref[o];
@@ -194,7 +205,7 @@ public final class ErrorBudget implements Serializable {
             System.arraycopy(increments, offset + 6 * k, dv, 3 * k, 3);
             System.arraycopy(increments, offset + 6 * k + 3, da, 3 * k, 3);
         }
-        return of(navigator, start, ends, dv, da);
+        return of(navigator, start, ends, dv, da, StepInputs.ofGrid(offset));
     }
 
     /** Angle between two unit quaternions (rad), 2 asin |vector part of a* (x) b|, safe for small angles. */

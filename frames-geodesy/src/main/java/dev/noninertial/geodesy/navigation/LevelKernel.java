@@ -92,30 +92,55 @@ final class LevelKernel implements Serializable {
     }
 
     /**
-     * Advances the work array by one pair of increments.
+     * Advances the work array by one pair of increments, after the checks of the documented
+     * domain (see {@link LevelNavigator}, Refusals), whose messages name the caller's inputs.
      *
      * @param w work array (NED), updated in place
      * @param end end time of the increments (s)
      * @param terms if not null, receives {@link #TERMS} values at {@code termsOffset} (NED / body)
+     * @param names how the caller names the inputs
+     * @param k index of this step in the caller's inputs
      */
     void step(double[] w, double end, double dvx, double dvy, double dvz, double dax, double day, double daz,
-              double[] terms, int termsOffset) {
+              double[] terms, int termsOffset, StepInputs names, int k) {
         double t0 = w[T];
         long step = (long) w[STEP];
         if (!(end > t0) || Double.isInfinite(end)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "step %d: end time %s s must be finite and after the state's time %s s (time must increase)",
-                    step, end, t0));
+                    "step %d: %s = %s s must be finite and after the state's time %s s (time must increase)",
+                    step, names.end(k), end, t0));
         }
-        if (!(Double.isFinite(dvx) && Double.isFinite(dvy) && Double.isFinite(dvz))) {
+        if (!(end - t0 <= LevelNavigator.MAX_STEP_SECONDS)) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "step %d (t = %s s to %s s): deltaVelocity must be finite, got (%s, %s, %s) m/s",
-                    step, t0, end, dvx, dvy, dvz));
+                    "step %d (t = %s s to %s s): %s makes a step of %s s, must be at most %s s (MAX_STEP_SECONDS)",
+                    step, t0, end, names.end(k), end - t0, LevelNavigator.MAX_STEP_SECONDS));
         }
-        if (!(Double.isFinite(dax) && Double.isFinite(day) && Double.isFinite(daz))) {
+        int bad = firstNonFinite(dvx, dvy, dvz);
+        if (bad >= 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "step %d (t = %s s to %s s): deltaAngle must be finite, got (%s, %s, %s) rad",
-                    step, t0, end, dax, day, daz));
+                    "step %d (t = %s s to %s s): %s must be finite, got %s m/s", step, t0, end,
+                    names.velocity(k, bad), bad == 0 ? dvx : bad == 1 ? dvy : dvz));
+        }
+        bad = firstNonFinite(dax, day, daz);
+        if (bad >= 0) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "step %d (t = %s s to %s s): %s must be finite, got %s rad", step, t0, end,
+                    names.angle(k, bad), bad == 0 ? dax : bad == 1 ? day : daz));
+        }
+        double maxVelocity = LevelNavigator.MAX_SPECIFIC_FORCE * (end - t0);
+        double dvNorm = Math.sqrt(dvx * dvx + dvy * dvy + dvz * dvz);
+        if (!(dvNorm <= maxVelocity)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "step %d (t = %s s to %s s): %s = (%s, %s, %s) m/s must have a norm of at most "
+                            + "MAX_SPECIFIC_FORCE x step = %s m/s, got %s m/s", step, t0, end, names.velocity(k),
+                    dvx, dvy, dvz, maxVelocity, dvNorm));
+        }
+        double daNorm = Math.sqrt(dax * dax + day * day + daz * daz);
+        if (!(daNorm <= LevelNavigator.MAX_DELTA_ANGLE)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "step %d (t = %s s to %s s): %s = (%s, %s, %s) rad must have a norm of at most "
+                            + "MAX_DELTA_ANGLE = pi rad, got %s rad", step, t0, end, names.angle(k),
+                    dax, day, daz, daNorm));
         }
         double h = end - t0;
         boolean hist = w[HIST] != 0.0;
@@ -470,6 +495,11 @@ final class LevelKernel implements Serializable {
     private void gravity(double lat, double height, double[] w) {
         model.normalGravityIn(gravityLatitude ? lat : referenceLatitude, gravityHeight ? height : referenceHeight,
                 LocalAxes.NED, w, GRAVITY);
+    }
+
+    /** Index (0, 1, 2) of the first non-finite of three values, -1 if all are finite. */
+    private static int firstNonFinite(double x, double y, double z) {
+        return !Double.isFinite(x) ? 0 : !Double.isFinite(y) ? 1 : !Double.isFinite(z) ? 2 : -1;
     }
 
     private IllegalArgumentException poleRefusal(long step, double t0, double end, double lat) {

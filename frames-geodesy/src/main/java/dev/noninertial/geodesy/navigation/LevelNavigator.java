@@ -69,9 +69,12 @@ import dev.noninertial.geodesy.LocalAxes;
  * Groves).
  *
  * <h2>Refusals</h2>
- * A step is refused, with its index and times in the message, if its end time does not follow
- * the state's time, if an increment is NaN or infinite, or if the latitude would pass beyond
- * {@link #MAX_LATITUDE_DEGREES} (a north-pointing level frame cannot pass over a pole).
+ * A step is refused, with its index and times in the message and the caller's name of the
+ * input at fault, if its end time does not follow the state's time or is more than
+ * {@link #MAX_STEP_SECONDS} after it, if an increment is NaN or infinite, if the delta-velocity
+ * exceeds {@link #MAX_SPECIFIC_FORCE} times the step or the delta-angle exceeds
+ * {@link #MAX_DELTA_ANGLE}, or if the latitude would pass beyond {@link #MAX_LATITUDE_DEGREES}
+ * (a north-pointing level frame cannot pass over a pole).
  *
  * <h2>Speed</h2>
  * The primitive form ({@link #newWork}, {@link #advance(double[], double, double, double, double,
@@ -88,6 +91,26 @@ public final class LevelNavigator implements Serializable {
 
     /** Largest latitude magnitude a step may reach (deg). */
     public static final double MAX_LATITUDE_DEGREES = 89.9;
+
+    /**
+     * Longest step (s): {@code end - start} of one pair of increments. Strapdown updates run at
+     * intervals of milliseconds to seconds (common practice); a longer step is refused, not
+     * integrated with corrections made for short steps.
+     */
+    public static final double MAX_STEP_SECONDS = 3600.0;
+
+    /**
+     * Largest mean specific force of a step (m/s^2), {@code |deltaVelocity| / step}: about
+     * 10,000 g, beyond the shock of a gun launch (common practice); larger increments are refused.
+     */
+    public static final double MAX_SPECIFIC_FORCE = 1e5;
+
+    /**
+     * Largest delta-angle of a step (rad), its norm: half a turn. The coning and sculling
+     * corrections assume small rotations per step, and beyond half a turn the rotation vector
+     * of a step can no longer be told from a smaller one the other way.
+     */
+    public static final double MAX_DELTA_ANGLE = Math.PI;
 
     /** Values per step written by the traced bulk run: time, lat, lon, h, velocity (3), attitude quaternion (4). */
     public static final int TRACE_VALUES = 11;
@@ -247,7 +270,7 @@ public final class LevelNavigator implements Serializable {
         Arguments.nonNull("deltaVelocity", deltaVelocity);
         Arguments.nonNull("deltaAngle", deltaAngle);
         kernel.step(w, end, deltaVelocity.getX(), deltaVelocity.getY(), deltaVelocity.getZ(), deltaAngle.getX(),
-                deltaAngle.getY(), deltaAngle.getZ(), null, 0);
+                deltaAngle.getY(), deltaAngle.getZ(), null, 0, StepInputs.OF_VECTORS, 0);
         return NavigationState.fromWork(w, axes);
     }
 
@@ -269,7 +292,7 @@ public final class LevelNavigator implements Serializable {
         double[] t = new double[LevelKernel.TERMS];
         double start = state.time();
         kernel.step(w, end, deltaVelocity.getX(), deltaVelocity.getY(), deltaVelocity.getZ(), deltaAngle.getX(),
-                deltaAngle.getY(), deltaAngle.getZ(), t, 0);
+                deltaAngle.getY(), deltaAngle.getZ(), t, 0, StepInputs.OF_VECTORS, 0);
         return new StepTerms(state.step(), start, end, axes, level(t, 0), level(t, 3), level(t, 6), level(t, 9),
                 body(t, 12), body(t, 15), body(t, 18), body(t, 21), level(t, 24), level(t, 27));
     }
@@ -313,6 +336,7 @@ public final class LevelNavigator implements Serializable {
      *         (within 1e-9 s), or for a refused step (named in the message)
      */
     public NavigationState run(NavigationState start, SensorIncrements... increments) {
+        Arguments.nonNull("start", start);
         Arguments.nonNull("increments", increments);
         double[] w = newWork(start);
         double t = start.time();
@@ -324,7 +348,8 @@ public final class LevelNavigator implements Serializable {
             }
             Vector3D dv = inc.deltaVelocity();
             Vector3D da = inc.deltaAngle();
-            kernel.step(w, inc.end(), dv.getX(), dv.getY(), dv.getZ(), da.getX(), da.getY(), da.getZ(), null, 0);
+            kernel.step(w, inc.end(), dv.getX(), dv.getY(), dv.getZ(), da.getX(), da.getY(), da.getZ(), null, 0,
+                    StepInputs.OF_INCREMENTS, k);
             t = inc.end();
         }
         return NavigationState.fromWork(w, axes);
@@ -386,7 +411,26 @@ public final class LevelNavigator implements Serializable {
      */
     public void advance(double[] work, double end, double dvx, double dvy, double dvz, double dax, double day,
                         double daz) {
-        kernel.step(work, end, dvx, dvy, dvz, dax, day, daz, null, 0);
+        checkWork(work);
+        kernel.step(work, end, dvx, dvy, dvz, dax, day, daz, null, 0, StepInputs.OF_PRIMITIVES, 0);
+    }
+
+    /**
+     * Refuses what is not a work array of {@link #newWork}: null, another length, or a
+     * non-finite time, position, velocity or attitude.
+     */
+    private static void checkWork(double[] work) {
+        Arguments.nonNull("work", work);
+        if (work.length != LevelKernel.LENGTH) {
+            throw new IllegalArgumentException("work must have length " + LevelKernel.LENGTH + " (from newWork), got "
+                    + work.length);
+        }
+        for (int i = LevelKernel.T; i < LevelKernel.HIST; i++) {
+            if (!Double.isFinite(work[i])) {
+                throw new IllegalArgumentException("work[" + i + "] (time, position, velocity or attitude) must be "
+                        + "finite, got " + work[i] + ": pass a work array from newWork, advanced only by advance");
+            }
+        }
     }
 
     /**
@@ -396,11 +440,7 @@ public final class LevelNavigator implements Serializable {
      * @return the state, in this navigator's axes
      */
     public NavigationState stateOf(double[] work) {
-        Arguments.nonNull("work", work);
-        if (work.length != LevelKernel.LENGTH) {
-            throw new IllegalArgumentException("work must have length " + LevelKernel.LENGTH + " (from newWork), got "
-                    + work.length);
-        }
+        checkWork(work);
         return NavigationState.fromWork(work, axes);
     }
 
@@ -437,13 +477,18 @@ public final class LevelNavigator implements Serializable {
      */
     public NavigationState run(NavigationState start, double[] ends, double[] deltaVelocities, double[] deltaAngles,
                                double[] trace) {
+        Arguments.nonNull("start", start);
         Arguments.nonNull("ends", ends);
         Arguments.nonNull("deltaVelocities", deltaVelocities);
         Arguments.nonNull("deltaAngles", deltaAngles);
         int n = ends.length;
-        if (deltaVelocities.length != 3 * n || deltaAngles.length != 3 * n) {
-            throw new IllegalArgumentException("deltaVelocities and deltaAngles must have 3 x ends.length = " + 3 * n
-                    + " values, got " + deltaVelocities.length + " and " + deltaAngles.length);
+        if (deltaVelocities.length != 3L * n) {
+            throw new IllegalArgumentException("deltaVelocities must have 3 x ends.length = " + 3L * n
+                    + " values, got " + deltaVelocities.length);
+        }
+        if (deltaAngles.length != 3L * n) {
+            throw new IllegalArgumentException("deltaAngles must have 3 x ends.length = " + 3L * n
+                    + " values, got " + deltaAngles.length);
         }
         if (trace != null && trace.length < TRACE_VALUES * n) {
             throw new IllegalArgumentException("trace must have at least " + TRACE_VALUES * n + " values, got "
@@ -453,7 +498,7 @@ public final class LevelNavigator implements Serializable {
         for (int k = 0; k < n; k++) {
             int i = 3 * k;
             kernel.step(w, ends[k], deltaVelocities[i], deltaVelocities[i + 1], deltaVelocities[i + 2],
-                    deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0);
+                    deltaAngles[i], deltaAngles[i + 1], deltaAngles[i + 2], null, 0, StepInputs.OF_ARRAYS, k);
             if (trace != null) {
                 record(w, trace, TRACE_VALUES * k);
             }
@@ -492,10 +537,11 @@ public final class LevelNavigator implements Serializable {
         }
         double[] w = newWork(start);
         double t0 = start.time();
+        StepInputs names = StepInputs.ofGrid(offset);
         for (int k = 0; k < count; k++) {
             int i = offset + 6 * k;
             kernel.step(w, t0 + (k + 1) * interval, increments[i], increments[i + 1], increments[i + 2],
-                    increments[i + 3], increments[i + 4], increments[i + 5], null, 0);
+                    increments[i + 3], increments[i + 4], increments[i + 5], null, 0, names, k);
             if (trace != null) {
                 record(w, trace, TRACE_VALUES * k);
             }

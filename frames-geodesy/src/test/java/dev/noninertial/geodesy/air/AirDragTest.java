@@ -167,4 +167,30 @@ class AirDragTest {
         assertThrows(TrajectoryFailure.class,
                 () -> solver.solve(PointState.of(Vector3D.ZERO, new Vector3D(0, 0, 400.0)), 0.0, 10.0));
     }
+
+    @Test
+    void refusalsNameTheParameters() {
+        // issue 15: messages name the argument as declared (before: 't' for 'time', 'curve' for
+        // 'dragCurve', and a subnormal B was refused as an infinite areaOverMass)
+        ReferenceFrame enu = EARTH.localLevel(SITE, LocalAxes.ENU);
+        AirDrag drag = EARTH.dragIn(enu, AIR, SPHERE, A_OVER_M, WindProfile.calm());
+        PointState s = PointState.stationary(new Vector3D(0, 0, 100.0));
+        String m = assertThrows(IllegalArgumentException.class, () -> drag.at(Double.NaN, s)).getMessage();
+        assertEquals("time must be finite, got NaN", m);
+        m = assertThrows(IllegalArgumentException.class, () -> drag.machAt(Double.POSITIVE_INFINITY, s)).getMessage();
+        assertEquals("time must be finite, got Infinity", m);
+        m = assertThrows(NullPointerException.class, () -> drag.machAt(0.0, null)).getMessage();
+        assertEquals("state must not be null", m);
+        m = assertThrows(NullPointerException.class,
+                () -> EARTH.dragIn(enu, AIR, null, A_OVER_M, WindProfile.calm())).getMessage();
+        assertEquals("dragCurve must not be null", m);
+        m = assertThrows(IllegalArgumentException.class,
+                () -> EARTH.dragIn(enu, AIR, Double.MIN_VALUE, WindProfile.calm())).getMessage();
+        assertTrue(m.startsWith("ballisticCoefficient (kg/m^2) must be in [2.2250738585072014E-308, "), m);
+        m = assertThrows(IllegalArgumentException.class, () -> AirDrag.ofBallisticCoefficient(EARTH, enu, AIR,
+                Double.MIN_VALUE, WindProfile.calm())).getMessage();
+        assertTrue(m.startsWith("ballisticCoefficient (kg/m^2) must be in"), m);
+        // the smallest normal B still has a finite A/m
+        assertTrue(Double.isFinite(EARTH.dragIn(enu, AIR, Double.MIN_NORMAL, WindProfile.calm()).areaOverMass()));
+    }
 }

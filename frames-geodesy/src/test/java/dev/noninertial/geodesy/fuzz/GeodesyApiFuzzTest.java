@@ -7,7 +7,11 @@ import java.time.Instant;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
+import dev.noninertial.frames.FramedState;
+import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.frames.fuzz.ApiFuzz;
 import dev.noninertial.frames.fuzz.CoreSamples;
 import dev.noninertial.frames.fuzz.FuzzReports;
@@ -18,8 +22,12 @@ import dev.noninertial.geodesy.EarthFrames;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.Ellipsoid;
 import dev.noninertial.geodesy.GeodeticPath;
+import dev.noninertial.geodesy.GeodeticTrack;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
+import dev.noninertial.geodesy.air.WindProfile;
+import dev.noninertial.geodesy.navigation.LevelNavigator;
+import dev.noninertial.geodesy.navigation.NavigationState;
 
 /**
  * The reflection fuzz of frames-geodesy's public API (issue 15), with the rule of {@link ApiFuzz}.
@@ -30,6 +38,10 @@ class GeodesyApiFuzzTest {
     private static final EarthFrames EARTH = EarthFrames.of(EarthModel.WGS84, Instant.parse("2026-03-20T12:00:00Z"));
     private static final LatLonHeight SITE = LatLonHeight.ofDegrees(47.5, 8.2, 420.0);
     private static final ReferenceFrame ENU = EARTH.localLevel("site", SITE, LocalAxes.ENU);
+    /** A navigator and a state at rest at the site, at t = -0.5 s so that the ends {0, 1, 2} follow it. */
+    private static final LevelNavigator NAVIGATOR = LevelNavigator.of(EarthModel.WGS84, LocalAxes.ENU);
+    private static final NavigationState AT_REST = NavigationState.of(-0.5, SITE, Vector3D.ZERO, LocalAxes.ENU,
+            Orientations.identity());
 
     static SampleValues table() {
         SampleValues s = CoreSamples.table();
@@ -37,7 +49,7 @@ class GeodesyApiFuzzTest {
         s.put(ReferenceFrame.class, () -> ENU, EARTH::earthFixed, EARTH::inertial);
         s.put(Double.class, () -> 0.5, () -> 1.0, () -> 0.1, () -> 2.0, () -> 10.0, () -> 0.0, () -> -0.5,
                 () -> 100.0, () -> 1e-3, () -> 0.9, () -> 6378137.0, () -> 3.986004418e14, () -> 7.292115e-5,
-                () -> 298.257223563);
+                () -> 298.257223563, () -> 2460000.5);
         s.put(Vector3D.class, () -> Ellipsoid.WGS84.toCartesian(SITE), () -> new Vector3D(3.0, 4.0, 0.0),
                 () -> new Vector3D(0.3, -0.2, 0.9), () -> Vector3D.PLUS_K, () -> Vector3D.ZERO);
         s.add(Ellipsoid.class, () -> Ellipsoid.WGS84, () -> Ellipsoid.GRS80);
@@ -46,9 +58,29 @@ class GeodesyApiFuzzTest {
         s.add(LatLonHeight.class, () -> SITE, () -> LatLonHeight.ofDegrees(-12.0, 130.0, 5.0));
         s.add(Instant.class, () -> Instant.parse("2026-03-20T12:00:00Z"));
         s.add(GeodeticPath.class, () -> GeodeticPath.stationary(SITE));
+        // a track of three samples 1 s apart near the site (invented), without and with attitude
+        s.add(GeodeticTrack.class, () -> GeodeticTrack.fromArrays(new double[] {0, 1, 2},
+                new double[] {0.829, 0.829, 0.829}, new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422},
+                10.0), () -> GeodeticTrack.fromArrays(new double[] {0, 1, 2}, new double[] {0.829, 0.829, 0.829},
+                new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
+                new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0));
+        s.add(WindProfile.Layered.class, () -> (WindProfile.Layered) WindProfile.layered(new double[] {0.0, 1000.0},
+                new double[] {1.0, 2.0}, new double[] {0.0, 1.0}));
+        s.add(FramedState.class, () -> ENU.stateAt(0.0, PointState.stationary(new Vector3D(1.0, 2.0, 3.0))));
         s.add(AttitudeSample.class, () -> AttitudeSample.stationary(0.3, 0.05, -0.02));
         s.add(AttitudeProfile.class, () -> AttitudeProfile.stationary(0.3, 0.05, -0.02));
+        // navigation: the work array of the navigator (tried after the core arrays), one step of
+        // increments from the state's time (specific force about 1 g up, a small turn)
+        s.add(double[].class, () -> NAVIGATOR.newWork(AT_REST));
+        s.add(LevelNavigator.class, () -> NAVIGATOR);
+        s.add(NavigationState.class, () -> AT_REST);
+        s.add(SensorIncrements.class, GeodesyApiFuzzTest::increments);
+        s.add(SensorIncrements[].class, () -> new SensorIncrements[] {increments()});
         return s;
+    }
+
+    private static SensorIncrements increments() {
+        return new SensorIncrements(-0.5, 0.5, new Vector3D(0.0, 0.0, 9.8), new Vector3D(1e-4, 0.0, 0.0));
     }
 
     @Test
