@@ -52,6 +52,18 @@ final class Kinematics {
     }
 
     /**
+     * Refuses a stored layout, read from an untrusted stream, unless it holds exactly {@code n}
+     * doubles (the {@link Placement#COMPONENTS} of a placement, the {@link PointState#COMPONENTS}
+     * of a state).
+     */
+    static void checkLength(double[] c, int n) {
+        if (c == null || c.length != n) {
+            throw new IllegalArgumentException("components must hold " + n + " doubles, got "
+                    + (c == null ? "none" : c.length));
+        }
+    }
+
+    /**
      * Refuses unless {@code n} values from {@code from} are finite. The quick test is a sum; a
      * non-finite sum of finite values (an overflow of the sum only) is told apart by a second pass.
      */
@@ -296,8 +308,8 @@ final class Kinematics {
     }
 
 
-    /** Writes one converted state, refusing it unless all nine values are finite. */
-    private static void store(double[] target, int j, double x, double y, double z, double vx, double vy,
+    /** Writes one state (or origin), refusing it unless all nine values are finite. */
+    static void store(double[] target, int j, double x, double y, double z, double vx, double vy,
                               double vz, double ax, double ay, double az) {
         if (!Double.isFinite((x + y + z) + (vx + vy + vz) + (ax + ay + az))) {
             refuseUnlessFinite(x, y, z, vx, vy, vz, ax, ay, az);
