@@ -7,9 +7,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Random;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.noninertial.frames.Motion;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
+import dev.noninertial.frames.motion.Motions;
 import dev.noninertial.frames.motion.SampledMotion;
 
 /**
@@ -96,6 +99,8 @@ public final class HotPathGate {
         final Placement placement = Scenario.placement();
         final Motion spin = Scenario.spinUp();
         final Motion lambda;
+        /** A stack made by {@code then}: the spin-up, then a heave along z. */
+        final Motion stacked;
         final double[] p = PrimitiveBaseline.scenarioPlacement();
         final PointState state = Scenario.state();
         final double[] times = new double[STATES];
@@ -122,6 +127,7 @@ public final class HotPathGate {
             sampled = SampledMotion.fromArrays(st, sp, sq);
             Motion built = spin;
             lambda = t -> built.at(t);
+            stacked = spin.then(Motions.heave(Vector3D.PLUS_K, 1.5, 0.6, 0.0));
             Random random = new Random(42L);
             for (int k = 0; k < STATES; k++) {
                 times[k] = 60.0 * k / STATES;
@@ -159,6 +165,13 @@ public final class HotPathGate {
         rows.add(new Allocation("SampledMotion.at(t, target, offset) x STATES", bytes(mx, () -> {
             for (int k = 0; k < STATES; k++) {
                 in.sampled.at(in.times[k], in.placementSlot, 0);
+            }
+        }), STATES, 0));
+        rows.add(new Allocation("Motion.toBase(times, ...) stack made by then", bytes(mx,
+                () -> in.stacked.toBase(in.times, 0, in.source, 0, in.target, 0, STATES)), STATES, scratch));
+        rows.add(new Allocation("stack made by then: at(t, target, offset) x STATES", bytes(mx, () -> {
+            for (int k = 0; k < STATES; k++) {
+                in.stacked.at(in.times[k], in.placementSlot, 0);
             }
         }), STATES, 0));
         rows.add(new Allocation("Motion.toBase(times, ...) user lambda (info: default at(t))", bytes(mx,

@@ -47,9 +47,10 @@ public interface Motion {
      * The default implementation calls {@link #at(double)} and copies the result, so it
      * <em>allocates one {@link Placement} per call</em> (the JIT's escape analysis may remove that
      * allocation once the code is hot, but nothing guarantees it). Every motion made by a factory of
-     * {@code dev.noninertial.frames.motion.Motions}, and {@code SampledMotion}, overrides it and
-     * allocates nothing (tests and the CI gate enforce it); a stack made by {@link #then(Motion)}
-     * uses this default. A user motion on a hot path should override it too, writing exactly the
+     * {@code dev.noninertial.frames.motion.Motions}, {@code SampledMotion} and a stack made by
+     * {@link #then(Motion)} override it and allocate nothing (tests and the CI gate enforce it; a
+     * stack allocates nothing when its links do). A user motion on a hot path should override it
+     * too, writing exactly the
      * values {@link #at(double)} would return, for example with
      * {@link Placement#ofQuaternion(double, double, double, double, double, double, double, double,
      * double, double, double, double, double, double, double, double, double, double, double,
@@ -80,9 +81,10 @@ public interface Motion {
      * samples) kept in primitive arrays, where one {@link Placement} and one {@link PointState} per
      * sample would dominate the cost. It allocates at most one scratch array of
      * {@link Placement#COMPONENTS} doubles per call and nothing per state, provided
-     * {@link #at(double, double[], int)} allocates nothing (true for the motions of
-     * the factories of {@code Motions} and for {@code SampledMotion}; the default, used by a stack made by {@link #then(Motion)} and
-     * by a user lambda, allocates one placement per state). For one state, or states already held as objects, use
+     * {@link #at(double, double[], int)} allocates nothing (true for the motions of the factories
+     * of {@code Motions}, for {@code SampledMotion} and for stacks of them made by
+     * {@link #then(Motion)}; the default, used by a user lambda, allocates one placement per
+     * state). For one state, or states already held as objects, use
      * {@link Placement#toBase(PointState)}; for many states at one time, use
      * {@link Placement#toBase(double[], int, double[], int, int)}.
      *

@@ -238,15 +238,8 @@ public final class Placement implements Serializable {
             q3 *= inv;
         }
         int o = offset;
-        target[o] = ox;
-        target[o + 1] = oy;
-        target[o + 2] = oz;
-        target[o + 3] = ovx;
-        target[o + 4] = ovy;
-        target[o + 5] = ovz;
-        target[o + 6] = oax;
-        target[o + 7] = oay;
-        target[o + 8] = oaz;
+        // (o, o', o'') has the layout of a point state; all finite here, as checked above
+        Kinematics.store(target, o, ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz);
         Kinematics.quaternionToMatrix(q0, q1, q2, q3, target, o + Kinematics.MATRIX);
         target[o + 18] = wx;
         target[o + 19] = wy;
@@ -665,11 +658,7 @@ public final class Placement implements Serializable {
      */
     public Vector3D vectorToBase(Vector3D vectorInFrame) {
         Arguments.finite("vectorInFrame", vectorInFrame);
-        double x = vectorInFrame.getX();
-        double y = vectorInFrame.getY();
-        double z = vectorInFrame.getZ();
-        return finite(c[9] * x + c[12] * y + c[15] * z, c[10] * x + c[13] * y + c[16] * z,
-                c[11] * x + c[14] * y + c[17] * z);
+        return rotate(vectorInFrame, 1, 3);
     }
 
     /**
@@ -681,11 +670,23 @@ public final class Placement implements Serializable {
      */
     public Vector3D vectorFromBase(Vector3D vectorInBase) {
         Arguments.finite("vectorInBase", vectorInBase);
-        double x = vectorInBase.getX();
-        double y = vectorInBase.getY();
-        double z = vectorInBase.getZ();
-        return finite(c[9] * x + c[10] * y + c[11] * z, c[12] * x + c[13] * y + c[14] * z,
-                c[15] * x + c[16] * y + c[17] * z);
+        return rotate(vectorInBase, 3, 1);
+    }
+
+    /**
+     * {@code R u} (rows {@code 3} apart in the layout, elements of a row {@code 1} apart) or
+     * {@code R^T u} (the transpose: rows 1 apart, elements 3 apart), refusing a non-finite result.
+     */
+    private Vector3D rotate(Vector3D u, int row, int element) {
+        double x = u.getX();
+        double y = u.getY();
+        double z = u.getZ();
+        int r0 = Kinematics.MATRIX;
+        int r1 = r0 + row;
+        int r2 = r1 + row;
+        return finite(c[r0] * x + c[r0 + element] * y + c[r0 + 2 * element] * z,
+                c[r1] * x + c[r1 + element] * y + c[r1 + 2 * element] * z,
+                c[r2] * x + c[r2 + element] * y + c[r2 + 2 * element] * z);
     }
 
     /** A vector of finite components, or the refusal every kinematic path gives. */
@@ -709,10 +710,7 @@ public final class Placement implements Serializable {
     private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
         in.defaultReadObject();
         try {
-            if (c == null || c.length != COMPONENTS) {
-                throw new IllegalArgumentException("components must hold " + COMPONENTS + " doubles, got "
-                        + (c == null ? "none" : c.length));
-            }
+            Kinematics.checkLength(c, COMPONENTS);
             checkLayout(c, "serialized placement");
         } catch (IllegalArgumentException e) {
             throw Arguments.refusedStream(Placement.class, e);
@@ -721,13 +719,7 @@ public final class Placement implements Serializable {
 
     @Override
     public boolean equals(Object other) {
-        if (this == other) {
-            return true;
-        }
-        if (!(other instanceof Placement)) {
-            return false;
-        }
-        return java.util.Arrays.equals(c, ((Placement) other).c);
+        return this == other || other instanceof Placement o && java.util.Arrays.equals(c, o.c);
     }
 
     @Override

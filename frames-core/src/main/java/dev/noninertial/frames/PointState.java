@@ -199,10 +199,7 @@ public final class PointState implements Serializable {
     private void readObject(ObjectInputStream in) throws IOException, ClassNotFoundException {
         in.defaultReadObject();
         try {
-            if (c == null || c.length != COMPONENTS) {
-                throw new IllegalArgumentException("components must hold " + COMPONENTS + " doubles, got "
-                        + (c == null ? "none" : c.length));
-            }
+            Kinematics.checkLength(c, COMPONENTS);
             for (int k = 0; k < COMPONENTS; k++) {
                 Arguments.finite("component " + k, c[k]);
             }
@@ -213,13 +210,7 @@ public final class PointState implements Serializable {
 
     @Override
     public boolean equals(Object other) {
-        if (this == other) {
-            return true;
-        }
-        if (!(other instanceof PointState)) {
-            return false;
-        }
-        return java.util.Arrays.equals(c, ((PointState) other).c);
+        return this == other || other instanceof PointState o && java.util.Arrays.equals(c, o.c);
     }
 
     @Override

@@ -31,6 +31,19 @@ record StackedMotion(Motion outer, Motion inner) implements Motion, Serializable
         return outer.at(t).then(inner.at(t));
     }
 
+    /**
+     * Writes exactly the values of {@link #at(double)}, allocating nothing: the outer placement
+     * is written into the range, read back, overwritten by the inner one and composed with it in
+     * place, through the same kernel as {@link Placement#then(Placement)}.
+     */
+    @Override
+    public void at(double t, double[] target, int offset) {
+        Arguments.fromIndexSize("target", target, "offset", offset, Placement.COMPONENTS);
+        outer.at(t, target, offset);
+        Kinematics.stack(target, offset, inner, t);
+        Kinematics.checkFinite(target, offset, Placement.COMPONENTS);
+    }
+
     @Override
     public String toString() {
         return outer + " then " + inner;

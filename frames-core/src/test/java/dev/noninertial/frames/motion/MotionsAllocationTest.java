@@ -16,7 +16,8 @@ import dev.noninertial.frames.Placement;
 
 /**
  * Enforces the claim of {@link Motion#at(double, double[], int)}'s Javadoc: every motion made by a
- * factory of {@link Motions} writes its placement on primitives without allocating. Measured as
+ * factory of {@link Motions}, and every stack of them made by {@link Motion#then(Motion)}, writes
+ * its placement on primitives without allocating. Measured as
  * frames-bench's gate does: the per-thread allocation counter
  * ({@code com.sun.management.ThreadMXBean#getCurrentThreadAllocatedBytes}) around a loop of calls,
  * after a warm-up, minimum over repetitions, minus the counter's own overhead. The counter is
@@ -38,6 +39,13 @@ class MotionsAllocationTest {
                 new Vector3D(0, 0, 0.3), new Vector3D(0.01, 0, 0)));
         m.put("oscillation", Motions.oscillation(Vector3D.PLUS_I, 0.1, 0.7, 0.2));
         m.put("heave", Motions.heave(Vector3D.PLUS_K, 1.5, 0.6, 0.0));
+        // stacks made by Motion.then: two links, and a deeper stack whose outer link is a stack
+        m.put("spin then heave", Motions.spin(new Vector3D(0.2, 0.1, 1.0), 0.4, 1.5)
+                .then(Motions.heave(Vector3D.PLUS_K, 1.5, 0.6, 0.0)));
+        m.put("translation then spinUp then oscillation", Motions.translation(new Vector3D(1, 0, 0),
+                new Vector3D(0, 2, 0), new Vector3D(0, 0, 0.3), new Vector3D(0.01, 0, 0))
+                .then(Motions.spinUp(Vector3D.PLUS_K, 0.1, 0.5, 0.02))
+                .then(Motions.oscillation(Vector3D.PLUS_I, 0.1, 0.7, 0.2)));
         return m;
     }
 
@@ -68,7 +76,7 @@ class MotionsAllocationTest {
             }
             long bytes = Math.max(0, best - overhead);
             report.append(String.format("%s: %d bytes for %d calls%n", e.getKey(), bytes, CALLS));
-            assertEquals(0, bytes, "Motions." + e.getKey() + " allocates through at(t, double[], int)");
+            assertEquals(0, bytes, e.getKey() + " allocates through at(t, double[], int)");
         }
         System.out.print(report);
     }
