@@ -3,6 +3,7 @@ package dev.noninertial.frames;
 import java.io.InvalidObjectException;
 import java.util.Locale;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 /**
@@ -62,6 +63,39 @@ public final class Arguments {
         nonNull(name, value);
         if (!Double.isFinite(value.getX()) || !Double.isFinite(value.getY()) || !Double.isFinite(value.getZ())) {
             throw new IllegalArgumentException(name + " must have finite components, got " + vector(value));
+        }
+        return value;
+    }
+
+    /**
+     * Refuses a null rotation and one whose quaternion is not finite or not unit within
+     * {@link Orientations#UNIT_QUATERNION_TOLERANCE}: a Hipparchus {@link Rotation} built with
+     * {@code needsNormalization} false holds its four numbers as given, NaN and non-unit ones
+     * included. Every public entry point taking a {@link Rotation} checks it here, under the
+     * parameter's name.
+     *
+     * @param name argument name used in the message
+     * @param value the rotation to check
+     * @return {@code value}
+     * @throws NullPointerException if {@code value} is null
+     * @throws IllegalArgumentException if a quaternion component is not finite or its norm
+     *         differs from 1 by more than {@link Orientations#UNIT_QUATERNION_TOLERANCE}
+     */
+    public static Rotation unitRotation(String name, Rotation value) {
+        nonNull(name, value);
+        double q0 = value.getQ0();
+        double q1 = value.getQ1();
+        double q2 = value.getQ2();
+        double q3 = value.getQ3();
+        if (!Double.isFinite(q0) || !Double.isFinite(q1) || !Double.isFinite(q2) || !Double.isFinite(q3)) {
+            throw new IllegalArgumentException(name + " must be a rotation with a finite quaternion, got (" + q0
+                    + ", " + q1 + ", " + q2 + ", " + q3 + ")");
+        }
+        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
+        if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
+            throw new IllegalArgumentException(name + " must be a rotation with a unit quaternion (|norm - 1| <= "
+                    + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3
+                    + ") with norm " + norm);
         }
         return value;
     }

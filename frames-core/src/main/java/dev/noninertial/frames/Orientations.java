@@ -78,8 +78,18 @@ public final class Orientations {
         Arguments.finite("q3", q3);
         double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
         if (!(Math.abs(norm - 1.0) <= UNIT_QUATERNION_TOLERANCE)) {
-            throw new IllegalArgumentException("quaternion must be unit (|norm - 1| <= " + UNIT_QUATERNION_TOLERANCE
-                    + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3 + ") with norm " + norm);
+            // name the component that alone is too large for a unit quaternion, if one is
+            String[] names = {"q0", "q1", "q2", "q3"};
+            double[] values = {q0, q1, q2, q3};
+            String culprit = "";
+            for (int k = 0; k < 4 && culprit.isEmpty(); k++) {
+                if (!(Math.abs(values[k]) <= 1.0 + UNIT_QUATERNION_TOLERANCE)) {
+                    culprit = "; " + names[k] + " = " + values[k] + " is outside [-1, 1] on its own";
+                }
+            }
+            throw new IllegalArgumentException("quaternion (q0, q1, q2, q3) must be unit (|norm - 1| <= "
+                    + UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3
+                    + ") with norm " + norm + culprit);
         }
         return new Rotation(q0, q1, q2, q3, true);
     }
@@ -89,9 +99,17 @@ public final class Orientations {
      *
      * @param orientation orientation mapping base components to frame components
      * @return {q0, q1, q2, q3}
+     * @throws NullPointerException if {@code orientation} is null
+     * @throws IllegalArgumentException if its quaternion is not finite or not unit (see
+     *         {@link Arguments#unitRotation(String, Rotation)})
      */
     public static double[] toQuaternion(Rotation orientation) {
-        Arguments.nonNull("orientation", orientation);
+        Arguments.unitRotation("orientation", orientation);
+        return quaternion(orientation);
+    }
+
+    /** The quaternion of a checked rotation, scalar part non-negative. */
+    private static double[] quaternion(Rotation orientation) {
         double s = orientation.getQ0() < 0 ? -1.0 : 1.0;
         return new double[] {s * orientation.getQ0(), s * orientation.getQ1(), s * orientation.getQ2(),
             s * orientation.getQ3()};
@@ -134,9 +152,12 @@ public final class Orientations {
      *
      * @param orientation orientation mapping base components to frame components
      * @return a new 3x3 array
+     * @throws NullPointerException if {@code orientation} is null
+     * @throws IllegalArgumentException if its quaternion is not finite or not unit (see
+     *         {@link Arguments#unitRotation(String, Rotation)})
      */
     public static double[][] toMatrix(Rotation orientation) {
-        Arguments.nonNull("orientation", orientation);
+        Arguments.unitRotation("orientation", orientation);
         return orientation.getMatrix();
     }
 
@@ -180,10 +201,13 @@ public final class Orientations {
      *
      * @param orientation orientation mapping base components to frame components
      * @return {yaw, pitch, roll} (rad)
+     * @throws NullPointerException if {@code orientation} is null
+     * @throws IllegalArgumentException if its quaternion is not finite or not unit (see
+     *         {@link Arguments#unitRotation(String, Rotation)})
      */
     public static double[] toYawPitchRoll(Rotation orientation) {
-        Arguments.nonNull("orientation", orientation);
-        double[] q = toQuaternion(orientation);
+        Arguments.unitRotation("orientation", orientation);
+        double[] q = quaternion(orientation);
         // from the half-angle product of fromYawPitchRoll (c, s of half angles):
         //   q0 + q2 = (cp + sp) cos((yaw - roll) / 2),  q3 - q1 = (cp + sp) sin((yaw - roll) / 2)
         //   q0 - q2 = (cp - sp) cos((yaw + roll) / 2),  q3 + q1 = (cp - sp) sin((yaw + roll) / 2)
@@ -226,10 +250,13 @@ public final class Orientations {
      *
      * @param orientation orientation mapping base components to frame components
      * @return axis * angle (rad) such that {@code aboutAxis(axis, angle)} rebuilds the orientation
+     * @throws NullPointerException if {@code orientation} is null
+     * @throws IllegalArgumentException if its quaternion is not finite or not unit (see
+     *         {@link Arguments#unitRotation(String, Rotation)})
      */
     public static Vector3D toRotationVector(Rotation orientation) {
-        Arguments.nonNull("orientation", orientation);
-        double[] q = toQuaternion(orientation);
+        Arguments.unitRotation("orientation", orientation);
+        double[] q = quaternion(orientation);
         double s = Math.sqrt(q[1] * q[1] + q[2] * q[2] + q[3] * q[3]);
         if (s == 0.0) {
             return Vector3D.ZERO;

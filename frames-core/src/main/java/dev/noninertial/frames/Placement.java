@@ -119,14 +119,15 @@ public final class Placement implements Serializable {
      * @param angularVelocity w of F relative to B, in F axes (rad/s)
      * @param angularAcceleration al = dw/dt, in F axes (rad/s^2)
      * @return the placement
-     * @throws IllegalArgumentException if a component is NaN or infinite
+     * @throws IllegalArgumentException if a component is NaN or infinite, or the orientation's
+     *         quaternion is not unit (see {@link Arguments#unitRotation(String, Rotation)})
      */
     public static Placement of(Vector3D origin, Vector3D originVelocity, Vector3D originAcceleration,
                                Rotation orientation, Vector3D angularVelocity, Vector3D angularAcceleration) {
         Arguments.finite("origin", origin);
         Arguments.finite("originVelocity", originVelocity);
         Arguments.finite("originAcceleration", originAcceleration);
-        Arguments.nonNull("orientation", orientation);
+        Arguments.unitRotation("orientation", orientation);
         Arguments.finite("angularVelocity", angularVelocity);
         Arguments.finite("angularAcceleration", angularAcceleration);
         return ofQuaternion(origin.getX(), origin.getY(), origin.getZ(),

@@ -94,7 +94,7 @@ public final class NavigationState implements Serializable {
         Arguments.nonNull("position", position);
         Arguments.finite("velocity (m/s)", velocity);
         Arguments.nonNull("axes", axes);
-        Arguments.nonNull("attitude", attitude);
+        Arguments.unitRotation("attitude", attitude);
         if (!(Math.abs(position.latitude()) < 0.5 * Math.PI)) {
             throw new IllegalArgumentException("position.latitude must be strictly inside (-90, 90) deg for a "
                     + "north-pointing level frame, got " + position.latitudeDegrees() + " deg");
@@ -210,7 +210,7 @@ public final class NavigationState implements Serializable {
      * @return the copy
      */
     public NavigationState withAttitude(Rotation newAttitude) {
-        Arguments.nonNull("newAttitude", newAttitude);
+        Arguments.unitRotation("newAttitude", newAttitude);
         double[] q = Orientations.toQuaternion(newAttitude);
         return new NavigationState(time, position, axes, v1, v2, v3, q[0], q[1], q[2], q[3], step, history);
     }
