@@ -190,26 +190,42 @@ public final class Motions {
 
     /** Placement for a turn by angle th about unit axis n, with rate th1 and acceleration th2. */
     static Placement turn(Vector3D n, double th, double th1, double th2) {
+        return turn(n, th, th1, th2, null, 0);
+    }
+
+    /**
+     * A turn by angle {@code th} about the unit axis {@code n} with rate {@code th1} and
+     * acceleration {@code th2} (origin at rest at zero), through {@link #place}: a new placement
+     * when {@code target} is null, else written into it (and null returned).
+     */
+    private static Placement turn(Vector3D n, double th, double th1, double th2, double[] target, int offset) {
         double half = 0.5 * th;
         double s = Math.sin(half);
-        return Placement.ofQuaternion(0, 0, 0, 0, 0, 0, 0, 0, 0,
+        return place(target, offset, 0, 0, 0, 0, 0, 0, 0, 0, 0,
                 Math.cos(half), s * n.getX(), s * n.getY(), s * n.getZ(),
                 th1 * n.getX(), th1 * n.getY(), th1 * n.getZ(),
                 th2 * n.getX(), th2 * n.getY(), th2 * n.getZ());
     }
 
     /**
-     * Writes the placement of a turn by angle {@code th} about the unit axis {@code n} with rate
-     * {@code th1} and acceleration {@code th2} (origin at rest at zero) in the matrix layout of
-     * {@link Placement#toArray(double[], int)}, with the checks and bits of {@link #turn}.
+     * The one exit of the motions below, so that {@code at(t)} and {@code at(t, target, offset)}
+     * run one evaluation: the placement of
+     * {@link Placement#ofQuaternion(double, double, double, double, double, double, double, double,
+     * double, double, double, double, double, double, double, double, double, double, double)}
+     * when {@code target} is null (returned), else its primitive twin writing into
+     * {@code target[offset, offset + 24)} (null returned); the same bits either way.
      */
-    private static void turn(Vector3D n, double th, double th1, double th2, double[] target, int offset) {
-        double half = 0.5 * th;
-        double s = Math.sin(half);
-        Placement.ofQuaternion(0, 0, 0, 0, 0, 0, 0, 0, 0,
-                Math.cos(half), s * n.getX(), s * n.getY(), s * n.getZ(),
-                th1 * n.getX(), th1 * n.getY(), th1 * n.getZ(),
-                th2 * n.getX(), th2 * n.getY(), th2 * n.getZ(), target, offset);
+    private static Placement place(double[] target, int offset, double ox, double oy, double oz, double ovx,
+                                   double ovy, double ovz, double oax, double oay, double oaz, double q0,
+                                   double q1, double q2, double q3, double wx, double wy, double wz, double alx,
+                                   double aly, double alz) {
+        if (target == null) {
+            return Placement.ofQuaternion(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3, wx, wy, wz,
+                    alx, aly, alz);
+        }
+        Placement.ofQuaternion(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, q0, q1, q2, q3, wx, wy, wz, alx, aly,
+                alz, target, offset);
+        return null;
     }
 
     private static void checkTime(double t) {
@@ -229,6 +245,43 @@ public final class Motions {
         if (!(Math.abs(norm - 1.0) <= 1e-12)) {
             throw new IllegalArgumentException(name + " must be a unit vector (within 1e-12), got norm " + norm);
         }
+    }
+
+    /** Checks the parameters shared by the oscillating motions. */
+    private static void checkOscillation(double amplitude, double angularFrequency, double phase) {
+        Arguments.finite("amplitude", amplitude);
+        Arguments.finite("angularFrequency", angularFrequency);
+        Arguments.finite("phase", phase);
+    }
+
+    /**
+     * A motion of this class evaluated once for both {@code at} methods: {@link #place} returns a
+     * new placement when {@code target} is null, else writes it there (see {@link Motions#place}),
+     * so the object and the primitive path have the same bits by construction.
+     */
+    private interface Evaluated extends Motion {
+        @Override
+        default Placement at(double t) {
+            checkTime(t);
+            return place(t, null, 0);
+        }
+
+        @Override
+        default void at(double t, double[] target, int offset) {
+            checkTime(t);
+            place(t, Arguments.nonNull("target", target), offset);
+        }
+
+        /**
+         * The placement at a finite time {@code t}: returned when {@code target} is null, else
+         * written into {@code target[offset, offset + 24)} and null returned.
+         *
+         * @param t time (s), finite
+         * @param target destination array, or null for a new placement
+         * @param offset index where o's x component is written
+         * @return the placement, or null when written into {@code target}
+         */
+        Placement place(double t, double[] target, int offset);
     }
 
     private record Fixed(Placement placement) implements Motion, Serializable {
@@ -255,7 +308,7 @@ public final class Motions {
     }
 
     private record Spin(Vector3D axis, double angleAtZero, double rateAtZero, double angularAcceleration)
-            implements Motion, Serializable {
+            implements Evaluated, Serializable {
         Spin {
             checkUnitAxis("axis", axis);
             Arguments.finite("angleAtZero", angleAtZero);
@@ -264,20 +317,12 @@ public final class Motions {
         }
 
         @Override
-        public Placement at(double t) {
-            checkTime(t);
-            double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
-            return turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration);
-        }
-
-        @Override
-        public void at(double t, double[] target, int offset) {
-            checkTime(t);
+        public Placement place(double t, double[] target, int offset) {
             double angle = angleAtZero + t * (rateAtZero + 0.5 * angularAcceleration * t);
             if (!Double.isFinite(angle)) {
                 throw new IllegalArgumentException("spin angle overflows at t = " + t + ": it must stay finite");
             }
-            turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration, target, offset);
+            return turn(axis, angle, rateAtZero + angularAcceleration * t, angularAcceleration, target, offset);
         }
 
         @Override
@@ -289,31 +334,18 @@ public final class Motions {
     }
 
     private record AngleOscillation(Vector3D axis, double amplitude, double angularFrequency, double phase)
-            implements Motion, Serializable {
+            implements Evaluated, Serializable {
         AngleOscillation {
             checkUnitAxis("axis", axis);
-            Arguments.finite("amplitude", amplitude);
-            Arguments.finite("angularFrequency", angularFrequency);
-            Arguments.finite("phase", phase);
+            checkOscillation(amplitude, angularFrequency, phase);
         }
 
         @Override
-        public Placement at(double t) {
-            checkTime(t);
+        public Placement place(double t, double[] target, int offset) {
             double arg = angularFrequency * t + phase;
             double s = Math.sin(arg);
             double c = Math.cos(arg);
             return turn(axis, amplitude * s, amplitude * angularFrequency * c,
-                    -amplitude * angularFrequency * angularFrequency * s);
-        }
-
-        @Override
-        public void at(double t, double[] target, int offset) {
-            checkTime(t);
-            double arg = angularFrequency * t + phase;
-            double s = Math.sin(arg);
-            double c = Math.cos(arg);
-            turn(axis, amplitude * s, amplitude * angularFrequency * c,
                     -amplitude * angularFrequency * angularFrequency * s, target, offset);
         }
 
@@ -326,17 +358,14 @@ public final class Motions {
     }
 
     private record Heave(Vector3D direction, double amplitude, double angularFrequency, double phase)
-            implements Motion, Serializable {
+            implements Evaluated, Serializable {
         Heave {
             checkUnitAxis("direction", direction);
-            Arguments.finite("amplitude", amplitude);
-            Arguments.finite("angularFrequency", angularFrequency);
-            Arguments.finite("phase", phase);
+            checkOscillation(amplitude, angularFrequency, phase);
         }
 
         @Override
-        public Placement at(double t) {
-            checkTime(t);
+        public Placement place(double t, double[] target, int offset) {
             double arg = angularFrequency * t + phase;
             double p = amplitude * Math.sin(arg);
             double v = amplitude * angularFrequency * Math.cos(arg);
@@ -344,22 +373,8 @@ public final class Motions {
             double dx = direction.getX();
             double dy = direction.getY();
             double dz = direction.getZ();
-            return Placement.ofQuaternion(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz,
-                    1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
-        }
-
-        @Override
-        public void at(double t, double[] target, int offset) {
-            checkTime(t);
-            double arg = angularFrequency * t + phase;
-            double p = amplitude * Math.sin(arg);
-            double v = amplitude * angularFrequency * Math.cos(arg);
-            double a = -angularFrequency * angularFrequency * p;
-            double dx = direction.getX();
-            double dy = direction.getY();
-            double dz = direction.getZ();
-            Placement.ofQuaternion(p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy, a * dz,
-                    1, 0, 0, 0, 0, 0, 0, 0, 0, 0, target, offset);
+            return Motions.place(target, offset, p * dx, p * dy, p * dz, v * dx, v * dy, v * dz, a * dx, a * dy,
+                    a * dz, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0);
         }
 
         @Override
