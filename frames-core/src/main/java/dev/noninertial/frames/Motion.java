@@ -98,7 +98,8 @@ public interface Motion {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
-     *         with different offsets, or a time is outside the span where the motion is known
+     *         with different offsets, a time or a source value is not finite (refused before
+     *         anything is written), or a time is outside the span where the motion is known
      */
     default void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                         double[] target, int targetOffset, int count) {
@@ -120,7 +121,8 @@ public interface Motion {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
-     *         with different offsets, or a time is outside the span where the motion is known
+     *         with different offsets, a time or a source value is not finite (refused before
+     *         anything is written), or a time is outside the span where the motion is known
      */
     default void fromBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                           double[] target, int targetOffset, int count) {
@@ -151,5 +153,10 @@ public interface Motion {
 
     private static void checkTimes(double[] times, int timeOffset, int count) {
         Arguments.fromIndexSize("times", times, "timeOffset", timeOffset, "count", count, 1);
+        for (int i = timeOffset; i < timeOffset + count; i++) {
+            if (!Double.isFinite(times[i])) {
+                throw new IllegalArgumentException("times[" + i + "] must be finite, got " + times[i]);
+            }
+        }
     }
 }

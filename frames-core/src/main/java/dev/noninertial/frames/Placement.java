@@ -568,8 +568,9 @@ public final class Placement implements Serializable {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws NullPointerException if an array is null
-     * @throws IllegalArgumentException if a range does not fit its array, the ranges overlap with different offsets, or a result is
-     *         not finite (the states before it are converted, the others untouched)
+     * @throws IllegalArgumentException if a range does not fit its array, the ranges overlap with
+     *         different offsets, a source value is not finite (refused before anything is written),
+     *         or a result is not finite (the states before it are converted, the others untouched)
      */
     public void toBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
@@ -586,8 +587,9 @@ public final class Placement implements Serializable {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws NullPointerException if an array is null
-     * @throws IllegalArgumentException if a range does not fit its array, the ranges overlap with different offsets, or a result is
-     *         not finite (the states before it are converted, the others untouched)
+     * @throws IllegalArgumentException if a range does not fit its array, the ranges overlap with
+     *         different offsets, a source value is not finite (refused before anything is written),
+     *         or a result is not finite (the states before it are converted, the others untouched)
      */
     public void fromBase(double[] source, int sourceOffset, double[] target, int targetOffset, int count) {
         checkBulk(source, sourceOffset, target, targetOffset, count);
@@ -605,6 +607,15 @@ public final class Placement implements Serializable {
                 && Math.abs((long) sourceOffset - targetOffset) < span) {
             throw new IllegalArgumentException("source and target ranges overlap with different offsets ("
                     + sourceOffset + " and " + targetOffset + ")");
+        }
+        // a non-finite input is refused by name before anything is written (the kernel's result
+        // check then only meets overflow)
+        for (int i = sourceOffset, end = sourceOffset + (int) span; i < end; i++) {
+            if (!Double.isFinite(source[i])) {
+                int k = (i - sourceOffset) / PointState.COMPONENTS;
+                throw new IllegalArgumentException("source[" + i + "] (state " + k + ", component "
+                        + (i - sourceOffset - k * PointState.COMPONENTS) + ") must be finite, got " + source[i]);
+            }
         }
     }
 

@@ -34,14 +34,15 @@ class FiniteResultRuleTest {
         String chain = refusal(() -> two.placementIn(root, 0.0));
         String stacked = refusal(() -> far.then(far).at(0.0));
 
-        // bulk paths: a NaN in the source array
-        double[] source = new double[2 * PointState.COMPONENTS];
-        source[PointState.COMPONENTS + 4] = Double.NaN;
-        double[] target = new double[source.length];
-        String bulkTo = refusal(() -> Placement.identity().toBase(source, 0, target, 0, 2));
-        String bulkFrom = refusal(() -> Placement.identity().fromBase(source, 0, target, 0, 2));
-        Motion spin = Motions.spin(Vector3D.PLUS_K, 0.0, 2.0);
-        String motionBulk = refusal(() -> spin.toBase(new double[2], 0, source, 0, target, 0, 2));
+        // bulk paths: the second state at x = +-1e308 seen from 1e308 away overflows
+        double[] plus = new double[2 * PointState.COMPONENTS];
+        plus[PointState.COMPONENTS] = 1e308;
+        double[] minus = new double[2 * PointState.COMPONENTS];
+        minus[PointState.COMPONENTS] = -1e308;
+        double[] target = new double[plus.length];
+        String bulkTo = refusal(() -> farAway.toBase(plus, 0, target, 0, 2));
+        String bulkFrom = refusal(() -> farAway.fromBase(minus, 0, target, 0, 2));
+        String motionBulk = refusal(() -> far.toBase(new double[2], 0, plus, 0, target, 0, 2));
 
         // toBase and fictitious on the same state: w x (w x r) overflows (1e10^2 * 1e300)
         Placement fast = Motions.spin(Vector3D.PLUS_K, 0.0, 1e10).at(0.0);
@@ -52,6 +53,20 @@ class FiniteResultRuleTest {
         for (String m : new String[] {then, chain, stacked, bulkTo, bulkFrom, motionBulk, toBase, fictitious}) {
             assertEquals(Kinematics.NOT_FINITE, m);
         }
+    }
+
+    @Test
+    void bulkPathsRefuseANonFiniteInputByNameBeforeWriting() {
+        // as the position helpers below: a NaN input is named, only an overflow gets the one message
+        double[] source = new double[2 * PointState.COMPONENTS];
+        source[PointState.COMPONENTS + 4] = Double.NaN;
+        double[] target = new double[source.length];
+        String expected = "source[13] (state 1, component 4) must be finite, got NaN";
+        assertEquals(expected, refusal(() -> Placement.identity().toBase(source, 0, target, 0, 2)));
+        assertEquals(expected, refusal(() -> Placement.identity().fromBase(source, 0, target, 0, 2)));
+        Motion spin = Motions.spin(Vector3D.PLUS_K, 0.0, 2.0);
+        assertEquals(expected, refusal(() -> spin.toBase(new double[2], 0, source, 0, target, 0, 2)));
+        assertTrue(java.util.Arrays.equals(new double[source.length], target), "nothing written");
     }
 
     @Test

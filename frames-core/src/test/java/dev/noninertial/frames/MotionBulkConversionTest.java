@@ -170,7 +170,15 @@ class MotionBulkConversionTest {
         assertTrue(e.getMessage().contains("targetOffset"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class,
                 () -> m.toBase(new double[] {0.0, Double.NaN}, 0, states, 0, new double[18], 0, 2));
-        assertTrue(e.getMessage().contains("t must be finite"), e.getMessage());
+        assertTrue(e.getMessage().contains("times[1] must be finite"), e.getMessage());
+        // a non-finite source value is refused by name, before anything is written
+        double[] nanState = new double[18];
+        nanState[12] = Double.NaN;
+        double[] untouched = new double[18];
+        e = assertThrows(IllegalArgumentException.class,
+                () -> m.fromBase(new double[] {0.0, 1.0}, 0, nanState, 0, untouched, 0, 2));
+        assertTrue(e.getMessage().contains("source[12] (state 1, component 3)"), e.getMessage());
+        assertTrue(java.util.Arrays.equals(new double[18], untouched), "nothing written");
         e = assertThrows(IllegalArgumentException.class, () -> m.at(0.0, new double[23], 0));
         assertTrue(e.getMessage().contains("offset"), e.getMessage());
         assertThrows(NullPointerException.class, () -> m.toBase(null, 0, states, 0, states, 0, 2));

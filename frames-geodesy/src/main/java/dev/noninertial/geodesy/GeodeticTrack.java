@@ -94,7 +94,8 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      */
     public static GeodeticTrack fromArrays(double[] times, double[] latitudes, double[] longitudes, double[] heights,
                                            double maxGap) {
-        return build(times, latitudes, longitudes, heights, null, null, null, maxGap, i -> "sample " + i);
+        return build(times, latitudes, longitudes, heights, null, null, null, maxGap, ARRAY_NAMES, "times",
+                i -> "sample " + i);
     }
 
     /**
@@ -117,7 +118,8 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         Arguments.nonNull("headings", headings);
         Arguments.nonNull("pitches", pitches);
         Arguments.nonNull("rolls", rolls);
-        return build(times, latitudes, longitudes, heights, headings, pitches, rolls, maxGap, i -> "sample " + i);
+        return build(times, latitudes, longitudes, heights, headings, pitches, rolls, maxGap, ARRAY_NAMES, "times",
+                i -> "sample " + i);
     }
 
     /**
@@ -256,13 +258,17 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         }
         boolean attitude = column[4] >= 0;
         return build(cols[0], cols[1], cols[2], cols[3], attitude ? cols[4] : null, attitude ? cols[5] : null,
-                attitude ? cols[6] : null, maxGap, i -> sourceName + " line " + lines.get(i));
+                attitude ? cols[6] : null, maxGap, names, sourceName, i -> sourceName + " line " + lines.get(i));
     }
+
+    /** The parameters of the array factories, in the order of the file columns, named in refusals. */
+    private static final String[] ARRAY_NAMES = {"times", "latitudes", "longitudes", "heights", "headings", "pitches",
+        "rolls"};
 
     @SuppressWarnings("checkstyle:ParameterNumber")
     private static GeodeticTrack build(double[] times, double[] lat, double[] lon, double[] h, double[] heading,
-                                       double[] pitch, double[] roll, double maxGap,
-                                       java.util.function.IntFunction<String> label) {
+                                       double[] pitch, double[] roll, double maxGap, String[] names,
+                                       String samplesOf, java.util.function.IntFunction<String> label) {
         Arguments.nonNull("times", times);
         Arguments.nonNull("latitudes", lat);
         Arguments.nonNull("longitudes", lon);
@@ -270,7 +276,8 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         Arguments.positive("maxGap", maxGap);
         int n = times.length;
         if (n < 2) {
-            throw new IllegalArgumentException("a track needs at least 2 samples, got " + n);
+            throw new IllegalArgumentException(samplesOf + " must hold at least 2 samples (a track needs two), got "
+                    + n);
         }
         checkLength("latitudes", lat, n);
         checkLength("longitudes", lon, n);
@@ -286,7 +293,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
         double[] hpr = heading == null ? null : new double[3 * n];
         for (int i = 0; i < n; i++) {
             String at = label.apply(i);
-            t[i] = finite(at, "t", times[i]);
+            t[i] = finite(at, names[0], times[i]);
             if (i > 0) {
                 double gap = t[i] - t[i - 1];
                 if (!(gap > 0)) {
@@ -299,7 +306,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
                             Formats.number(maxGap)));
                 }
             }
-            double la = finite(at, "lat", lat[i]);
+            double la = finite(at, names[1], lat[i]);
             if (!(Math.abs(la) < limit)) {
                 throw new IllegalArgumentException(String.format(Locale.ROOT, "%s: latitude %.6f deg is within %s deg of "
                         + "a pole or beyond it (allowed |lat| < %s deg): a north-aligned level frame is undefined at "
@@ -307,13 +314,13 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
                         Formats.number(POLE_MARGIN_DEGREES), Formats.number(90.0 - POLE_MARGIN_DEGREES)));
             }
             xyz[3 * i] = la;
-            xyz[3 * i + 1] = unwrap(at, "lon", finite(at, "lon", lon[i]), i == 0 ? Double.NaN : xyz[3 * i - 2]);
-            xyz[3 * i + 2] = finite(at, "h", h[i]);
+            xyz[3 * i + 1] = unwrap(at, names[2], finite(at, names[2], lon[i]), i == 0 ? Double.NaN : xyz[3 * i - 2]);
+            xyz[3 * i + 2] = finite(at, names[3], h[i]);
             if (hpr != null) {
-                hpr[3 * i] = unwrap(at, "heading", finite(at, "heading", heading[i]),
+                hpr[3 * i] = unwrap(at, names[4], finite(at, names[4], heading[i]),
                         i == 0 ? Double.NaN : hpr[3 * i - 3]);
-                hpr[3 * i + 1] = finite(at, "pitch", pitch[i]);
-                hpr[3 * i + 2] = finite(at, "roll", roll[i]);
+                hpr[3 * i + 1] = finite(at, names[5], pitch[i]);
+                hpr[3 * i + 2] = finite(at, names[6], roll[i]);
             }
         }
         double[] identity = new double[4 * n];

@@ -165,6 +165,27 @@ class GeodeticTrackTest {
         assertRefused(head + "0, 50, 3, 0\n", "at least 2", "");
     }
 
+    @Test
+    void arrayRefusalsNameTheArrayParameter() {
+        double[] t = {0, 1, 2};
+        double[] lat = {0.829, 0.829, 0.829};
+        double[] lon = {0.143, 0.1431, 0.1432};
+        double[] h = {420, 421, 422};
+        double[] nan = {0.0, Double.NaN, 0.0};
+        // the arrays are named as the factory's parameters, not as the file's columns
+        assertArrayRefused("sample 1, latitudes", () -> GeodeticTrack.fromArrays(t, nan, lon, h, 10.0));
+        assertArrayRefused("sample 1, heights", () -> GeodeticTrack.fromArrays(t, lat, lon, nan, 10.0));
+        assertArrayRefused("sample 1, pitches",
+                () -> GeodeticTrack.fromArrays(t, lat, lon, h, new double[3], nan, new double[3], 10.0));
+        assertArrayRefused("times must hold at least 2 samples",
+                () -> GeodeticTrack.fromArrays(new double[0], new double[0], new double[0], new double[0], 10.0));
+    }
+
+    private static void assertArrayRefused(String what, org.junit.jupiter.api.function.Executable call) {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, call);
+        assertTrue(e.getMessage().contains(what), e.getMessage());
+    }
+
     private static void assertRefused(String text, String where, String what) {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> GeodeticTrack.readCsv(new StringReader(text), "log.csv", 2.0));

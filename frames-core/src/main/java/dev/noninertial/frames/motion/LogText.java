@@ -132,9 +132,21 @@ public final class LogText {
      * @param lineNumber 1-based line number
      * @param column name of the column, for the message
      * @return the value
-     * @throws IllegalArgumentException naming source, line, column and the (quoted) field
+     * @throws NullPointerException if {@code text} is null
+     * @throws IllegalArgumentException naming source, line, column and the (quoted) field; or, for
+     *         a caller's error, naming {@code from} or {@code to} when {@code 0 <= from <= to <=
+     *         text.length()} does not hold
      */
     public static double number(String text, int from, int to, String source, int lineNumber, String column) {
+        Arguments.nonNull("text", text);
+        if (from < 0 || from > text.length()) {
+            throw new IllegalArgumentException("from must be in [0, " + text.length() + "] for a text of length "
+                    + text.length() + ", got " + from);
+        }
+        if (to < from || to > text.length()) {
+            throw new IllegalArgumentException("to must be in [" + from + ", " + text.length() + "] (from " + from
+                    + ", text of length " + text.length() + "), got " + to);
+        }
         double v = MotionLogFile.decimal(text, from, to);
         String where = source + " line " + lineNumber + ", column " + column + " (character " + (from + 1) + ")";
         if (Double.isNaN(v)) {

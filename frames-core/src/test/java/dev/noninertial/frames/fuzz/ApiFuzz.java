@@ -107,6 +107,10 @@ public final class ApiFuzz {
         public final Map<String, String> packageInternal = new LinkedHashMap<>();
         /** Internal array accessors checked for copies. */
         public int arrayAccessorsChecked;
+        /** Executables started from a valid call of the table ({@link SampleValues#addCall}). */
+        public final Set<String> tabled = new TreeSet<>();
+        /** Valid calls of the table that match no executable of the module (another module's). */
+        public final Set<String> untabled = new TreeSet<>();
 
         /** @return the counts on one line */
         public String counts() {
@@ -126,6 +130,10 @@ public final class ApiFuzz {
             section(b, "internal arrays reachable", exposures);
             section(b, "internal arrays shared inside a package (sealed jars keep other code out)", packageInternal);
             section(b, "skipped (no valid call found)", skipped);
+            if (!tabled.isEmpty()) {
+                b.append("== started from a valid call of the table (").append(tabled.size()).append(")\n");
+                tabled.forEach(k -> b.append("  ").append(k).append('\n'));
+            }
             return b.toString();
         }
 
@@ -269,6 +277,11 @@ public final class ApiFuzz {
             }
         }
         worker.shutdownNow();
+        for (String k : samples.callSignatures()) {
+            if (!report.tabled.contains(k)) {
+                report.untabled.add(k);
+            }
+        }
         return report;
     }
 
@@ -299,7 +312,21 @@ public final class ApiFuzz {
             return;
         }
         List<List<Supplier<Object>>> candidates = new ArrayList<>();
-        for (Parameter p : params) {
+        Supplier<Object[]> call = samples.call(signature(e));
+        if (call != null) {
+            report.tabled.add(signature(e));
+            int given = call.get().length;
+            if (given != params.length) {
+                throw new IllegalStateException("the valid call of " + signature(e) + " gives " + given
+                        + " arguments for " + params.length + " parameters");
+            }
+            for (int i = 0; i < params.length; i++) {
+                int k = i;
+                candidates.add(List.of(() -> call.get()[k]));
+            }
+        }
+        for (int i = candidates.size(); i < params.length; i++) {
+            Parameter p = params[i];
             List<Supplier<Object>> list = samples.candidates(p.getType(), 0);
             if (list.isEmpty()) {
                 report.skipped.put(signature(e), "no valid value of " + p.getType().getSimpleName() + " for " + p.getName());

@@ -19,5 +19,6 @@ class CoreApiFuzzTest {
                 CoreSamples.table()).run();
         FuzzReports.write("frames-core", report, (System.nanoTime() - start) * 1e-9);
         assertTrue(report.failures.isEmpty() && report.exposures.isEmpty(), report.details());
+        assertTrue(report.untabled.isEmpty(), () -> "valid calls given for no executable: " + report.untabled);
     }
 }

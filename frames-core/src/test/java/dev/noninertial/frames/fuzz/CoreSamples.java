@@ -170,6 +170,55 @@ public final class CoreSamples {
         s.add(Writer.class, StringWriter::new);
         s.add(Supplier.class, () -> (Supplier<?>) () -> new ClassicalRungeKuttaIntegrator(0.01));
         s.add(List.class, () -> List.of("x"), () -> List.of("x", "y"));
+        addCalls(s);
         return s;
+    }
+
+    /** A placement with every part non-zero (demo values), in the matrix layout from index 0. */
+    private static double[] placementArray(int length) {
+        double[] p = new double[length];
+        Placement.of(new Vector3D(1, 2, 3), new Vector3D(0.1, 0, 0), new Vector3D(0, 0.2, 0), turn(),
+                new Vector3D(0, 0, 0.3), new Vector3D(0.01, 0, 0)).toArray(p, 0);
+        return p;
+    }
+
+    /** {@code count} states of 9 doubles (position, velocity, acceleration), all non-zero. */
+    private static double[] states(int count) {
+        double[] s = new double[PointState.COMPONENTS * count];
+        for (int i = 0; i < s.length; i++) {
+            s[i] = 0.5 + 0.25 * i;
+        }
+        return s;
+    }
+
+    /**
+     * Valid calls whose arguments must agree with each other (see {@link SampleValues#addCall}):
+     * offsets and counts that fit the arrays, times inside every sample motion's span [0, 2] s,
+     * motions continuous at their join, a field inside its line.
+     */
+    private static void addCalls(SampleValues s) {
+        // two states from index 0 of the times and the source, written from index 9 of the target
+        // (room for one more state before them), the times inside [0, 2] s
+        for (String direction : new String[] {"toBase", "fromBase"}) {
+            s.addCall("Motion." + direction + "(double[],int,double[],int,double[],int,int)",
+                    () -> new Object[] {new double[] {0.5, 1.5}, 0, states(2), 0,
+                        new double[PointState.COMPONENTS * 3], PointState.COMPONENTS, 2});
+        }
+        // the same for one placement at many states: two states from index 0, written from index 9
+        for (String direction : new String[] {"toBase", "fromBase"}) {
+            s.addCall("Placement." + direction + "(double[],int,double[],int,int)", () -> new Object[] {states(2), 0,
+                new double[PointState.COMPONENTS * 3], PointState.COMPONENTS, 2});
+        }
+        s.addCall("Placement.fromArray(double[],int)", () -> new Object[] {placementArray(Placement.COMPONENTS), 0});
+        // the placement in the root, written from index 0 of a work array of exactly 2 x 24 doubles
+        s.addCall("ReferenceFrame.placementIn(ReferenceFrame,double,double[],int)",
+                () -> new Object[] {ROOT, 0.5, new double[2 * Placement.COMPONENTS], 0});
+        // the field "1.25" of a data row (characters 3 to 7)
+        s.addCall("LogText.number(String,int,int,String,int,String)",
+                () -> new Object[] {"0, 1.25, 2", 3, 7, "demo.csv", 2, "x"});
+        // a spin at 0.2 rad/s, then from 1 s a spin-up continuous with it at the join: the angle
+        // 0.05 + 0.1 t + 0.05 t^2 and the rate 0.1 + 0.1 t equal 0.2 and 0.2 at t = 1
+        s.addCall("Motions.sequence(double[],Motion[])", () -> new Object[] {new double[] {1.0},
+            new Motion[] {Motions.spin(Vector3D.PLUS_K, 0.0, 0.2), Motions.spinUp(Vector3D.PLUS_K, 0.05, 0.1, 0.1)}});
     }
 }

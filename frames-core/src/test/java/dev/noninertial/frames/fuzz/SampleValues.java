@@ -29,6 +29,7 @@ public class SampleValues {
     private final Map<Class<?>, List<Supplier<Object>>> learned = new HashMap<>();
     private final Set<Class<?>> learning = new HashSet<>();
     private final List<Executable> factories = new ArrayList<>();
+    private final Map<String, Supplier<Object[]>> calls = new HashMap<>();
 
     /**
      * Adds valid candidates for a type, tried in the order given.
@@ -63,6 +64,34 @@ public class SampleValues {
         }
         table.put(type, list);
         return this;
+    }
+
+    /**
+     * Gives one executable a coherent valid call: arguments that agree with each other (arrays
+     * sized for the offsets and counts given, times inside a motion's span, a log file in the
+     * format read), which a search over independent candidates per type cannot find. The fuzz
+     * starts from these arguments (the receiver still comes from the candidates of its class) and
+     * varies one at a time.
+     *
+     * @param signature the executable, as in report keys: {@code Class.method(Types)}
+     * @param arguments supplier of a fresh argument array per call, one element per parameter
+     * @return this table
+     */
+    public SampleValues addCall(String signature, Supplier<Object[]> arguments) {
+        if (calls.putIfAbsent(signature, arguments) != null) {
+            throw new IllegalArgumentException("a valid call of " + signature + " is already given");
+        }
+        return this;
+    }
+
+    /** The valid call given for an executable, or null. */
+    Supplier<Object[]> call(String signature) {
+        return calls.get(signature);
+    }
+
+    /** Signatures with a valid call given. */
+    Set<String> callSignatures() {
+        return calls.keySet();
     }
 
     /** Makes the public factories of these classes available for types without entries. */

@@ -2,6 +2,12 @@ package dev.noninertial.geodesy.fuzz;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Instant;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
@@ -76,7 +82,46 @@ class GeodesyApiFuzzTest {
         s.add(NavigationState.class, () -> AT_REST);
         s.add(SensorIncrements.class, GeodesyApiFuzzTest::increments);
         s.add(SensorIncrements[].class, () -> new SensorIncrements[] {increments()});
+        addCalls(s);
         return s;
+    }
+
+    /** A track log of three samples 1 s apart near the site, with attitude (invented). */
+    static final String TRACK = "# demo track near the invented site\n"
+            + "t[s], lat[deg], lon[deg], h[m], heading[deg], pitch[deg], roll[deg]\n"
+            + "0, 47.5, 8.2, 420, 17, 0, 0\n1, 47.5, 8.2001, 421, 17, 0.5, 0\n2, 47.5, 8.2002, 422, 17, 1, 0\n";
+
+    private static Path trackFile;
+
+    /** The track log as a temporary file, written once. */
+    private static synchronized Path trackFile() {
+        if (trackFile == null) {
+            try {
+                trackFile = Files.createTempFile("fuzz-track", ".csv");
+                trackFile.toFile().deleteOnExit();
+                Files.writeString(trackFile, TRACK, StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+        return trackFile;
+    }
+
+    /**
+     * Valid calls whose arguments must agree (see {@link SampleValues#addCall}): arrays of one
+     * length, a log in the track format.
+     */
+    private static void addCalls(SampleValues s) {
+        s.addCall("GeodeticTrack.fromArrays(double[],double[],double[],double[],double)", () -> new Object[] {
+            new double[] {0, 1, 2}, new double[] {0.829, 0.829, 0.829}, new double[] {0.143, 0.1431, 0.1432},
+            new double[] {420, 421, 422}, 10.0});
+        s.addCall("GeodeticTrack.fromArrays(double[],double[],double[],double[],double[],double[],double[],double)",
+                () -> new Object[] {new double[] {0, 1, 2}, new double[] {0.829, 0.829, 0.829},
+                    new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
+                    new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0});
+        s.addCall("GeodeticTrack.readCsv(Path,double)", () -> new Object[] {trackFile(), 10.0});
+        s.addCall("GeodeticTrack.readCsv(Reader,String,double)",
+                () -> new Object[] {new StringReader(TRACK), "demo-track.csv", 10.0});
     }
 
     private static SensorIncrements increments() {
@@ -89,5 +134,8 @@ class GeodesyApiFuzzTest {
         ApiFuzz.Report report = new ApiFuzz("frames-geodesy", Ellipsoid.class, "dev.noninertial.geodesy", table()).run();
         FuzzReports.write("frames-geodesy", report, (System.nanoTime() - start) * 1e-9);
         assertTrue(report.failures.isEmpty() && report.exposures.isEmpty(), report.details());
+        // the valid calls given here are used (the core ones, inherited with its table, are not)
+        assertTrue(report.untabled.stream().noneMatch(k -> k.startsWith("GeodeticTrack.")),
+                () -> "valid calls given for no executable: " + report.untabled);
     }
 }
