@@ -68,6 +68,16 @@ final class Kinematics {
      * non-finite sum of finite values (an overflow of the sum only) is told apart by a second pass.
      */
     static void checkFinite(double[] v, int from, int n) {
+        if (!allFinite(v, from, n)) {
+            throw notFinite();
+        }
+    }
+
+    /**
+     * True if {@code n} values from {@code from} are finite: the quick test of
+     * {@link #checkFinite}, for callers that name the value they refuse.
+     */
+    static boolean allFinite(double[] v, int from, int n) {
         // four independent partial sums: the additions overlap instead of waiting on each other
         double s0 = 0;
         double s1 = 0;
@@ -83,13 +93,15 @@ final class Kinematics {
         for (; k < from + n; k++) {
             s0 += v[k];
         }
-        if (!Double.isFinite(s0 + s1 + s2 + s3)) {
-            for (int i = from; i < from + n; i++) {
-                if (!Double.isFinite(v[i])) {
-                    throw notFinite();
-                }
+        if (Double.isFinite(s0 + s1 + s2 + s3)) {
+            return true;
+        }
+        for (int i = from; i < from + n; i++) {
+            if (!Double.isFinite(v[i])) {
+                return false;
             }
         }
+        return true;
     }
 
     /**

@@ -610,6 +610,13 @@ public final class Placement implements Serializable {
         }
         // a non-finite input is refused by name before anything is written (the kernel's result
         // check then only meets overflow)
+        // A quick sum first, the per-value pass only to name the value: the per-value test on every
+        // call measured 4.38x the primitive baseline on the bulk toBase, the quick sum 2.11x, no
+        // input check 1.29x (CI gate HotPathGate medians, 2026-12-03 11:37 to 12:02 UTC, 1-minute
+        // load 3 to 4): the input pass still costs, a candidate for fusing into the kernel's loop.
+        if (Kinematics.allFinite(source, sourceOffset, (int) span)) {
+            return;
+        }
         for (int i = sourceOffset, end = sourceOffset + (int) span; i < end; i++) {
             if (!Double.isFinite(source[i])) {
                 int k = (i - sourceOffset) / PointState.COMPONENTS;
