@@ -143,11 +143,11 @@ final class Kinematics {
      * the single-state object paths measured 1.62-1.70x (F to B) and 1.61-1.71x (B to F) the
      * primitive baseline, against 1.66-1.83x and 1.61-1.66x before; the same reader also serving
      * the composition (a third branch, 394 bytes, not inlined) measured 1.82-1.98x and 1.86-2.27x
-     * (frames-bench PairedRatios, 9 rounds, 3 to 5 runs each, 2026-12-03 10:50-11:10 UTC,
-     * 1-minute load 3 to 4.5). The composition reads its placement on its own, below. The two
-     * directions stay two loops: one loop for both measured 1.8x to 4.2x the primitive baseline
-     * on the single-state object path, against 1.4x to 1.7x apart (frames-bench PairedRatios,
-     * 9 rounds, 2026-12-02 16:56-17:00 UTC, 1-minute load 9 to 17).
+     * (frames-bench PairedRatios, 9 rounds, 3 to 5 runs each, 2026-12-03 between 10:40 and
+     * 11:37 UTC, 1-minute load 3 to 4.5). The composition reads its placement on its own, below.
+     * The two directions stay two loops: one loop for both measured 1.8x to 4.2x the primitive
+     * baseline on the single-state object path, against 1.4x to 1.7x apart (frames-bench
+     * PairedRatios, 9 rounds, 2026-12-02 16:56-17:00 UTC, 1-minute load 9 to 17).
      */
     private static void convert(boolean toBase, double[] p, int po, double[] source, int sourceOffset,
                                 double[] target, int targetOffset, int count) {
@@ -177,10 +177,12 @@ final class Kinematics {
         double alz = p[po + 23];
         if (toBase) {
             toBase(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, r00, r01, r02,
-                    r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz, source, sourceOffset, target, targetOffset, count);
+                    r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz,
+                    source, sourceOffset, target, targetOffset, count);
         } else {
             fromBase(ox, oy, oz, ovx, ovy, ovz, oax, oay, oaz, r00, r01, r02,
-                    r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz, source, sourceOffset, target, targetOffset, count);
+                    r10, r11, r12, r20, r21, r22, wx, wy, wz, alx, aly, alz,
+                    source, sourceOffset, target, targetOffset, count);
         }
     }
 
