@@ -98,8 +98,9 @@ public interface Motion {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
-     *         with different offsets, a time or a source value is not finite (refused before
-     *         anything is written), or a time is outside the span where the motion is known
+     *         with different offsets, a time is not finite (refused before anything is written), a
+     *         time is outside the span where the motion is known, or a source value or a result is
+     *         not finite (a non-finite source value is named; the states before it are converted)
      */
     default void toBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                         double[] target, int targetOffset, int count) {
@@ -121,8 +122,9 @@ public interface Motion {
      * @param targetOffset index of the first state's x in {@code target}
      * @param count number of states
      * @throws IllegalArgumentException if a range does not fit its array, the state ranges overlap
-     *         with different offsets, a time or a source value is not finite (refused before
-     *         anything is written), or a time is outside the span where the motion is known
+     *         with different offsets, a time is not finite (refused before anything is written), a
+     *         time is outside the span where the motion is known, or a source value or a result is
+     *         not finite (a non-finite source value is named; the states before it are converted)
      */
     default void fromBase(double[] times, int timeOffset, double[] source, int sourceOffset,
                           double[] target, int targetOffset, int count) {
@@ -144,9 +146,9 @@ public interface Motion {
             int from = sourceOffset + k * PointState.COMPONENTS;
             int to = targetOffset + k * PointState.COMPONENTS;
             if (toBase) {
-                Kinematics.toBase(p, 0, source, from, target, to, 1);
+                Kinematics.toBase(p, 0, source, from, target, to, 1, sourceOffset);
             } else {
-                Kinematics.fromBase(p, 0, source, from, target, to, 1);
+                Kinematics.fromBase(p, 0, source, from, target, to, 1, sourceOffset);
             }
         }
     }
