@@ -83,21 +83,42 @@ public final class Arguments {
      */
     public static Rotation unitRotation(String name, Rotation value) {
         nonNull(name, value);
-        double q0 = value.getQ0();
-        double q1 = value.getQ1();
-        double q2 = value.getQ2();
-        double q3 = value.getQ3();
-        if (!Double.isFinite(q0) || !Double.isFinite(q1) || !Double.isFinite(q2) || !Double.isFinite(q3)) {
-            throw new IllegalArgumentException(name + " must be a rotation with a finite quaternion, got (" + q0
-                    + ", " + q1 + ", " + q2 + ", " + q3 + ")");
-        }
-        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-        if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
-            throw new IllegalArgumentException(name + " must be a rotation with a unit quaternion (|norm - 1| <= "
-                    + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3
-                    + ") with norm " + norm);
-        }
+        unitQuaternion(name, value.getQ0(), value.getQ1(), value.getQ2(), value.getQ3());
         return value;
+    }
+
+    /**
+     * Refuses a quaternion that is not finite or whose norm differs from 1 by more than
+     * {@link Orientations#UNIT_QUATERNION_TOLERANCE}: the one unit-quaternion check of the library
+     * (rotations, the quaternion factories of {@code Placement} and {@code Orientations}). The
+     * message names {@code name}, the four components and the norm, and the first component that
+     * alone rules the quaternion out (not finite, or outside [-1, 1]).
+     *
+     * @param name argument name used in the message
+     * @param q0 scalar part
+     * @param q1 vector part x
+     * @param q2 vector part y
+     * @param q3 vector part z
+     * @return the norm
+     * @throws IllegalArgumentException if a component is not finite or the norm is not 1 within the tolerance
+     */
+    public static double unitQuaternion(String name, double q0, double q1, double q2, double q3) {
+        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
+        if (Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE) {
+            return norm;
+        }
+        double[] values = {q0, q1, q2, q3};
+        String culprit = "";
+        for (int k = 0; k < 4 && culprit.isEmpty(); k++) {
+            if (!Double.isFinite(values[k])) {
+                culprit = "; q" + k + " = " + values[k] + " is not finite";
+            } else if (!(Math.abs(values[k]) <= 1.0 + Orientations.UNIT_QUATERNION_TOLERANCE)) {
+                culprit = "; q" + k + " = " + values[k] + " is outside [-1, 1] on its own";
+            }
+        }
+        throw new IllegalArgumentException(name + " must be a finite quaternion of unit norm (|norm - 1| <= "
+                + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3
+                + ") with norm " + norm + culprit);
     }
 
     /**

@@ -76,21 +76,7 @@ public final class Orientations {
         Arguments.finite("q1", q1);
         Arguments.finite("q2", q2);
         Arguments.finite("q3", q3);
-        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-        if (!(Math.abs(norm - 1.0) <= UNIT_QUATERNION_TOLERANCE)) {
-            // name the component that alone is too large for a unit quaternion, if one is
-            String[] names = {"q0", "q1", "q2", "q3"};
-            double[] values = {q0, q1, q2, q3};
-            String culprit = "";
-            for (int k = 0; k < 4 && culprit.isEmpty(); k++) {
-                if (!(Math.abs(values[k]) <= 1.0 + UNIT_QUATERNION_TOLERANCE)) {
-                    culprit = "; " + names[k] + " = " + values[k] + " is outside [-1, 1] on its own";
-                }
-            }
-            throw new IllegalArgumentException("quaternion (q0, q1, q2, q3) must be unit (|norm - 1| <= "
-                    + UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", " + q3
-                    + ") with norm " + norm + culprit);
-        }
+        Arguments.unitQuaternion("quaternion (q0, q1, q2, q3)", q0, q1, q2, q3);
         return new Rotation(q0, q1, q2, q3, true);
     }
 

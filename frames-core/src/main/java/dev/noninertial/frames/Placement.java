@@ -274,13 +274,7 @@ public final class Placement implements Serializable {
                 Arguments.finite(COMPONENT_NAMES[k], values[k]);
             }
         }
-        double norm = Math.sqrt(q0 * q0 + q1 * q1 + q2 * q2 + q3 * q3);
-        if (!(Math.abs(norm - 1.0) <= Orientations.UNIT_QUATERNION_TOLERANCE)) {
-            throw new IllegalArgumentException("quaternion (q0, q1, q2, q3) must be unit (|norm - 1| <= "
-                    + Orientations.UNIT_QUATERNION_TOLERANCE + "), got (" + q0 + ", " + q1 + ", " + q2 + ", "
-                    + q3 + ") with norm " + norm);
-        }
-        return norm;
+        return Arguments.unitQuaternion("quaternion (q0, q1, q2, q3)", q0, q1, q2, q3);
     }
 
     // ------------------------------------------------------------------ primitive layouts
