@@ -118,14 +118,7 @@ public final class ErrorBudget implements Serializable {
         if (n == 0) {
             throw new IllegalArgumentException("ends must hold at least one step, got 0");
         }
-        if (deltaVelocities.length != 3L * n) {
-            throw new IllegalArgumentException("deltaVelocities must have 3 x ends.length = " + 3L * n
-                    + " values, got " + deltaVelocities.length);
-        }
-        if (deltaAngles.length != 3L * n) {
-            throw new IllegalArgumentException("deltaAngles must have 3 x ends.length = " + 3L * n
-                    + " values, got " + deltaAngles.length);
-        }
+        LevelNavigator.checkIncrementLengths(n, deltaVelocities, deltaAngles);
         LevelNavigator full = navigator.withAllTerms();
         if (full.gravityReference() == null) {
             full = full.withGravityReference(start.position());

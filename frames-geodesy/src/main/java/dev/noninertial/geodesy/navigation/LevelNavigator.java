@@ -461,6 +461,21 @@ public final class LevelNavigator implements Serializable {
     }
 
     /**
+     * Refuses increment arrays whose lengths do not hold three values per step, naming each array
+     * (the runs of this class and {@link ErrorBudget} share it).
+     */
+    static void checkIncrementLengths(int steps, double[] deltaVelocities, double[] deltaAngles) {
+        if (deltaVelocities.length != 3L * steps) {
+            throw new IllegalArgumentException("deltaVelocities must have 3 x ends.length = " + 3L * steps
+                    + " values, got " + deltaVelocities.length);
+        }
+        if (deltaAngles.length != 3L * steps) {
+            throw new IllegalArgumentException("deltaAngles must have 3 x ends.length = " + 3L * steps
+                    + " values, got " + deltaAngles.length);
+        }
+    }
+
+    /**
      * Navigates a run of increments and records the state after each step, allocating nothing
      * per step.
      *
@@ -482,14 +497,7 @@ public final class LevelNavigator implements Serializable {
         Arguments.nonNull("deltaVelocities", deltaVelocities);
         Arguments.nonNull("deltaAngles", deltaAngles);
         int n = ends.length;
-        if (deltaVelocities.length != 3L * n) {
-            throw new IllegalArgumentException("deltaVelocities must have 3 x ends.length = " + 3L * n
-                    + " values, got " + deltaVelocities.length);
-        }
-        if (deltaAngles.length != 3L * n) {
-            throw new IllegalArgumentException("deltaAngles must have 3 x ends.length = " + 3L * n
-                    + " values, got " + deltaAngles.length);
-        }
+        checkIncrementLengths(n, deltaVelocities, deltaAngles);
         if (trace != null && trace.length < TRACE_VALUES * n) {
             throw new IllegalArgumentException("trace must have at least " + TRACE_VALUES * n + " values, got "
                     + trace.length);
