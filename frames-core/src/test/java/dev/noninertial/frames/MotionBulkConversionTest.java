@@ -171,14 +171,20 @@ class MotionBulkConversionTest {
         e = assertThrows(IllegalArgumentException.class,
                 () -> m.toBase(new double[] {0.0, Double.NaN}, 0, states, 0, new double[18], 0, 2));
         assertTrue(e.getMessage().contains("times[1] must be finite"), e.getMessage());
-        // a non-finite source value is refused by name, before anything is written
+        // a non-finite source value is refused by name; the states before it are converted, the
+        // refused state is not written (a sentinel shows any write)
         double[] nanState = new double[18];
         nanState[12] = Double.NaN;
         double[] untouched = new double[18];
+        java.util.Arrays.fill(untouched, 7.0);
         e = assertThrows(IllegalArgumentException.class,
                 () -> m.fromBase(new double[] {0.0, 1.0}, 0, nanState, 0, untouched, 0, 2));
         assertTrue(e.getMessage().contains("source[12] (state 1, component 3)"), e.getMessage());
-        assertTrue(java.util.Arrays.equals(new double[18], untouched), "nothing written");
+        double[] sentinel = new double[9];
+        java.util.Arrays.fill(sentinel, 7.0);
+        assertTrue(java.util.Arrays.equals(sentinel, java.util.Arrays.copyOfRange(untouched, 9, 18)),
+                "refused state not written");
+        assertTrue(untouched[0] != 7.0 || untouched[1] != 7.0 || untouched[2] != 7.0, "state 0 converted");
         e = assertThrows(IllegalArgumentException.class, () -> m.at(0.0, new double[23], 0));
         assertTrue(e.getMessage().contains("offset"), e.getMessage());
         assertThrows(NullPointerException.class, () -> m.toBase(null, 0, states, 0, states, 0, 2));
