@@ -382,46 +382,57 @@ final class Kinematics {
     /**
      * The four fictitious accelerations felt in F by a point at {@code r} with velocity {@code v}
      * seen in F (the state at {@code s}, its acceleration unused): frame {@code -R o''}, Euler
-     * {@code -al x r}, Coriolis {@code -2 w x v}, centrifugal {@code -w x (w x r)}. Built here,
-     * with no scratch array, since every caller wants the four named terms.
+     * {@code -al x r}, Coriolis {@code -2 w x v}, centrifugal {@code -w x (w x r)}. One small
+     * method per term, each small enough for the JIT to inline, so that a caller reading only
+     * the components (the equations of motion) allocates none of the objects.
      */
     static FictitiousAccelerations fictitious(double[] p, double[] s, int so) {
-        double wx = p[RATE];
-        double wy = p[RATE + 1];
-        double wz = p[RATE + 2];
-        double alx = p[RATE_CHANGE];
-        double aly = p[RATE_CHANGE + 1];
-        double alz = p[RATE_CHANGE + 2];
-        double x = s[so];
-        double y = s[so + 1];
-        double z = s[so + 2];
-        double vx = s[so + 3];
-        double vy = s[so + 4];
-        double vz = s[so + 5];
-        double cx = wy * z - wz * y;
-        double cy = wz * x - wx * z;
-        double cz = wx * y - wy * x;
+        return new FictitiousAccelerations(frameTerm(p), eulerTerm(p, s[so], s[so + 1], s[so + 2]),
+                coriolisTerm(p, s[so + 3], s[so + 4], s[so + 5]), centrifugalTerm(p, s[so], s[so + 1], s[so + 2]));
+    }
+
+    /** The frame term {@code -R o''} of the placement {@code p}. */
+    static Vector3D frameTerm(double[] p) {
         double oax = p[6];
         double oay = p[7];
         double oaz = p[8];
-        double fx = -(p[9] * oax + p[10] * oay + p[11] * oaz);
-        double fy = -(p[12] * oax + p[13] * oay + p[14] * oaz);
-        double fz = -(p[15] * oax + p[16] * oay + p[17] * oaz);
-        double ex = -(aly * z - alz * y);
-        double ey = -(alz * x - alx * z);
-        double ez = -(alx * y - aly * x);
-        double kx = -2 * (wy * vz - wz * vy);
-        double ky = -2 * (wz * vx - wx * vz);
-        double kz = -2 * (wx * vy - wy * vx);
-        double gx = -(wy * cz - wz * cy);
-        double gy = -(wz * cx - wx * cz);
-        double gz = -(wx * cy - wy * cx);
-        if (!(Double.isFinite(fx + fy + fz + ex + ey + ez) && Double.isFinite(kx + ky + kz + gx + gy + gz))) {
-            refuseUnlessFinite(fx, fy, fz, ex, ey, ez, 0, 0, 0);
-            refuseUnlessFinite(kx, ky, kz, gx, gy, gz, 0, 0, 0);
+        return term(-(p[9] * oax + p[10] * oay + p[11] * oaz), -(p[12] * oax + p[13] * oay + p[14] * oaz),
+                -(p[15] * oax + p[16] * oay + p[17] * oaz));
+    }
+
+    /** The Euler term {@code -al x r} of the placement {@code p} at {@code r = (x, y, z)}. */
+    static Vector3D eulerTerm(double[] p, double x, double y, double z) {
+        double alx = p[RATE_CHANGE];
+        double aly = p[RATE_CHANGE + 1];
+        double alz = p[RATE_CHANGE + 2];
+        return term(-(aly * z - alz * y), -(alz * x - alx * z), -(alx * y - aly * x));
+    }
+
+    /** The Coriolis term {@code -2 w x v} of the placement {@code p} at {@code v = (vx, vy, vz)}. */
+    static Vector3D coriolisTerm(double[] p, double vx, double vy, double vz) {
+        double wx = p[RATE];
+        double wy = p[RATE + 1];
+        double wz = p[RATE + 2];
+        return term(-2 * (wy * vz - wz * vy), -2 * (wz * vx - wx * vz), -2 * (wx * vy - wy * vx));
+    }
+
+    /** The centrifugal term {@code -w x (w x r)} of the placement {@code p} at {@code r = (x, y, z)}. */
+    static Vector3D centrifugalTerm(double[] p, double x, double y, double z) {
+        double wx = p[RATE];
+        double wy = p[RATE + 1];
+        double wz = p[RATE + 2];
+        double cx = wy * z - wz * y;
+        double cy = wz * x - wx * z;
+        double cz = wx * y - wy * x;
+        return term(-(wy * cz - wz * cy), -(wz * cx - wx * cz), -(wx * cy - wy * cx));
+    }
+
+    /** One term, refused by {@link #notFinite()} unless finite. */
+    private static Vector3D term(double x, double y, double z) {
+        if (!Double.isFinite(x + y + z)) {
+            refuseUnlessFinite(x, y, z, 0, 0, 0, 0, 0, 0);
         }
-        return new FictitiousAccelerations(new Vector3D(fx, fy, fz), new Vector3D(ex, ey, ez),
-                new Vector3D(kx, ky, kz), new Vector3D(gx, gy, gz));
+        return new Vector3D(x, y, z);
     }
 
     /** {@link #compose} with F in B held in registers, G in F at {@code b[bo, bo + 24)}. */
