@@ -55,9 +55,13 @@ public final class LogText {
      * @param line the line as read
      * @param source file or resource name, for messages
      * @param lineNumber 1-based line number
-     * @throws IllegalArgumentException naming source, line and column (1-based character index)
+     * @throws NullPointerException if {@code line} or {@code source} is null
+     * @throws IllegalArgumentException naming source, line and column (1-based character index);
+     *         or, for a caller's error, naming {@code lineNumber} when it is below 1
      */
     public static void checkLine(String line, String source, int lineNumber) {
+        Arguments.nonNull("line", line);
+        checkPosition(source, lineNumber);
         for (int i = 0; i < line.length(); i++) {
             char c = line.charAt(i);
             if (c == '\uFFFD') {
@@ -77,9 +81,13 @@ public final class LogText {
      * @param header the header row
      * @param source file or resource name
      * @param lineNumber 1-based line number
-     * @throws IllegalArgumentException if the row has no comma and holds a semicolon or a tab
+     * @throws NullPointerException if {@code header} or {@code source} is null
+     * @throws IllegalArgumentException if the row has no comma and holds a semicolon or a tab; or,
+     *         for a caller's error, naming {@code lineNumber} when it is below 1
      */
     public static void checkSeparator(String header, String source, int lineNumber) {
+        Arguments.nonNull("header", header);
+        checkPosition(source, lineNumber);
         if (header.indexOf(',') >= 0) {
             return;
         }
@@ -132,13 +140,15 @@ public final class LogText {
      * @param lineNumber 1-based line number
      * @param column name of the column, for the message
      * @return the value
-     * @throws NullPointerException if {@code text} is null
+     * @throws NullPointerException if {@code text}, {@code source} or {@code column} is null
      * @throws IllegalArgumentException naming source, line, column and the (quoted) field; or, for
      *         a caller's error, naming {@code from} or {@code to} when {@code 0 <= from <= to <=
-     *         text.length()} does not hold
+     *         text.length()} does not hold, or {@code lineNumber} when it is below 1
      */
     public static double number(String text, int from, int to, String source, int lineNumber, String column) {
         Arguments.nonNull("text", text);
+        checkPosition(source, lineNumber);
+        Arguments.nonNull("column", column);
         if (from < 0 || from > text.length()) {
             throw new IllegalArgumentException("from must be in [0, " + text.length() + "] for a text of length "
                     + text.length() + ", got " + from);
@@ -162,6 +172,15 @@ public final class LogText {
                     + " is not zero but underflows to zero (smallest 4.9e-324)");
         }
         return v;
+    }
+
+    /** Refuses a null source name or a line number below 1: the caller's error, not the file's. */
+    private static void checkPosition(String source, int lineNumber) {
+        Arguments.nonNull("source", source);
+        if (lineNumber < 1) {
+            throw new IllegalArgumentException("lineNumber must be at least 1 (line numbers are 1-based), got "
+                    + lineNumber);
+        }
     }
 
     /** Whether the mantissa of a decimal literal has a non-zero digit. */

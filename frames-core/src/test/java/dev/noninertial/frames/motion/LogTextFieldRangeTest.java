@@ -42,4 +42,27 @@ class LogTextFieldRangeTest {
         }
         assertThrows(NullPointerException.class, () -> LogText.number(null, 0, 0, "demo.csv", 2, "x"));
     }
+
+    @Test
+    void aLineNumberBelowOneOrAMissingNameIsTheCallersError() {
+        // line numbers are 1-based: 0 and negative numbers would print a position no editor shows
+        for (int line : new int[] {0, -1, Integer.MIN_VALUE}) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                    () -> LogText.number(ROW, 3, 7, "demo.csv", line, "x"));
+            assertEquals("lineNumber must be at least 1 (line numbers are 1-based), got " + line, e.getMessage());
+            e = assertThrows(IllegalArgumentException.class, () -> LogText.checkLine(ROW, "demo.csv", line));
+            assertTrue(e.getMessage().startsWith("lineNumber must be at least 1"), e.getMessage());
+            e = assertThrows(IllegalArgumentException.class, () -> LogText.checkSeparator(ROW, "demo.csv", line));
+            assertTrue(e.getMessage().startsWith("lineNumber must be at least 1"), e.getMessage());
+        }
+        NullPointerException n = assertThrows(NullPointerException.class,
+                () -> LogText.number(ROW, 3, 7, null, 2, "x"));
+        assertTrue(n.getMessage().contains("source"), n.getMessage());
+        n = assertThrows(NullPointerException.class, () -> LogText.number(ROW, 3, 7, "demo.csv", 2, null));
+        assertTrue(n.getMessage().contains("column"), n.getMessage());
+        n = assertThrows(NullPointerException.class, () -> LogText.checkLine(null, "demo.csv", 2));
+        assertTrue(n.getMessage().contains("line"), n.getMessage());
+        n = assertThrows(NullPointerException.class, () -> LogText.checkSeparator(null, "demo.csv", 2));
+        assertTrue(n.getMessage().contains("header"), n.getMessage());
+    }
 }
