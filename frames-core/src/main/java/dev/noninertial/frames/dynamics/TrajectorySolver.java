@@ -458,9 +458,9 @@ public final class TrajectorySolver {
      * Most accepted steps one trajectory stores with their dense output. A run that needs more is
      * refused with a {@link TrajectoryFailure} whose {@link TrajectoryFailure#partial()} holds the
      * steps computed so far, so memory stays bounded instead of growing until the run fails.
-     * Measured 2026-12-02 (test {@code IntegrationFailureTest}, default Dormand-Prince 8(5,3),
-     * heap growth after garbage collection): about 1.3 kB per stored step, so about 265 MB at
-     * the cap.
+     * The memory a stored step takes is measured on the
+     * <a href="../../../../../reliability.html#runs">reliability page</a> (section Integrations that
+     * fail).
      */
     public static final int MAX_STORED_STEPS = 200_000;
 

@@ -53,10 +53,9 @@ import dev.noninertial.geodesy.LocalAxes;
  * limit the step ({@code withMaxStep}) so that trial steps do not probe far below ground.
  *
  * <p>Cost: per call one placement of the frame in the Earth-fixed frame, one geodetic
- * conversion, the atmosphere and the table, on primitives with a per-thread scratch array.
- * Measured with the per-thread allocation counter (2026-12-02, a site frame, steady wind): 80
- * bytes per call, essentially the geodetic position and the result (120 under JMH
- * {@code -prof gc}); see the benchmark page.
+ * conversion, the atmosphere and the table, on primitives with a per-thread scratch array; it
+ * allocates the geodetic position and the result. Its time and allocation are measured on the
+ * <a href="../../../../../benchmarks.html#air">benchmark page</a> (section Air drag).
  *
  * <p>Results are for simulation and analysis only, not for aiming, firing or safety-area
  * decisions; defer to local codes, standards and licensed practice.
