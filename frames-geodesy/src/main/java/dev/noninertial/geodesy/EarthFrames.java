@@ -19,7 +19,7 @@ import dev.noninertial.frames.dynamics.SpecificForce;
 import dev.noninertial.frames.dynamics.TrajectoryEvent;
 import dev.noninertial.frames.motion.Motions;
 import dev.noninertial.geodesy.air.AirDrag;
-import dev.noninertial.geodesy.air.Atmosphere1976;
+import dev.noninertial.geodesy.air.Atmosphere;
 import dev.noninertial.geodesy.air.DragCurve;
 import dev.noninertial.geodesy.air.WindProfile;
 
@@ -309,7 +309,7 @@ public final class EarthFrames implements Serializable {
      * @throws IllegalArgumentException if {@code frame} belongs to another tree or
      *         {@code areaOverMass} is not positive and finite
      */
-    public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, DragCurve dragCurve, double areaOverMass,
+    public AirDrag dragIn(ReferenceFrame frame, Atmosphere air, DragCurve dragCurve, double areaOverMass,
                           WindProfile wind) {
         Arguments.nonNull("dragCurve", dragCurve);
         return AirDrag.of(this, frame, air, dragCurve, areaOverMass, wind);
@@ -327,7 +327,7 @@ public final class EarthFrames implements Serializable {
      * @throws IllegalArgumentException if {@code frame} belongs to another tree or {@code B} is
      *         outside that range
      */
-    public AirDrag dragIn(ReferenceFrame frame, Atmosphere1976 air, double ballisticCoefficient, WindProfile wind) {
+    public AirDrag dragIn(ReferenceFrame frame, Atmosphere air, double ballisticCoefficient, WindProfile wind) {
         return AirDrag.ofBallisticCoefficient(this, frame, air, ballisticCoefficient, wind);
     }
 

@@ -24,7 +24,7 @@ import dev.noninertial.geodesy.LocalAxes;
  * with {@code v_E} the body's velocity seen in the Earth-fixed frame, {@code wind} the air's
  * velocity relative to the Earth ({@link WindProfile}, east-north-up at the point, turned into
  * Earth-fixed axes), {@code h} the geodetic height of the point, {@code rho} and {@code a} the
- * density and speed of sound of the {@link Atmosphere1976}, {@code Cd} from the
+ * density and speed of sound of the {@link Atmosphere} (such as {@link Atmosphere1976}), {@code Cd} from the
  * {@link DragCurve} and {@code A/m} the reference area over the mass.
  *
  * <pre>{@code
@@ -47,9 +47,11 @@ import dev.noninertial.geodesy.LocalAxes;
  * frame ({@code v_frame = R v_ECEF}, {@link Placement#vectorFromBase(Vector3D)}).
  *
  * <h2>Refusals</h2>
- * Heights outside [-5 km, 86 km], Mach numbers outside the drag table and heights outside a
- * layered wind table are refused with an exception that names the value and the range (the
- * {@code TrajectorySolver} reports it with the time and state). Stop runs with a ground event and
+ * Heights outside the atmosphere ([-5 km, 86 km] for {@link Atmosphere1976}), Mach numbers
+ * outside the drag table and heights outside a layered wind table are refused with an exception
+ * that names the value and the range (the {@code TrajectorySolver} reports it with the time and
+ * state). So are, naming the atmosphere and the height, a density from a user's atmosphere that
+ * is negative or not finite and a speed of sound that is not positive and finite. Stop runs with a ground event and
  * limit the step ({@code withMaxStep}) so that trial steps do not probe far below ground.
  *
  * <p>Cost: per call one placement of the frame in the Earth-fixed frame, one geodetic
@@ -76,7 +78,7 @@ public final class AirDrag implements SpecificForce, Serializable {
     /** Shape for the geodetic height. */
     private final Ellipsoid ellipsoid;
     /** Air. */
-    private final Atmosphere1976 air;
+    private final Atmosphere air;
     /** Cd(M). */
     private final DragCurve curve;
     /** Reference area over mass (m^2/kg). */
@@ -84,7 +86,7 @@ public final class AirDrag implements SpecificForce, Serializable {
     /** Wind relative to the Earth. */
     private final WindProfile wind;
 
-    private AirDrag(ReferenceFrame frame, ReferenceFrame earthFixed, Ellipsoid ellipsoid, Atmosphere1976 air,
+    private AirDrag(ReferenceFrame frame, ReferenceFrame earthFixed, Ellipsoid ellipsoid, Atmosphere air,
                     DragCurve curve, double areaOverMass, WindProfile wind) {
         this.frame = frame;
         this.earthFixed = earthFixed;
@@ -109,7 +111,7 @@ public final class AirDrag implements SpecificForce, Serializable {
      *         {@code areaOverMass} is not positive and finite
      * @throws NullPointerException if an argument is null
      */
-    public static AirDrag of(EarthFrames earth, ReferenceFrame frame, Atmosphere1976 air, DragCurve curve,
+    public static AirDrag of(EarthFrames earth, ReferenceFrame frame, Atmosphere air, DragCurve curve,
                              double areaOverMass, WindProfile wind) {
         Arguments.nonNull("earth", earth);
         Arguments.nonNull("frame", frame);
@@ -136,9 +138,9 @@ public final class AirDrag implements SpecificForce, Serializable {
      * @param wind the air's velocity relative to the Earth, east-north-up
      * @return the force
      * @throws IllegalArgumentException if {@code ballisticCoefficient} is out of that range, or as
-     *         {@link #of(EarthFrames, ReferenceFrame, Atmosphere1976, DragCurve, double, WindProfile)}
+     *         {@link #of(EarthFrames, ReferenceFrame, Atmosphere, DragCurve, double, WindProfile)}
      */
-    public static AirDrag ofBallisticCoefficient(EarthFrames earth, ReferenceFrame frame, Atmosphere1976 air,
+    public static AirDrag ofBallisticCoefficient(EarthFrames earth, ReferenceFrame frame, Atmosphere air,
                                                  double ballisticCoefficient, WindProfile wind) {
         Arguments.inRange("ballisticCoefficient (kg/m^2)", ballisticCoefficient, Double.MIN_NORMAL, Double.MAX_VALUE);
         return of(earth, frame, air, DragCurve.constant(1.0), 1.0 / ballisticCoefficient, wind);
@@ -221,11 +223,11 @@ public final class AirDrag implements SpecificForce, Serializable {
         double uz = w[2];
         double h = w[3];
         double speed = Math.sqrt(ux * ux + uy * uy + uz * uz);
-        double rho = air.density(h);
+        double rho = density(h);
         if (speed == 0.0) {
             return Vector3D.ZERO;     // at rest in the air: no drag whatever the coefficient
         }
-        double cd = curve.at(speed / air.speedOfSound(h));
+        double cd = curve.at(speed / speedOfSound(h));
         double k = -0.5 * rho * cd * areaOverMass * speed;
         return p.vectorFromBase(new Vector3D(k * ux, k * uy, k * uz));
     }
@@ -242,7 +244,27 @@ public final class AirDrag implements SpecificForce, Serializable {
         Placement p = placementAt(time, state);
         double[] w = SCRATCH.get();
         airVelocity(p, time, state, w);
-        return Math.sqrt(w[0] * w[0] + w[1] * w[1] + w[2] * w[2]) / air.speedOfSound(w[3]);
+        return Math.sqrt(w[0] * w[0] + w[1] * w[1] + w[2] * w[2]) / speedOfSound(w[3]);
+    }
+
+    /** The atmosphere's density at {@code h}, refused unless finite and not negative. */
+    private double density(double h) {
+        double rho = air.density(h);
+        if (!(rho >= 0.0 && rho <= Double.MAX_VALUE)) {
+            throw new IllegalArgumentException("density of the atmosphere " + air + " at height "
+                    + Formats.number(h) + " m must be finite and not negative, got " + rho + " kg/m^3");
+        }
+        return rho;
+    }
+
+    /** The atmosphere's speed of sound at {@code h}, refused unless positive and finite. */
+    private double speedOfSound(double h) {
+        double a = air.speedOfSound(h);
+        if (!(a > 0.0 && a <= Double.MAX_VALUE)) {
+            throw new IllegalArgumentException("speed of sound of the atmosphere " + air + " at height "
+                    + Formats.number(h) + " m must be positive and finite, got " + a + " m/s");
+        }
+        return a;
     }
 
     /**

@@ -1,7 +1,5 @@
 package dev.noninertial.geodesy.air;
 
-import java.io.Serializable;
-
 /**
  * The U.S. Standard Atmosphere, 1976 (NOAA/NASA/USAF, 1976), lower part: temperature, pressure,
  * density and speed of sound from -5 km to 86 km geometric height, computed from the standard's
@@ -37,7 +35,7 @@ import java.io.Serializable;
  * <p>Heights outside [-5 km, 86 km] are refused, never extrapolated. Immutable and
  * thread-safe; every method computes on primitives and allocates nothing.
  */
-public final class Atmosphere1976 implements Serializable {
+public final class Atmosphere1976 implements Atmosphere {
 
     private static final long serialVersionUID = 1L;
 
@@ -142,6 +140,7 @@ public final class Atmosphere1976 implements Serializable {
      * @return density (kg/m^3)
      * @throws IllegalArgumentException if {@code height} is outside [-5 km, 86 km] or NaN
      */
+    @Override
     public double density(double height) {
         check(height);
         double h = geopotential(height);
@@ -156,6 +155,7 @@ public final class Atmosphere1976 implements Serializable {
      * @return speed of sound (m/s)
      * @throws IllegalArgumentException if {@code height} is outside [-5 km, 86 km] or NaN
      */
+    @Override
     public double speedOfSound(double height) {
         check(height);
         double h = geopotential(height);

@@ -1,6 +1,7 @@
 /**
  * Air and drag near the Earth: the U.S. Standard Atmosphere 1976 ({@link
- * dev.noninertial.geodesy.air.Atmosphere1976}), drag coefficient tables against Mach number
+ * dev.noninertial.geodesy.air.Atmosphere1976}) or an atmosphere of the user's own ({@link
+ * dev.noninertial.geodesy.air.Atmosphere}), drag coefficient tables against Mach number
  * ({@link dev.noninertial.geodesy.air.DragCurve}), wind in local-level axes ({@link
  * dev.noninertial.geodesy.air.WindProfile}) and the drag specific force for any frame of an
  * Earth tree ({@link dev.noninertial.geodesy.air.AirDrag}, made by
