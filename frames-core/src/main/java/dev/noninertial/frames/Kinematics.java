@@ -19,8 +19,9 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
  *
  * <p>One rule for results: every method checks what it writes and throws
  * {@link #notFinite()} (always the same message; the bulk loops add the state it came from) if a
- * value is NaN or infinite, whatever the path that called it; {@link #compose} leaves the check of the finished placement to its
- * callers ({@link #checkFinite}), so that a chain is checked once, after its last link. Ranges are
+ * value is NaN or infinite, whatever the path that called it; {@link #compose} leaves the check
+ * of the finished placement to its callers ({@link #checkFinite}), so that a chain is checked
+ * once, after its last link. Ranges are
  * not checked here: callers validate them with
  * {@link Arguments#fromIndexSize}. Stateless.
  */
@@ -365,16 +366,13 @@ final class Kinematics {
      */
     private static void refuse(double[] source, int nameBase, int i, double x, double y, double z, double vx,
                                double vy, double vz, double ax, double ay, double az) {
-        if (nameBase < 0) {
-            refuseUnlessFinite(x, y, z, vx, vy, vz, ax, ay, az);
-            return;
+        if (nameBase >= 0) {
+            refuseSource(source, nameBase, i);
         }
-        refuseSource(source, nameBase, i);
-        try {
-            refuseUnlessFinite(x, y, z, vx, vy, vz, ax, ay, az);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException(NOT_FINITE + " (state " + (i - nameBase) / PointState.COMPONENTS
-                    + ", source[" + i + "] to source[" + (i + PointState.COMPONENTS - 1) + "])", e);
+        if (!allFinite(x, y, z, vx, vy, vz, ax, ay, az)) {
+            throw nameBase < 0 ? notFinite() : new IllegalArgumentException(NOT_FINITE + " (state "
+                    + (i - nameBase) / PointState.COMPONENTS + ", source[" + i + "] to source["
+                    + (i + PointState.COMPONENTS - 1) + "])");
         }
     }
 
@@ -392,11 +390,17 @@ final class Kinematics {
     /** Throws {@link #notFinite()} unless all nine values are finite (their sum alone overflowed). */
     private static void refuseUnlessFinite(double a, double b, double c, double d, double e, double f,
                                            double g, double h, double k) {
-        if (!(Double.isFinite(a) && Double.isFinite(b) && Double.isFinite(c) && Double.isFinite(d)
-                && Double.isFinite(e) && Double.isFinite(f) && Double.isFinite(g) && Double.isFinite(h)
-                && Double.isFinite(k))) {
+        if (!allFinite(a, b, c, d, e, f, g, h, k)) {
             throw notFinite();
         }
+    }
+
+    /** Whether all nine values are finite. */
+    private static boolean allFinite(double a, double b, double c, double d, double e, double f, double g,
+                                     double h, double k) {
+        return Double.isFinite(a) && Double.isFinite(b) && Double.isFinite(c) && Double.isFinite(d)
+                && Double.isFinite(e) && Double.isFinite(f) && Double.isFinite(g) && Double.isFinite(h)
+                && Double.isFinite(k);
     }
 
     /**
