@@ -79,17 +79,28 @@ public final class SparkFrameConversion {
             throw new IllegalArgumentException("stateColumns must hold " + PointState.COMPONENTS
                     + " names (x, y, z, vx, vy, vz, ax, ay, az), got " + stateColumns.size());
         }
-        if (prefix.isEmpty()) {
-            throw new IllegalArgumentException("prefix must be non-empty, got ''");
-        }
         StructType schema = rows.schema();
+        StructType out = withDoubleColumns(schema, prefix, STATE_SUFFIXES);
         int time = doubleColumn(schema, timeColumn);
         int[] state = new int[PointState.COMPONENTS];
         for (int k = 0; k < state.length; k++) {
             state[k] = doubleColumn(schema, stateColumns.get(k));
         }
+        FramePath path = FramePath.between(from, to);
+        MapPartitionsFunction<Row, Row> convert = input -> new ConvertedRows(input, time, state, path);
+        return rows.mapPartitions(convert, Encoders.row(out));
+    }
+
+    /**
+     * The schema with non-null double columns {@code prefix + suffix} appended, refused unless the
+     * prefix is non-empty and every new name is new.
+     */
+    static StructType withDoubleColumns(StructType schema, String prefix, List<String> suffixes) {
+        if (prefix.isEmpty()) {
+            throw new IllegalArgumentException("prefix must be non-empty, got ''");
+        }
         List<StructField> fields = new ArrayList<>(Arrays.asList(schema.fields()));
-        for (String suffix : STATE_SUFFIXES) {
+        for (String suffix : suffixes) {
             String name = prefix + suffix;
             if (Arrays.asList(schema.fieldNames()).contains(name)) {
                 throw new IllegalArgumentException("prefix must give new column names, '" + name
@@ -97,12 +108,11 @@ public final class SparkFrameConversion {
             }
             fields.add(DataTypes.createStructField(name, DataTypes.DoubleType, false));
         }
-        FramePath path = FramePath.between(from, to);
-        MapPartitionsFunction<Row, Row> convert = input -> new ConvertedRows(input, time, state, path);
-        return rows.mapPartitions(convert, Encoders.row(DataTypes.createStructType(fields)));
+        return DataTypes.createStructType(fields);
     }
 
-    private static int doubleColumn(StructType schema, String name) {
+    /** The index of a column of type double, refused naming the column if missing or of another type. */
+    static int doubleColumn(StructType schema, String name) {
         List<String> names = Arrays.asList(schema.fieldNames());
         int i = names.indexOf(name);
         if (i < 0) {
@@ -223,19 +233,23 @@ public final class SparkFrameConversion {
             if (!hasNext()) {
                 throw new NoSuchElementException("no more rows");
             }
-            Row row = block[next];
-            int width = row.length();
-            Object[] cells = new Object[width + PointState.COMPONENTS];
-            for (int c = 0; c < width; c++) {
-                cells[c] = row.get(c);
-            }
-            int base = next * PointState.COMPONENTS;
-            for (int k = 0; k < PointState.COMPONENTS; k++) {
-                cells[width + k] = states[base + k];
-            }
+            Row row = appended(block[next], states, next * PointState.COMPONENTS, PointState.COMPONENTS);
             block[next] = null;
             next++;
-            return RowFactory.create(cells);
+            return row;
         }
+    }
+
+    /** A new row: every cell of {@code row}, then {@code values[from, from + n)}. */
+    static Row appended(Row row, double[] values, int from, int n) {
+        int width = row.length();
+        Object[] cells = new Object[width + n];
+        for (int c = 0; c < width; c++) {
+            cells[c] = row.get(c);
+        }
+        for (int k = 0; k < n; k++) {
+            cells[width + k] = values[from + k];
+        }
+        return RowFactory.create(cells);
     }
 }

@@ -2,7 +2,8 @@
  * The library on Apache Spark: dispersion studies run as a Dataset of case indices
  * ({@link dev.noninertial.spark.SparkDispersion}) and large track logs converted through a frame
  * tree partition by partition with the allocation-free bulk API
- * ({@link dev.noninertial.spark.SparkFrameConversion}).
+ * ({@link dev.noninertial.spark.SparkFrameConversion}), and the survey quantities of large
+ * gravity-survey logs, line by line ({@link dev.noninertial.spark.SparkSurvey}).
  *
  * <h2>Running</h2>
  * Spark is a {@code provided} dependency: a cluster supplies it, and on one machine the module's
