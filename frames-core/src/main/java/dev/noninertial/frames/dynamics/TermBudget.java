@@ -22,7 +22,7 @@ import dev.noninertial.frames.PointState;
  * <pre>{@code
  * TermBudget budget = TermBudget.of(solver, start, 0.0, 120.0);
  * double coriolisMetres = budget.distance(InertialTerm.CORIOLIS);
- * System.out.println(budget.table());
+ * System.out.println(budget);            // one row per term; budget.toCsv() for a file
  * }</pre>
  *
  * <p><b>Conventions.</b> Shifts are the end position of the run without the term minus the end
@@ -150,15 +150,33 @@ public final class TermBudget {
     }
 
     /**
-     * A readable table: one row per budgeted term with the shift components, its length and the
-     * time shift.
+     * The budget as CSV: a header line, then one line per budgeted term, in the order of
+     * {@link InertialTerm#values()}.
+     *
+     * @return CSV text with columns term, dx_m, dy_m, dz_m, distance_m, dt_s (shift components in
+     *         the integration frame, its length, the time shift), lines separated by '\n'
+     */
+    public String toCsv() {
+        StringBuilder b = new StringBuilder("term,dx_m,dy_m,dz_m,distance_m,dt_s\n");
+        for (InertialTerm term : without.keySet()) {
+            Vector3D d = shift(term);
+            b.append(String.format(Locale.ROOT, "%s,%.9e,%.9e,%.9e,%.9e,%.9e\n", term, d.getX(), d.getY(), d.getZ(),
+                    d.getNorm(), timeShift(term)));
+        }
+        return b.toString();
+    }
+
+    /**
+     * A readable table: the reference end point, then one row per budgeted term with the shift
+     * components, its length and the time shift.
      *
      * @return the table, lines separated by '\n'
      */
-    public String table() {
+    @Override
+    public String toString() {
         StringBuilder b = new StringBuilder();
-        b.append(String.format(Locale.ROOT, "end point with all terms at t = %.6f s in %s\n", reference.time(),
-                reference.frame().path()));
+        b.append(String.format(Locale.ROOT, "Term budget: end point with every term at t = %.6f s in %s\n",
+                reference.time(), reference.frame().path()));
         b.append(String.format(Locale.ROOT, "%-20s %14s %14s %14s %14s %12s\n", "left out", "dx (m)", "dy (m)",
                 "dz (m)", "distance (m)", "dt (s)"));
         for (InertialTerm term : without.keySet()) {
@@ -167,10 +185,5 @@ public final class TermBudget {
                     d.getZ(), d.getNorm(), timeShift(term)));
         }
         return b.toString();
-    }
-
-    @Override
-    public String toString() {
-        return "TermBudget{" + table().replace("\n", "; ") + "}";
     }
 }

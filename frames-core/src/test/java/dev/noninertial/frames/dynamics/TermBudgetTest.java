@@ -39,7 +39,7 @@ class TermBudgetTest {
                 .withTolerance(1e-11, 1e-11, 1e-13)
                 .plusEvent(TrajectoryEvent.groundImpact(Vector3D.PLUS_K, 0.0));
         TermBudget budget = TermBudget.of(solver, PointState.stationary(new Vector3D(0, 0, h)), 0.0, 60.0);
-        System.out.print("MEASURED term budget of a 150 m drop at 49 deg:\n" + budget.table());
+        System.out.print("MEASURED term budget of a 150 m drop at 49 deg:\n" + budget);
 
         double t = Math.sqrt(2 * h / g);
         double c = Math.cos(Math.toRadians(lat));
@@ -60,6 +60,16 @@ class TermBudgetTest {
         assertEquals(north, frame.getY(), 0.01 * north);
         // a constant spin has al = 0: leaving Euler out changes nothing, bit for bit
         assertEquals(0.0, budget.distance(InertialTerm.EULER), 0.0);
+        // the CSV holds the same shifts: header, one line per term in enum order, ten significant
+        // digits (%.9e: relative rounding 5e-10)
+        String[] lines = budget.toCsv().split("\n");
+        assertEquals("term,dx_m,dy_m,dz_m,distance_m,dt_s", lines[0]);
+        assertEquals(1 + InertialTerm.values().length, lines.length);
+        String[] coriolisRow = lines[1 + InertialTerm.CORIOLIS.ordinal()].split(",");
+        assertEquals("CORIOLIS", coriolisRow[0]);
+        assertEquals(coriolis.getX(), Double.parseDouble(coriolisRow[1]), 5e-10 * Math.abs(coriolis.getX()));
+        assertEquals(coriolis.getNorm(), Double.parseDouble(coriolisRow[4]), 5e-10 * coriolis.getNorm());
+        assertTrue(budget.toString().startsWith("Term budget: end point with every term at t = "), budget.toString());
         // centrifugal about the site origin: at most w^2 h for t seconds, w^2 h t^2 / 2 ~ 1.2e-5 m
         assertTrue(budget.distance(InertialTerm.CENTRIFUGAL) < W * W * h * t * t / 2 * 1.01,
                 () -> "centrifugal shift " + budget.distance(InertialTerm.CENTRIFUGAL));
