@@ -61,7 +61,8 @@ public final class LinkAudit {
     }
 
     /**
-     * Audits the site under {@code siteRoot}; files under {@code siteRoot/api} are link targets only.
+     * Audits the site under {@code siteRoot}; files under {@code siteRoot/api} and
+     * {@code siteRoot/api-spark} (the JDK's Javadoc output) are link targets only.
      *
      * @param siteRoot the output folder of the site
      * @return the result
@@ -70,10 +71,11 @@ public final class LinkAudit {
         LinkAudit a = new LinkAudit(siteRoot);
         List<String> broken = new ArrayList<>();
         Path api = a.root.resolve("api");
+        Path sparkApi = a.root.resolve(SiteBuilder.SPARK_API);
         try (Stream<Path> files = Files.walk(a.root)) {
             for (Path f : (Iterable<Path>) files.sorted()::iterator) {
                 String n = f.getFileName().toString();
-                if (!f.startsWith(api) && (n.endsWith(".html") || n.endsWith(".svg") || n.endsWith(".css"))) {
+                if (!f.startsWith(api) && !f.startsWith(sparkApi) && (n.endsWith(".html") || n.endsWith(".svg") || n.endsWith(".css"))) {
                     a.auditFile(f, broken);
                 }
             }

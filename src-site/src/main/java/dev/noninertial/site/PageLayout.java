@@ -138,6 +138,7 @@ public final class PageLayout {
             b.append("</li>\n");
         }
         b.append("<li class=\"api\"><a href=\"api/index.html\">API reference (Javadoc)</a></li>\n")
+         .append("<li class=\"api\"><a href=\"api-spark/index.html\">API reference, frames-spark</a></li>\n")
          .append("</ul>\n</nav>\n</div>\n")
          .append("<footer><p>Results are for simulation and analysis. They are not for aiming weapons, lifting on")
          .append(" moving platforms, human-centrifuge or medical decisions, or primary navigation; local codes and")

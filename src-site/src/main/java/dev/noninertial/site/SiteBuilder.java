@@ -38,6 +38,14 @@ import org.jsoup.nodes.Element;
 public final class SiteBuilder {
 
     /** A code text that names a type, optionally with a member: {@code Placement}, {@code Placement.toBase(...)}. */
+    /**
+     * The module documented by its own Javadoc jar rather than by the site's Javadoc run: it needs
+     * Spark on the class path, which only frames-spark has.
+     */
+    static final String SPARK_MODULE = "frames-spark";
+    /** Where the site holds frames-spark's API reference. */
+    static final String SPARK_API = "api-spark";
+
     private static final Pattern TYPE_REFERENCE = Pattern.compile(
             "([A-Z][A-Za-z0-9]*)(?:[.#][A-Za-z_][A-Za-z0-9_]*(?:\\(.*\\))?)?");
     private static final Pattern PUBLIC_TYPE = Pattern.compile(
@@ -153,6 +161,14 @@ public final class SiteBuilder {
             api.warnings().stream().limit(5).forEach(w -> System.out.println("  " + w));
         }
 
+        Path sparkApi = Path.of(System.getProperty("site.sparkApi", source.resolve("target/spark-apidocs").toString()));
+        if (!Files.isRegularFile(sparkApi.resolve("index.html"))) {
+            throw new IllegalStateException("missing the Javadoc of frames-spark in " + sparkApi + " (unpacked from its"
+                    + " javadoc jar): build the site with the modules it documents, mvn -pl src-site -am package");
+        }
+        copyStatic(sparkApi, output.resolve(SPARK_API));
+        System.out.println("API reference of frames-spark: its Javadoc jar, in " + SPARK_API + "/");
+
         LinkAudit.Result links = LinkAudit.audit(output);
         if (!links.broken().isEmpty()) {
             throw new IllegalStateException(links.broken().size() + " broken link(s) in the site:\n  "
@@ -224,11 +240,17 @@ public final class SiteBuilder {
         return new Page(page.fileName(), page.title(), Markup.html(doc.body()));
     }
 
-    /** Simple name of each public top-level type of the library modules, to its API page; ambiguous names left out. */
+    /**
+     * Simple name of each public top-level type of the library modules (and of frames-spark, whose
+     * reference is its own Javadoc jar in {@link #SPARK_API}), to its API page; ambiguous names left out.
+     */
     static Map<String, String> apiTypes(Path root) throws IOException {
         Map<String, String> found = new TreeMap<>();
         Set<String> ambiguous = new HashSet<>();
-        for (String module : ApiReference.LIBRARY_MODULES) {
+        List<String> modules = new ArrayList<>(ApiReference.LIBRARY_MODULES);
+        modules.add(SPARK_MODULE);
+        for (String module : modules) {
+            String folder = module.equals(SPARK_MODULE) ? SPARK_API + "/" : "api/";
             Path src = root.resolve(module).resolve("src/main/java");
             if (!Files.isDirectory(src)) {
                 continue;
@@ -243,7 +265,7 @@ public final class SiteBuilder {
                     if (!m.find() || !m.group(1).equals(name)) {
                         continue;
                     }
-                    String page = "api/" + src.relativize(f).toString().replace('\\', '/').replace(".java", ".html");
+                    String page = folder + src.relativize(f).toString().replace('\\', '/').replace(".java", ".html");
                     if (found.containsKey(name) && !found.get(name).equals(page)) {
                         ambiguous.add(name);
                     }
