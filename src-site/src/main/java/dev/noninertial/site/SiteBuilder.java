@@ -37,7 +37,6 @@ import org.jsoup.nodes.Element;
  */
 public final class SiteBuilder {
 
-    /** A code text that names a type, optionally with a member: {@code Placement}, {@code Placement.toBase(...)}. */
     /**
      * The module documented by its own Javadoc jar rather than by the site's Javadoc run: it needs
      * Spark on the class path, which only frames-spark has.
@@ -46,6 +45,7 @@ public final class SiteBuilder {
     /** Where the site holds frames-spark's API reference. */
     static final String SPARK_API = "api-spark";
 
+    /** A code text that names a type, optionally with a member: {@code Placement}, {@code Placement.toBase(...)}. */
     private static final Pattern TYPE_REFERENCE = Pattern.compile(
             "([A-Z][A-Za-z0-9]*)(?:[.#][A-Za-z_][A-Za-z0-9_]*(?:\\(.*\\))?)?");
     private static final Pattern PUBLIC_TYPE = Pattern.compile(
