@@ -4,6 +4,7 @@ import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.Serializable;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +21,7 @@ import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.ReferenceFrame;
 import dev.noninertial.frames.motion.SampledMotion;
 import dev.noninertial.frames.sensing.IdealSensor;
+import dev.noninertial.frames.units.Units;
 
 /**
  * A logged track of a ship, aircraft or vehicle: time, geodetic latitude, longitude and height,
@@ -61,6 +63,10 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
     public static final double POLE_MARGIN_DEGREES = 0.01;
     /** Largest step of longitude or heading between consecutive samples (rad), after unwrapping. */
     public static final double MAX_ANGLE_STEP = 0.5 * Math.PI;
+
+    /** The header line of {@link #writeSurveyCsv(EarthFrames, Writer)}. */
+    public static final String SURVEY_HEADER = "t[s],lat[deg],lon[deg],h[m],eotvos[mGal],vertical_acceleration[mGal],"
+            + "reading[m/s^2],normal_gravity[m/s^2]";
 
     private static final long serialVersionUID = 1L;
 
@@ -513,6 +519,57 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
             out.add(survey(earth, gravimeter, sampleTime(i)));
         }
         return out;
+    }
+
+    /**
+     * Writes the survey at every sample ({@link #surveyAtSamples(EarthFrames)}) as CSV, in the
+     * library's log style: two comment lines starting with {@code #} (what was surveyed, with which
+     * model and epoch, and the caution), the header
+     * {@value #SURVEY_HEADER}, then one line per sample. Numbers are written with
+     * {@link Double#toString(double)} (they read back to the same doubles); latitude and longitude
+     * in degrees, the two corrections in mGal (1 mGal = 1e-5 m/s^2), the reading and normal
+     * gravity in m/s^2. The Eotvos correction is to be added to a moving gravimeter's reading,
+     * the vertical acceleration subtracted (see {@link SurveyPoint}).
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param out the destination (flushed, not closed)
+     * @throws IOException if writing fails
+     * @throws IllegalArgumentException as {@link #surveyAtSamples(EarthFrames)}
+     */
+    public void writeSurveyCsv(EarthFrames earth, Writer out) throws IOException {
+        Arguments.nonNull("out", out);
+        List<SurveyPoint> points = surveyAtSamples(earth);
+        StringBuilder b = new StringBuilder();
+        b.append("# survey of ").append(this).append(" with ").append(earth).append('\n');
+        b.append("# for survey processing and analysis, not for primary navigation\n");
+        b.append(SURVEY_HEADER).append('\n');
+        out.write(b.toString());
+        for (SurveyPoint p : points) {
+            b.setLength(0);
+            b.append(p.time()).append(',').append(Math.toDegrees(p.position().latitude())).append(',')
+                    .append(Math.toDegrees(p.position().longitude())).append(',').append(p.position().height())
+                    .append(',').append(p.eotvosCorrection() / Units.MILLIGAL).append(',')
+                    .append(p.verticalAcceleration() / Units.MILLIGAL).append(',').append(p.gravimeterReading())
+                    .append(',').append(p.normalGravity()).append('\n');
+            out.write(b.toString());
+        }
+        out.flush();
+    }
+
+    /**
+     * Writes the survey at every sample as a CSV file (see {@link #writeSurveyCsv(EarthFrames, Writer)}),
+     * UTF-8, replacing the file.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param file the file; its directory must exist
+     * @throws IOException if writing fails
+     * @throws IllegalArgumentException as {@link #surveyAtSamples(EarthFrames)}
+     */
+    public void writeSurveyCsv(EarthFrames earth, Path file) throws IOException {
+        Arguments.nonNull("file", file);
+        try (Writer out = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            writeSurveyCsv(earth, out);
+        }
     }
 
     private SurveyPoint survey(EarthFrames earth, IdealSensor gravimeter, double t) {

@@ -6,12 +6,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.StringReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.ReferenceFrame;
@@ -70,6 +74,37 @@ class GeodeticTrackTest {
             // 1e-9 m/s^2: interpolation of the rates and rounding
             assertEquals(p.normalGravity() - p.eotvosCorrection(), p.gravimeterReading(), 1e-9, p.toString());
             assertEquals(0.0, p.verticalAcceleration(), 1e-9);
+        }
+    }
+
+    @Test
+    void theSurveyCsvHoldsTheRuleOfThumbAndReadsBackToTheSameNumbers(@TempDir Path folder) throws IOException {
+        GeodeticTrack track = GeodeticTrack.readCsv(new StringReader(eastboundLog(30, false)), "line7.csv", 2.0);
+        Path file = folder.resolve("line7-survey.csv");
+        track.writeSurveyCsv(EARTH, file);
+        List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+        assertTrue(lines.get(0).startsWith("# survey of GeodeticTrack{31 samples"), lines.get(0));
+        assertTrue(lines.get(1).contains("not for primary navigation"), lines.get(1));
+        assertEquals(GeodeticTrack.SURVEY_HEADER, lines.get(2));
+        assertEquals(3 + 31, lines.size());
+        List<SurveyPoint> points = track.surveyAtSamples(EARTH);
+        double rule = 7.503 * 10.0 * Math.cos(Math.toRadians(60.0)) + 0.004154 * 100.0;   // common practice, REFERENCES.md
+        for (int i = 0; i < points.size(); i++) {
+            String[] cells = lines.get(3 + i).split(",");
+            assertEquals(8, cells.length, lines.get(3 + i));
+            SurveyPoint p = points.get(i);
+            // Double.toString reads back to the same double: exact
+            assertEquals(p.time(), Double.parseDouble(cells[0]), 0.0);
+            assertEquals(Math.toDegrees(p.position().latitude()), Double.parseDouble(cells[1]), 0.0);
+            assertEquals(Math.toDegrees(p.position().longitude()), Double.parseDouble(cells[2]), 0.0);
+            assertEquals(p.position().height(), Double.parseDouble(cells[3]), 0.0);
+            assertEquals(p.gravimeterReading(), Double.parseDouble(cells[6]), 0.0);
+            assertEquals(p.normalGravity(), Double.parseDouble(cells[7]), 0.0);
+            // the corrections in mGal: the rule of thumb for 10 kn due east at 60 N within 0.01 mGal, no heave
+            assertEquals(rule, Double.parseDouble(cells[4]), 0.01, lines.get(3 + i));
+            assertEquals(0.0, Double.parseDouble(cells[5]), 1e-4, lines.get(3 + i));
+            // latitude as logged: 60 deg to the rounding of the degree-radian round trip
+            assertEquals(60.0, Double.parseDouble(cells[1]), 1e-12);
         }
     }
 
