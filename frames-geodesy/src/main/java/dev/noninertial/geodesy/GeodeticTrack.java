@@ -538,9 +538,63 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      */
     public void writeSurveyCsv(EarthFrames earth, Writer out) throws IOException {
         Arguments.nonNull("out", out);
-        List<SurveyPoint> points = surveyAtSamples(earth);
+        writeSurvey(surveyAtSamples(earth), "# survey of " + this + " with " + earth, out);
+    }
+
+    /**
+     * Writes the filtered survey ({@link #surveyAtSamples(EarthFrames, SurveyFilter)}) as CSV, in
+     * the format of {@link #writeSurveyCsv(EarthFrames, Writer)}; the first comment line names the
+     * filter.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param filter the filter applied to the four survey quantities
+     * @param out the destination (flushed, not closed)
+     * @throws IOException if writing fails
+     * @throws IllegalArgumentException as {@link #surveyAtSamples(EarthFrames, SurveyFilter)}
+     */
+    public void writeSurveyCsv(EarthFrames earth, SurveyFilter filter, Writer out) throws IOException {
+        Arguments.nonNull("out", out);
+        writeSurvey(surveyAtSamples(earth, filter), "# survey of " + this + " with " + earth + ", filtered by "
+                + filter, out);
+    }
+
+    /**
+     * Writes the filtered survey as a CSV file (see {@link #writeSurveyCsv(EarthFrames, SurveyFilter, Writer)}),
+     * UTF-8, replacing the file.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param filter the filter applied to the four survey quantities
+     * @param file the file; its directory must exist
+     * @throws IOException if writing fails
+     * @throws IllegalArgumentException as {@link #surveyAtSamples(EarthFrames, SurveyFilter)}
+     */
+    public void writeSurveyCsv(EarthFrames earth, SurveyFilter filter, Path file) throws IOException {
+        Arguments.nonNull("file", file);
+        try (Writer out = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            writeSurveyCsv(earth, filter, out);
+        }
+    }
+
+    /**
+     * The survey at every sample with its four quantities filtered ({@link SurveyFilter#smooth(List)}):
+     * the samples whose whole kernel lies inside the track, in time order. The track must be
+     * sampled at a constant interval.
+     *
+     * @param earth the Earth frames (the track's times count from its epoch)
+     * @param filter the filter
+     * @return the filtered points, {@code 2 filter.margin(interval)} fewer than the samples
+     * @throws IllegalArgumentException if the track is not sampled at a constant interval, or is
+     *         shorter than the filter's kernel, or as {@link #surveyAtSamples(EarthFrames)}
+     */
+    public List<SurveyPoint> surveyAtSamples(EarthFrames earth, SurveyFilter filter) {
+        Arguments.nonNull("filter", filter);
+        return filter.smooth(surveyAtSamples(earth));
+    }
+
+    /** The CSV of survey points after a first comment line. */
+    private static void writeSurvey(List<SurveyPoint> points, String description, Writer out) throws IOException {
         StringBuilder b = new StringBuilder();
-        b.append("# survey of ").append(this).append(" with ").append(earth).append('\n');
+        b.append(description).append('\n');
         b.append("# for survey processing and analysis, not for primary navigation\n");
         b.append(SURVEY_HEADER).append('\n');
         out.write(b.toString());

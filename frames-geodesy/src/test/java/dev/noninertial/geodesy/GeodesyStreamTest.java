@@ -78,6 +78,15 @@ class GeodesyStreamTest {
     }
 
     @Test
+    void aSurveyFilterWithANegativeSigmaIsRefused() throws Exception {
+        SurveyFilter filter = SurveyFilter.gaussian(12.5);
+        assertEquals(filter, read(bytes(filter)));
+        byte[] bad = patch(bytes(filter), 12.5, -12.5, 0);
+        InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> read(bad));
+        assertTrue(e.getMessage().contains("sigma"), e.getMessage());
+    }
+
+    @Test
     void anEarthModelWithNegativeGmIsRefused() throws IOException {
         byte[] bad = patch(bytes(EarthModel.WGS84), 3.986004418e14, -3.986004418e14, 0);
         InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> read(bad));

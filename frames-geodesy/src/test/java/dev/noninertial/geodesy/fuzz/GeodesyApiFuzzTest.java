@@ -31,6 +31,7 @@ import dev.noninertial.geodesy.GeodeticPath;
 import dev.noninertial.geodesy.GeodeticTrack;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
+import dev.noninertial.geodesy.SurveyFilter;
 import dev.noninertial.geodesy.air.WindProfile;
 import dev.noninertial.geodesy.navigation.LevelNavigator;
 import dev.noninertial.geodesy.navigation.NavigationState;
@@ -69,7 +70,9 @@ class GeodesyApiFuzzTest {
                 new double[] {0.829, 0.829, 0.829}, new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422},
                 10.0), () -> GeodeticTrack.fromArrays(new double[] {0, 1, 2}, new double[] {0.829, 0.829, 0.829},
                 new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
-                new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0));
+                new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0), GeodesyApiFuzzTest::surveyLine);
+        // a Gaussian of 1 s: the 12-sample line at 1 s spans its kernel (11 samples)
+        s.add(SurveyFilter.class, () -> SurveyFilter.gaussian(1.0));
         s.add(WindProfile.Layered.class, () -> (WindProfile.Layered) WindProfile.layered(new double[] {0.0, 1000.0},
                 new double[] {1.0, 2.0}, new double[] {0.0, 1.0}));
         s.add(FramedState.class, () -> ENU.stateAt(0.0, PointState.stationary(new Vector3D(1.0, 2.0, 3.0))));
@@ -84,6 +87,21 @@ class GeodesyApiFuzzTest {
         s.add(SensorIncrements[].class, () -> new SensorIncrements[] {increments()});
         addCalls(s);
         return s;
+    }
+
+    /** A survey line of 12 samples 1 s apart near the site (invented), long enough for a 1 s filter. */
+    private static GeodeticTrack surveyLine() {
+        double[] t = new double[12];
+        double[] lat = new double[12];
+        double[] lon = new double[12];
+        double[] h = new double[12];
+        for (int i = 0; i < 12; i++) {
+            t[i] = i;
+            lat[i] = 0.829;
+            lon[i] = 0.143 + 1e-6 * i;
+            h[i] = 420.0;
+        }
+        return GeodeticTrack.fromArrays(t, lat, lon, h, 2.0);
     }
 
     /** A track log of three samples 1 s apart near the site, with attitude (invented). */
@@ -120,6 +138,7 @@ class GeodesyApiFuzzTest {
                     new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
                     new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0});
         s.addCall("GeodeticTrack.readCsv(Path,double)", () -> new Object[] {trackFile(), 10.0});
+        s.addCall("SurveyFilter.smooth(List)", () -> new Object[] {surveyLine().surveyAtSamples(EARTH)});
         s.addCall("GeodeticTrack.readCsv(Reader,String,double)",
                 () -> new Object[] {new StringReader(TRACK), "demo-track.csv", 10.0});
     }
@@ -135,7 +154,7 @@ class GeodesyApiFuzzTest {
         FuzzReports.write("frames-geodesy", report, (System.nanoTime() - start) * 1e-9);
         assertTrue(report.failures.isEmpty() && report.exposures.isEmpty(), report.details());
         // the valid calls given here are used (the core ones, inherited with its table, are not)
-        assertTrue(report.untabled.stream().noneMatch(k -> k.startsWith("GeodeticTrack.")),
+        assertTrue(report.untabled.stream().noneMatch(k -> k.startsWith("GeodeticTrack.") || k.startsWith("SurveyFilter.")),
                 () -> "valid calls given for no executable: " + report.untabled);
     }
 }
