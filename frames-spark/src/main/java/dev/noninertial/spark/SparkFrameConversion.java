@@ -80,7 +80,7 @@ public final class SparkFrameConversion {
                     + " names (x, y, z, vx, vy, vz, ax, ay, az), got " + stateColumns.size());
         }
         StructType schema = rows.schema();
-        StructType out = withDoubleColumns(schema, prefix, STATE_SUFFIXES);
+        StructType out = withDoubleColumns(schema, prefix, STATE_SUFFIXES, false);
         int time = doubleColumn(schema, timeColumn);
         int[] state = new int[PointState.COMPONENTS];
         for (int k = 0; k < state.length; k++) {
@@ -92,10 +92,10 @@ public final class SparkFrameConversion {
     }
 
     /**
-     * The schema with non-null double columns {@code prefix + suffix} appended, refused unless the
-     * prefix is non-empty and every new name is new.
+     * The schema with double columns {@code prefix + suffix} appended, refused unless the prefix is
+     * non-empty and every new name is new.
      */
-    static StructType withDoubleColumns(StructType schema, String prefix, List<String> suffixes) {
+    static StructType withDoubleColumns(StructType schema, String prefix, List<String> suffixes, boolean nullable) {
         if (prefix.isEmpty()) {
             throw new IllegalArgumentException("prefix must be non-empty, got ''");
         }
@@ -106,7 +106,7 @@ public final class SparkFrameConversion {
                 throw new IllegalArgumentException("prefix must give new column names, '" + name
                         + "' is already a column of " + Arrays.toString(schema.fieldNames()));
             }
-            fields.add(DataTypes.createStructField(name, DataTypes.DoubleType, false));
+            fields.add(DataTypes.createStructField(name, DataTypes.DoubleType, nullable));
         }
         return DataTypes.createStructType(fields);
     }

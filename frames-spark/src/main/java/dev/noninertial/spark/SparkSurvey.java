@@ -11,11 +11,13 @@ import org.apache.spark.sql.Column;
 import org.apache.spark.sql.Dataset;
 import org.apache.spark.sql.Encoders;
 import org.apache.spark.sql.Row;
+import org.apache.spark.sql.RowFactory;
 import org.apache.spark.sql.types.StructType;
 
 import dev.noninertial.frames.Arguments;
 import dev.noninertial.geodesy.EarthFrames;
 import dev.noninertial.geodesy.GeodeticTrack;
+import dev.noninertial.geodesy.SurveyFilter;
 import dev.noninertial.geodesy.SurveyPoint;
 
 /**
@@ -36,7 +38,9 @@ import dev.noninertial.geodesy.SurveyPoint;
  * m/s^2), named {@code prefix} followed by the {@link #SURVEY_SUFFIXES}: the Eotvos correction
  * (to be added to a moving gravimeter's reading), the vertical acceleration {@code d2h/dt2}, the
  * ideal gravimeter's reading and normal gravity. Rows come out grouped by line, each line in
- * time order; the values do not depend on the partitioning (each line is computed whole).
+ * time order; the values do not depend on the partitioning (each line is computed whole). With a
+ * {@link SurveyFilter} the four columns are filtered along each line and null in the rows at each
+ * end where the filter's kernel does not fit.
  *
  * <p>Refusals, on the driver: a missing column, a column of the wrong type, a prefix that is empty
  * or gives an existing name. On the executors (Spark reports them as a failed task whose cause
@@ -77,6 +81,39 @@ public final class SparkSurvey {
      */
     public static Dataset<Row> atSamples(Dataset<Row> rows, String lineColumn, String timeColumn,
             List<String> positionColumns, EarthFrames earth, double maxGap, String prefix) {
+        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, null, prefix);
+    }
+
+    /**
+     * The survey quantities at every row of every line, filtered along each line as
+     * {@link GeodeticTrack#surveyAtSamples(EarthFrames, SurveyFilter)} filters them. Every row is
+     * kept: the four columns are nullable and null in the {@link SurveyFilter#margin(double)} rows
+     * at each end of a line, where the filter's kernel does not fit (nothing is extrapolated).
+     * Each line must be sampled at a constant interval and span the kernel, else the job fails
+     * naming the line.
+     *
+     * @param rows the log; must hold the line column and the four double columns
+     * @param lineColumn name of the column naming the survey line (any type, never null)
+     * @param timeColumn name of the time column (s from {@code earth}'s epoch), double
+     * @param positionColumns names of the latitude (degrees), longitude (degrees) and height (m)
+     *        columns, in that order, doubles
+     * @param earth the Earth frames (model and epoch), shipped to the executors
+     * @param maxGap largest allowed gap between consecutive rows of a line (s), positive and finite
+     * @param filter the filter applied to the four quantities along each line
+     * @param prefix prefix of the four output column names, non-empty, not clashing with an input column
+     * @return the Dataset with the four filtered survey columns appended, grouped by line and in
+     *         time order (lazy)
+     * @throws NullPointerException if an argument is null
+     * @throws IllegalArgumentException as {@link #atSamples(Dataset, String, String, List, EarthFrames, double, String)}
+     */
+    public static Dataset<Row> atSamples(Dataset<Row> rows, String lineColumn, String timeColumn,
+            List<String> positionColumns, EarthFrames earth, double maxGap, SurveyFilter filter, String prefix) {
+        Arguments.nonNull("filter", filter);
+        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, filter, prefix);
+    }
+
+    private static Dataset<Row> survey(Dataset<Row> rows, String lineColumn, String timeColumn,
+            List<String> positionColumns, EarthFrames earth, double maxGap, SurveyFilter filter, String prefix) {
         Arguments.nonNull("rows", rows);
         Arguments.nonNull("lineColumn", lineColumn);
         Arguments.nonNull("timeColumn", timeColumn);
@@ -91,7 +128,7 @@ public final class SparkSurvey {
                     + " in degrees, height in m), got " + positionColumns.size() + ": " + positionColumns);
         }
         StructType schema = rows.schema();
-        StructType out = SparkFrameConversion.withDoubleColumns(schema, prefix, SURVEY_SUFFIXES);
+        StructType out = SparkFrameConversion.withDoubleColumns(schema, prefix, SURVEY_SUFFIXES, filter != null);
         int line = columnIndex(schema, lineColumn);
         int time = SparkFrameConversion.doubleColumn(schema, timeColumn);
         int[] position = new int[3];
@@ -100,10 +137,19 @@ public final class SparkSurvey {
         }
         String lineName = lineColumn;
         MapPartitionsFunction<Row, Row> survey = input -> new SurveyedRows(input, lineName, line, time, position,
-                earth, maxGap);
+                earth, maxGap, filter);
         Column lineKey = rows.col(lineColumn);
         return rows.repartition(lineKey).sortWithinPartitions(lineKey, rows.col(timeColumn))
                 .mapPartitions(survey, Encoders.row(out));
+    }
+
+    /** A new row: every cell of {@code row}, then {@code n} nulls. */
+    private static Row withNulls(Row row, int n) {
+        Object[] cells = new Object[row.length() + n];
+        for (int c = 0; c < row.length(); c++) {
+            cells[c] = row.get(c);
+        }
+        return RowFactory.create(cells);
     }
 
     private static int columnIndex(StructType schema, String name) {
@@ -125,6 +171,10 @@ public final class SparkSurvey {
         private final int[] position;
         private final EarthFrames earth;
         private final double maxGap;
+        /** The filter along each line, or null. */
+        private final SurveyFilter filter;
+        /** Rows without a value at each end of the current line (the filter's margin). */
+        private int margin;
         /** The first row of the next line, read ahead, or null. */
         private Row pending;
         private final List<Row> block = new ArrayList<>();
@@ -132,7 +182,7 @@ public final class SparkSurvey {
         private int next;
 
         SurveyedRows(Iterator<Row> input, String lineColumn, int line, int time, int[] position, EarthFrames earth,
-                     double maxGap) {
+                     double maxGap, SurveyFilter filter) {
             this.input = input;
             this.lineColumn = lineColumn;
             this.line = line;
@@ -140,6 +190,7 @@ public final class SparkSurvey {
             this.position = position;
             this.earth = earth;
             this.maxGap = maxGap;
+            this.filter = filter;
         }
 
         @Override
@@ -192,7 +243,8 @@ public final class SparkSurvey {
             }
             List<SurveyPoint> points;
             try {
-                points = GeodeticTrack.fromArrays(t, lat, lon, h, maxGap).surveyAtSamples(earth);
+                GeodeticTrack track = GeodeticTrack.fromArrays(t, lat, lon, h, maxGap);
+                points = filter == null ? track.surveyAtSamples(earth) : track.surveyAtSamples(earth, filter);
             } catch (IllegalArgumentException e) {
                 throw new IllegalArgumentException(lineColumn + " '" + key + "' (" + n + " rows, samples counted in"
                         + " time order): " + e.getMessage(), e);
@@ -201,7 +253,8 @@ public final class SparkSurvey {
             if (values.length < n * width) {
                 values = new double[n * width];
             }
-            for (int i = 0; i < n; i++) {
+            margin = (n - points.size()) / 2;
+            for (int i = 0; i < points.size(); i++) {
                 SurveyPoint p = points.get(i);
                 values[i * width] = p.eotvosCorrection();
                 values[i * width + 1] = p.verticalAcceleration();
@@ -216,7 +269,10 @@ public final class SparkSurvey {
                 throw new NoSuchElementException("no more rows");
             }
             int width = SURVEY_SUFFIXES.size();
-            Row row = SparkFrameConversion.appended(block.get(next), values, next * width, width);
+            int k = next - margin;
+            Row row = k >= 0 && k < block.size() - 2 * margin
+                    ? SparkFrameConversion.appended(block.get(next), values, k * width, width)
+                    : withNulls(block.get(next), width);
             block.set(next, null);
             next++;
             return row;

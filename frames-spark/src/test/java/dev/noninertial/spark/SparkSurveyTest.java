@@ -25,6 +25,7 @@ import dev.noninertial.frames.units.Units;
 import dev.noninertial.geodesy.EarthFrames;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.GeodeticTrack;
+import dev.noninertial.geodesy.SurveyFilter;
 import dev.noninertial.geodesy.SurveyPoint;
 
 /**
@@ -135,6 +136,53 @@ class SparkSurveyTest {
                 assertEquals(normal - eotvos + vertical, reading, 1e-7, "t " + t);
             }
         }
+    }
+
+    @Test
+    void aFilteredSurveyKeepsEveryRowWithNullsWhereTheKernelDoesNotFit() {
+        List<Row> log = new ArrayList<>(eastbound("line 7", 120, false));
+        log.addAll(eastbound("line 8", 60, true));
+        SurveyFilter filter = SurveyFilter.gaussian(2.0);
+        int m = filter.margin(1.0);   // 10 rows at each end
+        List<Row> out = SparkSurvey.atSamples(shuffled(log, 3), "line", "t", POSITION, EARTH, 2.0, filter, "f_")
+                .collectAsList();
+        assertEquals(log.size(), out.size());
+        Map<String, List<SurveyPoint>> local = new HashMap<>();
+        local.put("line 7", oneMachine(eastbound("line 7", 120, false), filter));
+        local.put("line 8", oneMachine(eastbound("line 8", 60, true), filter));
+        double rule = 7.503 * 10.0 * 0.5 + 0.004154 * 100.0;   // common practice, REFERENCES.md, Gravimetry
+        // the heave 0.8 sin(0.6 t) through the Gaussian: scaled by its Fourier transform exp(-(0.6 sigma)^2 / 2)
+        double gain = Math.exp(-0.5 * Math.pow(0.6 * 2.0, 2));
+        int nulls = 0;
+        for (Row r : out) {
+            String line = r.getString(0);
+            double t = r.getDouble(1);
+            int last = line.equals("line 7") ? 120 : 60;
+            if (t < m || t > last - m) {
+                for (int c = 6; c < 10; c++) {
+                    assertTrue(r.isNullAt(c), "no value where the kernel does not fit: " + r);
+                }
+                nulls++;
+                continue;
+            }
+            SurveyPoint p = local.get(line).get((int) t - m);
+            assertEquals(p.time(), t, 0.0);
+            // the same filter on the same line on one machine: identical bit for bit
+            assertEquals(p.eotvosCorrection(), r.getDouble(6), 0.0);
+            assertEquals(p.verticalAcceleration(), r.getDouble(7), 0.0);
+            assertEquals(p.gravimeterReading(), r.getDouble(8), 0.0);
+            assertEquals(p.normalGravity(), r.getDouble(9), 0.0);
+            assertEquals(rule, Units.toMilligals(r.getDouble(6)), 0.01);
+            if (line.equals("line 8")) {
+                // 0.03 m/s^2 as for the unfiltered heave (interpolation on 1 s samples), before the gain
+                assertEquals(gain * -0.288 * Math.sin(0.6 * t), r.getDouble(7), 0.03, "t " + t);
+            }
+        }
+        assertEquals(2 * 2 * m, nulls);
+    }
+
+    private static List<SurveyPoint> oneMachine(List<Row> rows, SurveyFilter filter) {
+        return filter.smooth(oneMachine(rows));
     }
 
     private static List<SurveyPoint> oneMachine(List<Row> rows) {
