@@ -14,6 +14,8 @@ import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.motion.Motions;
 import dev.noninertial.frames.motion.SampledMotion;
+import dev.noninertial.geodesy.air.Atmosphere1976;
+import dev.noninertial.geodesy.air.SoundingAtmosphere;
 
 /**
  * The quick allocation and speed check that CI runs (through {@code HotPathGateTest} in
@@ -204,6 +206,31 @@ public final class HotPathGate {
         // per call: the scratch of the adaptive quadrature (about 17 kB); nothing per increment
         rows.add(new Allocation("IdealSensor.incrementsOver(grid...) Earth tree, 100 Hz", bytes(mx,
                 () -> sensor.increments(STATES)), STATES, 20_000));
+        // the atmospheres the drag reads at every evaluation: nothing per call
+        Atmosphere1976 standard = Atmosphere1976.standard();
+        double[] levels = new double[23];
+        double[] rho = new double[levels.length];
+        double[] sound = new double[levels.length];
+        for (int i = 0; i < levels.length; i++) {
+            levels[i] = 500.0 * i;
+            rho[i] = standard.density(levels[i]);
+            sound[i] = standard.speedOfSound(levels[i]);
+        }
+        SoundingAtmosphere sounding = SoundingAtmosphere.of(levels, rho, sound);
+        rows.add(new Allocation("Atmosphere1976 density + speedOfSound x STATES", bytes(mx, () -> {
+            double sum = 0;
+            for (int k = 0; k < STATES; k++) {
+                sum += standard.density(11.0 * (k % 1000)) + standard.speedOfSound(11.0 * (k % 1000));
+            }
+            SINK[0] = sum;
+        }), STATES, 0));
+        rows.add(new Allocation("SoundingAtmosphere density + speedOfSound x STATES", bytes(mx, () -> {
+            double sum = 0;
+            for (int k = 0; k < STATES; k++) {
+                sum += sounding.density(11.0 * (k % 1000)) + sounding.speedOfSound(11.0 * (k % 1000));
+            }
+            SINK[0] = sum;
+        }), STATES, 0));
         rows.add(new Allocation("control: one new double[STATES] per call (info: proves the counter)",
                 bytes(mx, () -> CONTROL[0] = new double[STATES]), STATES, -1));
         return rows;

@@ -87,6 +87,18 @@ class GeodesyStreamTest {
     }
 
     @Test
+    void aSoundingWithANegativeSquaredSpeedIsRefused() throws Exception {
+        dev.noninertial.geodesy.air.SoundingAtmosphere air = dev.noninertial.geodesy.air.SoundingAtmosphere.of(
+                new double[] {0.0, 1000.0}, new double[] {1.2, 1.1}, new double[] {340.0, 336.0});
+        assertEquals(air.density(400.0), ((dev.noninertial.geodesy.air.Atmosphere) read(bytes(air))).density(400.0), 0.0);
+        byte[] bad = patch(bytes(air), 336.0 * 336.0, -336.0 * 336.0, 0);
+        InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> read(bad));
+        assertTrue(e.getMessage().contains("squaredSpeeds[1]"), e.getMessage());
+        byte[] unordered = patch(bytes(air), 1000.0, -1.0, 0);
+        assertThrows(InvalidObjectException.class, () -> read(unordered));
+    }
+
+    @Test
     void anEarthModelWithNegativeGmIsRefused() throws IOException {
         byte[] bad = patch(bytes(EarthModel.WGS84), 3.986004418e14, -3.986004418e14, 0);
         InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> read(bad));

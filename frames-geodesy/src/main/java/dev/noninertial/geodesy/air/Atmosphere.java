@@ -4,14 +4,14 @@ import java.io.Serializable;
 
 /**
  * The air at a geometric height: the two properties {@link AirDrag} reads, density and speed of
- * sound. {@link Atmosphere1976} is the library's model; implement this interface for another
- * day (a sounding measured at the site, a hot or cold day of a local standard) and pass it where
- * an atmosphere is asked for.
+ * sound. {@link Atmosphere1976} is the standard day and {@link SoundingAtmosphere} a sounding
+ * measured on the day; implement this interface for another model (a hot or cold day of a local
+ * standard) and pass it where an atmosphere is asked for.
  *
  * <pre>{@code
- * Atmosphere sounding = new Atmosphere() {      // a measured profile of the user's own
- *     public double density(double height) { return table.densityAt(height); }
- *     public double speedOfSound(double height) { return table.speedOfSoundAt(height); }
+ * Atmosphere hotDay = new Atmosphere() {        // a model of the user's own
+ *     public double density(double height) { return model.densityAt(height); }
+ *     public double speedOfSound(double height) { return model.speedOfSoundAt(height); }
  * };
  * }</pre>
  *

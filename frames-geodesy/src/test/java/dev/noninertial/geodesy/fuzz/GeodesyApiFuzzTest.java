@@ -32,6 +32,7 @@ import dev.noninertial.geodesy.GeodeticTrack;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
 import dev.noninertial.geodesy.SurveyFilter;
+import dev.noninertial.geodesy.air.SoundingAtmosphere;
 import dev.noninertial.geodesy.air.WindProfile;
 import dev.noninertial.geodesy.navigation.LevelNavigator;
 import dev.noninertial.geodesy.navigation.NavigationState;
@@ -73,6 +74,9 @@ class GeodesyApiFuzzTest {
                 new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0), GeodesyApiFuzzTest::surveyLine);
         // a Gaussian of 1 s: the 12-sample line at 1 s spans its kernel (11 samples)
         s.add(SurveyFilter.class, () -> SurveyFilter.gaussian(1.0));
+        // a sounding of three levels (invented)
+        s.add(SoundingAtmosphere.class, () -> SoundingAtmosphere.of(new double[] {0.0, 500.0, 1000.0},
+                new double[] {1.2, 1.15, 1.1}, new double[] {340.0, 338.0, 336.0}));
         s.add(WindProfile.Layered.class, () -> (WindProfile.Layered) WindProfile.layered(new double[] {0.0, 1000.0},
                 new double[] {1.0, 2.0}, new double[] {0.0, 1.0}));
         s.add(FramedState.class, () -> ENU.stateAt(0.0, PointState.stationary(new Vector3D(1.0, 2.0, 3.0))));
@@ -138,6 +142,11 @@ class GeodesyApiFuzzTest {
                     new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
                     new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0});
         s.addCall("GeodeticTrack.readCsv(Path,double)", () -> new Object[] {trackFile(), 10.0});
+        s.addCall("SoundingAtmosphere.of(double[],double[],double[])", () -> new Object[] {
+            new double[] {0.0, 500.0, 1000.0}, new double[] {1.2, 1.15, 1.1}, new double[] {340.0, 338.0, 336.0}});
+        s.addCall("SoundingAtmosphere.ofPressureTemperature(double[],double[],double[])", () -> new Object[] {
+            new double[] {0.0, 500.0, 1000.0}, new double[] {101325.0, 95461.0, 89876.0},
+            new double[] {288.15, 284.9, 281.65}});
         s.addCall("SurveyFilter.smooth(List)", () -> new Object[] {surveyLine().surveyAtSamples(EARTH)});
         s.addCall("GeodeticTrack.readCsv(Reader,String,double)",
                 () -> new Object[] {new StringReader(TRACK), "demo-track.csv", 10.0});
@@ -154,7 +163,8 @@ class GeodesyApiFuzzTest {
         FuzzReports.write("frames-geodesy", report, (System.nanoTime() - start) * 1e-9);
         assertTrue(report.failures.isEmpty() && report.exposures.isEmpty(), report.details());
         // the valid calls given here are used (the core ones, inherited with its table, are not)
-        assertTrue(report.untabled.stream().noneMatch(k -> k.startsWith("GeodeticTrack.") || k.startsWith("SurveyFilter.")),
+        assertTrue(report.untabled.stream().noneMatch(k -> k.startsWith("GeodeticTrack.") || k.startsWith("SurveyFilter.")
+                || k.startsWith("SoundingAtmosphere.")),
                 () -> "valid calls given for no executable: " + report.untabled);
     }
 }
