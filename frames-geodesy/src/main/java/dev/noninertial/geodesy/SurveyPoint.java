@@ -35,6 +35,12 @@ public record SurveyPoint(double time, LatLonHeight position, double eotvosCorre
     /**
      * Checks the components.
      *
+     * @param time time (s from the frames' epoch)
+     * @param position geodetic position of the platform
+     * @param eotvosCorrection Eotvos correction, to be added to the reading (m/s^2)
+     * @param verticalAcceleration upward acceleration d2h/dt2 (m/s^2)
+     * @param gravimeterReading upward specific force on the level platform (m/s^2)
+     * @param normalGravity normal gravity at the position, TR8350.2 Eq. 4-3 (m/s^2)
      * @throws NullPointerException if {@code position} is null
      * @throws IllegalArgumentException if a number is not finite
      */

@@ -22,8 +22,8 @@ import javax.tools.ToolProvider;
  * Runs the JDK's own Javadoc tool (in process, through {@link ToolProvider}) over the public
  * packages of the library modules, with every doclint check enabled.
  *
- * <p>Doclint errors fail the site build with their list; warnings are listed and counted, never
- * switched off, so that whoever owns the code can see and fix them.
+ * <p>Doclint errors and warnings are returned with their list, never switched off; the site build
+ * fails on either ({@link SiteBuilder}).
  */
 public final class ApiReference {
 

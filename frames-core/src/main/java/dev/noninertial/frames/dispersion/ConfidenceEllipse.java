@@ -45,6 +45,17 @@ public record ConfidenceEllipse(String xName, String yName, double centreX, doub
      * present, centre and covariance finite, variances and semi-axes non-negative and finite,
      * probability in (0, 1).
      *
+     * @param xName name of the outcome along x
+     * @param yName name of the outcome along y
+     * @param centreX mean of x
+     * @param centreY mean of y
+     * @param semiMajor semi-major axis (units of the outcomes)
+     * @param semiMinor semi-minor axis (units of the outcomes)
+     * @param orientation angle of the major axis from +x toward +y (rad)
+     * @param probability probability held, in (0, 1)
+     * @param covXX variance of x
+     * @param covXY covariance of x and y
+     * @param covYY variance of y
      * @throws NullPointerException if a name is null
      * @throws IllegalArgumentException if a number is out of range
      */

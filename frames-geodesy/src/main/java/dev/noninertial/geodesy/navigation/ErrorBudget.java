@@ -53,6 +53,12 @@ public final class ErrorBudget implements Serializable {
         /**
          * Checks the components.
          *
+         * @param term the term left out
+         * @param horizontalAtEnd horizontal distance from the reference run at the end (m)
+         * @param verticalAtEnd height difference from the reference run at the end, positive up (m)
+         * @param attitudeAtEnd attitude angle from the reference run at the end (rad)
+         * @param peakPosition largest position distance from the reference run over the run (m)
+         * @param peakAttitude largest attitude angle from the reference run over the run (rad)
          * @throws NullPointerException if {@code term} is null
          * @throws IllegalArgumentException if a number is not finite
          */

@@ -46,6 +46,20 @@ public record StepTerms(long step, double start, double end, LocalAxes axes, Vec
      * Checks the components: a step index of at least 0, finite times with {@code end >= start},
      * non-null axes and non-null finite vectors.
      *
+     * @param step index of the step (steps taken before it)
+     * @param start start time of the step (s)
+     * @param end end time of the step (s)
+     * @param axes level axes of the level-frame terms
+     * @param specificForce the body's specific force resolved in the level frame, mean over the step, rotation compensation, sculling and the level frame's turn included (m/s^2, level axes)
+     * @param coriolis Coriolis term {@code -2 w_ie x v} at the step's midpoint (m/s^2, level axes)
+     * @param transportRateTerm transport-rate term {@code -w_en x v} at the midpoint (m/s^2, level axes)
+     * @param gravity normal gravity at the midpoint, centrifugal part included (m/s^2, level axes)
+     * @param coning coning correction added to the delta-angle (rad, body axes)
+     * @param sculling sculling correction of the velocity increment, as a mean acceleration (m/s^2, body axes)
+     * @param rotationCompensation rotation compensation {@code c1 da x dv + c2 da x (da x dv)} of the velocity increment, as a mean acceleration (m/s^2, body axes)
+     * @param sizeEffect size-effect correction of the accelerometer output (m/s^2, body axes)
+     * @param earthRateAngle turn of the level frame with the Earth over the step (rad, level axes)
+     * @param transportRateAngle turn of the level frame over the curved Earth over the step (rad, level axes)
      * @throws NullPointerException if {@code axes} or a vector is null
      * @throws IllegalArgumentException if a component is out of range
      */
