@@ -59,6 +59,17 @@ class HostileStreamTest {
     }
 
     @Test
+    void anIncrementLogWhoseEndsGoBackIsRefused() throws Exception {
+        dev.noninertial.frames.sensing.IncrementLog log = dev.noninertial.frames.sensing.IncrementLog.of(0.0,
+                new double[] {0.25, 0.5}, new double[6], new double[] {0, 0, 1.5e-3, 0, 0, 1.5e-3});
+        Object back = StreamPatch.roundTrip(log);
+        assertTrue(back.toString().contains("2 intervals"), back.toString());
+        byte[] bad = StreamPatch.replaceDouble(StreamPatch.bytes(log), 0.5, 0.125);
+        InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> StreamPatch.read(bad));
+        assertTrue(e.getMessage().contains("after the interval's start"), e.getMessage());
+    }
+
+    @Test
     void aNonFinitePointStateIsRefused() {
         PointState s = PointState.of(new Vector3D(1.25, 2, 3), new Vector3D(4, 5, 6), Vector3D.ZERO);
         byte[] bad = StreamPatch.replaceDouble(StreamPatch.bytes(s), 1.25, Double.NaN);

@@ -19,6 +19,7 @@ import dev.noninertial.frames.Arguments;
 import dev.noninertial.frames.Formats;
 import dev.noninertial.frames.Placement;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.motion.LogTable;
 import dev.noninertial.frames.motion.SampledMotion;
 import dev.noninertial.frames.sensing.IdealSensor;
 import dev.noninertial.frames.units.Units;
@@ -69,10 +70,6 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
             + "reading[m/s^2],normal_gravity[m/s^2]";
 
     private static final long serialVersionUID = 1L;
-
-    /** A plain decimal number: sign, digits with at most one point, optional exponent. */
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
 
     /** Interpolant of (lat, lon, h) as the origin of a sampled motion. */
     private final SampledMotion position;
@@ -139,10 +136,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      *         file and the line
      */
     public static GeodeticTrack readCsv(Path file, double maxGap) throws IOException {
-        Arguments.nonNull("file", file);
-        try (BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return readCsv(in, file.toString(), maxGap);
-        }
+        return fromLog(LogTable.read(file, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
     }
 
     /**
@@ -157,115 +151,32 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      *         source and the line
      */
     public static GeodeticTrack readCsv(Reader source, String sourceName, double maxGap) throws IOException {
-        Arguments.nonNull("source", source);
-        Arguments.nonNull("sourceName", sourceName);
-        BufferedReader in = source instanceof BufferedReader ? (BufferedReader) source : new BufferedReader(source);
-        String[] names = {"t", "lat", "lon", "h", "heading", "pitch", "roll"};
-        String[][] units = {{"s", "ms"}, {"deg", "rad"}, {"deg", "rad"}, {"m", "km", "ft"}, {"deg", "rad"},
-            {"deg", "rad"}, {"deg", "rad"}};
-        // foot: 0.3048 m exactly (international foot, from memory)
-        double[][] factors = {{1, 1e-3}, {Math.PI / 180, 1}, {Math.PI / 180, 1}, {1, 1e3, 0.3048},
-            {Math.PI / 180, 1}, {Math.PI / 180, 1}, {Math.PI / 180, 1}};
-        int[] column = null;
-        double[] factor = null;
-        List<double[]> rows = new ArrayList<>();
-        List<Integer> lines = new ArrayList<>();
-        String line;
-        int number = 0;
-        int fields = 0;
-        while ((line = in.readLine()) != null) {
-            number++;
-            String text = line.trim();
-            if (number == 1 && text.startsWith("\uFEFF")) {
-                text = text.substring(1).trim();
-            }
-            if (text.isEmpty() || text.charAt(0) == '#') {
-                continue;
-            }
-            String[] parts = text.split(",", -1);
-            if (column == null) {
-                column = new int[names.length];
-                factor = new double[names.length];
-                Arrays.fill(column, -1);
-                for (int k = 0; k < parts.length; k++) {
-                    String f = parts[k].trim();
-                    int open = f.indexOf('[');
-                    if (open <= 0 || !f.endsWith("]")) {
-                        throw new IllegalArgumentException(sourceName + " line " + number + " (header), field "
-                                + (k + 1) + ": '" + f + "' must read name[unit], for example lat[deg]");
-                    }
-                    String name = f.substring(0, open).trim();
-                    String unit = f.substring(open + 1, f.length() - 1).trim();
-                    int c = Arrays.asList(names).indexOf(name);
-                    if (c < 0) {
-                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): unknown column '"
-                                + name + "'; known columns: " + String.join(", ", names));
-                    }
-                    if (column[c] >= 0) {
-                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): column '"
-                                + name + "' appears twice");
-                    }
-                    int u = Arrays.asList(units[c]).indexOf(unit);
-                    if (u < 0) {
-                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): unit '" + unit
-                                + "' not allowed for column " + name + "; allowed: " + String.join(", ", units[c]));
-                    }
-                    column[c] = k;
-                    factor[c] = factors[c][u];
-                }
-                for (int c = 0; c < 4; c++) {
-                    if (column[c] < 0) {
-                        throw new IllegalArgumentException(sourceName + " line " + number + " (header): missing column "
-                                + names[c] + "; a track needs t, lat, lon and h");
-                    }
-                }
-                int attitude = (column[4] >= 0 ? 1 : 0) + (column[5] >= 0 ? 1 : 0) + (column[6] >= 0 ? 1 : 0);
-                if (attitude != 0 && attitude != 3) {
-                    throw new IllegalArgumentException(sourceName + " line " + number + " (header): the attitude needs "
-                            + "all of heading, pitch, roll or none");
-                }
-                fields = parts.length;
-                continue;
-            }
-            if (parts.length != fields) {
-                throw new IllegalArgumentException(sourceName + " line " + number + ": expected " + fields
-                        + " comma-separated fields as in the header, got " + parts.length);
-            }
-            double[] row = new double[names.length];
-            for (int c = 0; c < names.length; c++) {
-                if (column[c] < 0) {
-                    continue;
-                }
-                String field = parts[column[c]].trim();
-                if (!DECIMAL.matcher(field).matches()) {
-                    throw new IllegalArgumentException(sourceName + " line " + number + ", column " + names[c] + ": '"
-                            + field + "' is not a decimal number");
-                }
-                double v = Double.parseDouble(field);
-                if (!Double.isFinite(v * factor[c])) {
-                    throw new IllegalArgumentException(sourceName + " line " + number + ", column " + names[c] + ": '"
-                            + field + "' is not finite");
-                }
-                row[c] = v * factor[c];
-            }
-            rows.add(row);
-            lines.add(number);
-        }
-        if (column == null) {
-            throw new IllegalArgumentException(sourceName + ": no header row (expected a line such as "
-                    + "'t[s], lat[deg], lon[deg], h[m]' after the comments)");
-        }
-        int n = rows.size();
-        double[][] cols = new double[names.length][n];
-        for (int i = 0; i < n; i++) {
-            for (int c = 0; c < names.length; c++) {
-                cols[c][i] = rows.get(i)[c];
-            }
-        }
-        boolean attitude = column[4] >= 0;
-        return build(cols[0], cols[1], cols[2], cols[3], attitude ? cols[4] : null, attitude ? cols[5] : null,
-                attitude ? cols[6] : null, maxGap, names, sourceName, i -> sourceName + " line " + lines.get(i));
+        return fromLog(LogTable.read(source, sourceName, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
     }
+
+    /** The columns of the track log and their units (foot: 0.3048 m exactly, the international foot). */
+    private static final List<LogTable.Column> LOG_COLUMNS = List.of(
+            LogTable.Column.of("t", new String[] {"s", "ms"}, new double[] {1, 1e-3}),
+            LogTable.Column.of("lat", new String[] {"deg", "rad"}, new double[] {Math.PI / 180, 1}),
+            LogTable.Column.of("lon", new String[] {"deg", "rad"}, new double[] {Math.PI / 180, 1}),
+            LogTable.Column.of("h", new String[] {"m", "km", "ft"}, new double[] {1, 1e3, 0.3048}),
+            LogTable.Column.of("heading", new String[] {"deg", "rad"}, new double[] {Math.PI / 180, 1}),
+            LogTable.Column.of("pitch", new String[] {"deg", "rad"}, new double[] {Math.PI / 180, 1}),
+            LogTable.Column.of("roll", new String[] {"deg", "rad"}, new double[] {Math.PI / 180, 1}));
+    private static final String LOG_EXAMPLE = "t[s], lat[deg], lon[deg], h[m]";
+
+    private static GeodeticTrack fromLog(LogTable log, double maxGap) {
+        log.requireGroup("track", true, "t", "lat", "lon", "h");
+        log.requireGroup("attitude", false, "heading", "pitch", "roll");
+        boolean attitude = log.has("heading");
+        String name = log.source();
+        return build(log.values("t"), log.values("lat"), log.values("lon"), log.values("h"),
+                attitude ? log.values("heading") : null, attitude ? log.values("pitch") : null,
+                attitude ? log.values("roll") : null, maxGap, FILE_NAMES, name, i -> name + " line " + log.line(i));
+    }
+
+    /** The columns of the file, named in refusals of its rows. */
+    private static final String[] FILE_NAMES = {"t", "lat", "lon", "h", "heading", "pitch", "roll"};
 
     /** The parameters of the array factories, in the order of the file columns, named in refusals. */
     private static final String[] ARRAY_NAMES = {"times", "latitudes", "longitudes", "heights", "headings", "pitches",

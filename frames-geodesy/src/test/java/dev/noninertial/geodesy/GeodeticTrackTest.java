@@ -194,7 +194,11 @@ class GeodeticTrackTest {
         assertRefused(head + "0, 50, 3, 0\n0, 50, 3.001, 0\n", "log.csv line 3", "must be after");
         assertRefused(head + "0, 89.995, 3, 0\n1, 89.996, 3, 0\n", "log.csv line 2", "pole");
         assertRefused(head + "0, 89.9, 3, 0\n1, 89.9, 183, 0\n", "log.csv line 3", "crosses a pole");
-        assertRefused("t[s], lat[deg], lon[deg]\n0, 1, 2\n", "log.csv line 1", "missing column h");
+        assertRefused("t[s], lat[deg], lon[deg]\n0, 1, 2\n", "log.csv line 1", "missing track column(s) h");
+        // the text rules of every log reader (LogTable): separator, NUL, a number leaving the double range
+        assertRefused("t[s]; lat[deg]; lon[deg]; h[m]\n", "log.csv line 1", "semicolons");
+        assertRefused(head + "0, 50, 3, 0\n1, 50, 3.001,\u0000 0\n", "log.csv line 3", "NUL character");
+        assertRefused(head + "0, 50, 3, 1e999\n", "log.csv line 2, column h", "overflows");
         assertRefused("t[s], lat[deg], lon[deg], h[furlong]\n", "log.csv line 1", "unit 'furlong'");
         assertRefused("t[s], lat[deg], lon[deg], h[m], heading[deg]\n", "log.csv line 1", "heading, pitch, roll");
         assertRefused(head + "0, 50, 3, 0\n", "at least 2", "");

@@ -85,22 +85,7 @@ final class MotionLogFile {
     static MotionLogFile read(Path file) throws IOException {
         // two passes: count the rows first, then parse into arrays of their final size, so the
         // peak memory stays near the result (no growth copies, no final trimming copy)
-        int rows = 0;
-        try (BufferedReader in = LogText.open(file)) {
-            String line;
-            boolean header = false;
-            while ((line = in.readLine()) != null) {
-                String trimmed = line.trim();
-                if (trimmed.isEmpty() || trimmed.charAt(0) == '#') {
-                    continue;
-                }
-                if (header) {
-                    rows++;
-                } else {
-                    header = true;
-                }
-            }
-        }
+        int rows = LogTable.countRows(file);
         try (BufferedReader in = LogText.open(file)) {
             return parse(in, file.toString(), Math.max(rows, 2));
         }
@@ -141,14 +126,12 @@ final class MotionLogFile {
         int[] slot = new int[Column.values().length];
         boolean ypr = false;
         double[] row = new double[Column.values().length];
+        String[] names = null;
+        double[] fields = null;
         while ((line = in.readLine()) != null) {
             lineNumber++;
-            if (lineNumber == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') {
-                line = line.substring(1);
-            }
-            LogText.checkLine(line, source, lineNumber);
-            String trimmed = line.trim();
-            if (trimmed.isEmpty() || trimmed.charAt(0) == '#') {
+            String trimmed = LogTable.content(line, source, lineNumber);
+            if (trimmed == null) {
                 continue;
             }
             if (columns == null) {
@@ -160,6 +143,11 @@ final class MotionLogFile {
                     slot[columns[c].ordinal()] = c;
                 }
                 factors = unitFactors(trimmed, columns, source, lineNumber);
+                names = new String[columns.length];
+                fields = new double[columns.length];
+                for (int c = 0; c < columns.length; c++) {
+                    names[c] = columns[c].label;
+                }
                 ypr = slot[Column.YAW.ordinal()] >= 0;
                 if (slot[Column.VX.ordinal()] >= 0) {
                     vel = new double[3 * capacity];
@@ -169,7 +157,11 @@ final class MotionLogFile {
                 }
                 continue;
             }
-            parseRow(trimmed, columns, factors, row, source, lineNumber);
+            // LogTable's row rule, then each field to its column's slot
+            LogTable.parseFields(trimmed, names, factors, fields, source, lineNumber);
+            for (int c = 0; c < columns.length; c++) {
+                row[columns[c].ordinal()] = fields[c];
+            }
             if (n == capacity) {
                 capacity = capacity + (capacity >> 1) + 1;
                 t = Arrays.copyOf(t, capacity);
@@ -311,34 +303,6 @@ final class MotionLogFile {
             factors[k] = kind.factors[u];
         }
         return factors;
-    }
-
-    /** Parses one sample row into {@code row}, indexed by column ordinal, in SI units. */
-    private static void parseRow(String text, Column[] columns, double[] factors, double[] row,
-                                 String source, int lineNumber) {
-        int start = 0;
-        int length = text.length();
-        for (int k = 0; k < columns.length; k++) {
-            int comma = text.indexOf(',', start);
-            if (k < columns.length - 1 && comma < 0) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + ": expected " + columns.length
-                        + " comma-separated fields as in the header, got " + (k + 1));
-            }
-            if (k == columns.length - 1 && comma >= 0) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + ": expected " + columns.length
-                        + " comma-separated fields as in the header, got more");
-            }
-            int stop = comma < 0 ? length : comma;
-            double parsed = LogText.number(text, start, stop, source, lineNumber, columns[k].label);
-            double value = parsed * factors[k];
-            if (!Double.isFinite(value) || (value == 0.0 && parsed != 0.0)) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + ", column " + columns[k].label
-                        + " (character " + (start + 1) + "): value " + LogText.quoted(text.substring(start, stop).trim())
-                        + " leaves the double range in SI units");
-            }
-            row[columns[k].ordinal()] = value;
-            start = stop + 1;
-        }
     }
 
     /** Exact powers of ten up to 1e22, the largest exactly representable in a double. */

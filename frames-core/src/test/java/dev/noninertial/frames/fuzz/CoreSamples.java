@@ -41,6 +41,8 @@ import dev.noninertial.frames.dynamics.SpecificForce;
 import dev.noninertial.frames.dynamics.Trajectory;
 import dev.noninertial.frames.dynamics.TrajectoryFailure;
 import dev.noninertial.frames.dynamics.TrajectorySolver;
+import dev.noninertial.frames.sensing.IncrementLog;
+import dev.noninertial.frames.motion.LogTable;
 import dev.noninertial.frames.motion.Motions;
 import dev.noninertial.frames.motion.SampledMotion;
 
@@ -70,10 +72,15 @@ public final class CoreSamples {
     }
 
     private static Path logFile() {
+        return textFile(LOG);
+    }
+
+    /** A temporary file holding {@code text}, deleted when the JVM exits. */
+    private static Path textFile(String text) {
         try {
             Path p = Files.createTempFile("fuzz-log", ".csv");
             p.toFile().deleteOnExit();
-            Files.writeString(p, LOG, StandardCharsets.UTF_8);
+            Files.writeString(p, text, StandardCharsets.UTF_8);
             return p;
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -150,6 +157,10 @@ public final class CoreSamples {
                 () -> TrajectorySolver.of(ROOT).withMaxEvaluations(20_000));
         s.add(String[].class, () -> new String[] {"y"});
         s.add(Vector3D[].class, () -> new Vector3D[] {new Vector3D(1, 2, 3), new Vector3D(0.1, 0, 0)});
+        // logs: a two-column table (invented) and the increments of two 10 ms intervals
+        s.add(LogTable.Column.class, () -> LogTable.Column.of("t", new String[] {"s"}, new double[] {1.0}));
+        s.add(LogTable.class, CoreSamples::table2);
+        s.add(IncrementLog.class, () -> IncrementLog.ofUniform(0.0, 0.01, ramp(12)));
         s.add(DispersionStudy.class, CoreSamples::study);
         s.add(DispersionResult.class, () -> study().run());
         s.add(DispersionCase.class, () -> study().drawCase(3));
@@ -196,7 +207,32 @@ public final class CoreSamples {
      * offsets and counts that fit the arrays, times inside every sample motion's span [0, 2] s,
      * motions continuous at their join, a field inside its line.
      */
+    /** The table of the invented two-column log {@code t[s], x[m]}. */
+    private static LogTable table2() {
+        try {
+            return LogTable.read(new StringReader(TABLE_LOG), "demo-table.csv", TABLE_COLUMNS, "t[s], x[m]");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static final String TABLE_LOG = "t[s], x[m]\n0, 1.5\n1, 2.5\n";
+    private static final List<LogTable.Column> TABLE_COLUMNS = List.of(
+            LogTable.Column.of("t", new String[] {"s"}, new double[] {1.0}),
+            LogTable.Column.of("x", new String[] {"m", "km"}, new double[] {1.0, 1e3}));
+    private static final String INCREMENT_LOG = IncrementLog.HEADER + "\n0, 0.01, 0, 0, 0.098, 0, 0, 1e-4\n";
+
     private static void addCalls(SampleValues s) {
+        s.addCall("LogTable.Column.of(String,String[],double[])",
+                () -> new Object[] {"h", new String[] {"m", "ft"}, new double[] {1.0, 0.3048}});
+        s.addCall("LogTable.read(Reader,String,List,String)",
+                () -> new Object[] {new StringReader(TABLE_LOG), "demo-table.csv", TABLE_COLUMNS, "t[s], x[m]"});
+        s.addCall("LogTable.read(Path,List,String)", () -> new Object[] {textFile(TABLE_LOG), TABLE_COLUMNS, "t[s], x[m]"});
+        s.addCall("IncrementLog.of(double,double[],double[],double[])",
+                () -> new Object[] {0.0, new double[] {0.01, 0.02}, ramp(6), ramp(6)});
+        s.addCall("IncrementLog.readCsv(Reader,String)",
+                () -> new Object[] {new StringReader(INCREMENT_LOG), "demo-imu.csv"});
+        s.addCall("IncrementLog.readCsv(Path)", () -> new Object[] {textFile(INCREMENT_LOG)});
         // two states from index 0 of the times and the source, written from index 9 of the target
         // (room for one more state before them), the times inside [0, 2] s
         for (String direction : new String[] {"toBase", "fromBase"}) {

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.noninertial.frames.Arguments;
+import dev.noninertial.frames.sensing.IncrementLog;
 import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.LatLonHeight;
@@ -458,6 +459,23 @@ public final class LevelNavigator implements Serializable {
      */
     public NavigationState run(NavigationState start, double[] ends, double[] deltaVelocities, double[] deltaAngles) {
         return run(start, ends, deltaVelocities, deltaAngles, null);
+    }
+
+    /**
+     * Navigates a logged run of increments ({@link IncrementLog}, read from a file or written by
+     * the library's sensors), allocating nothing per step.
+     *
+     * @param start the state at the start of the log's first interval, in this navigator's axes
+     * @param log the increments, body axes
+     * @return the state at the end of the log's last interval
+     * @throws IllegalArgumentException if the log does not start at the state's time (within 1e-9
+     *         s, relative above 1 s), or for a refused step (named in the message)
+     */
+    public NavigationState run(NavigationState start, IncrementLog log) {
+        Arguments.nonNull("start", start);
+        Arguments.nonNull("log", log);
+        checkStart(start, log.increment(0));
+        return run(start, log.ends(), log.deltaVelocities(), log.deltaAngles());
     }
 
     /**

@@ -17,6 +17,7 @@ import dev.noninertial.frames.FramedState;
 import dev.noninertial.frames.Orientations;
 import dev.noninertial.frames.PointState;
 import dev.noninertial.frames.ReferenceFrame;
+import dev.noninertial.frames.sensing.IncrementLog;
 import dev.noninertial.frames.sensing.SensorIncrements;
 import dev.noninertial.frames.fuzz.ApiFuzz;
 import dev.noninertial.frames.fuzz.CoreSamples;
@@ -89,6 +90,7 @@ class GeodesyApiFuzzTest {
         s.add(NavigationState.class, () -> AT_REST);
         s.add(SensorIncrements.class, GeodesyApiFuzzTest::increments);
         s.add(SensorIncrements[].class, () -> new SensorIncrements[] {increments()});
+        s.add(IncrementLog.class, () -> IncrementLog.ofUniform(-0.5, 0.5, new double[] {0.0, 0.0, 4.9, 5e-5, 0.0, 0.0}));
         addCalls(s);
         return s;
     }

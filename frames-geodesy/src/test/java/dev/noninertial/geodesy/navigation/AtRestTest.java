@@ -1,14 +1,20 @@
 package dev.noninertial.geodesy.navigation;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 import dev.noninertial.frames.Orientations;
+import dev.noninertial.frames.sensing.IncrementLog;
 import dev.noninertial.geodesy.EarthModel;
 import dev.noninertial.geodesy.LatLonHeight;
 import dev.noninertial.geodesy.LocalAxes;
@@ -59,6 +65,38 @@ class AtRestTest {
             // with the vertical channel's instability): 1e-9 rad is far above that, far below any term
             assertTrue(turn < 1e-9, "attitude " + turn + " rad");
         }
+    }
+
+    @Test
+    void aLoggedStandstillReadBackFromItsFileStaysPut(@TempDir Path folder) throws IOException {
+        EarthModel model = EarthModel.WGS84;
+        LatLonHeight site = LatLonHeight.ofDegrees(47.3, 8.6, 450.0);   // invented site
+        Rotation r = Orientations.fromYawPitchRoll(1.1, 0.05, -0.03);
+        Vector3D dv = r.applyTo(model.normalGravityIn(site, LocalAxes.NED).negate()).scalarMultiply(0.01);
+        Vector3D da = r.applyTo(model.earthRateIn(site.latitude(), LocalAxes.NED)).scalarMultiply(0.01);
+        int n = 60_000;   // 10 min at 100 Hz
+        double[] packed = new double[6 * n];
+        for (int k = 0; k < n; k++) {
+            double[] one = {dv.getX(), dv.getY(), dv.getZ(), da.getX(), da.getY(), da.getZ()};
+            System.arraycopy(one, 0, packed, 6 * k, 6);
+        }
+        IncrementLog written = IncrementLog.ofUniform(100.0, 0.01, packed);
+        Path file = folder.resolve("standstill-imu.csv");
+        written.writeCsv(file);
+        IncrementLog log = IncrementLog.readCsv(file);
+        LevelNavigator nav = LevelNavigator.of(model, LocalAxes.NED);
+        NavigationState start = NavigationState.of(100.0, site, Vector3D.ZERO, LocalAxes.NED, r);
+        NavigationState end = nav.run(start, log);
+        // the physical invariant of the test above: at rest the terms cancel; the same bar, 1 mm
+        double drift = Truth.ecef(end.position()).distance(Truth.ecef(site));
+        assertTrue(drift < 1e-3, "drift " + drift + " m");
+        // the file holds the same doubles: the same run as from the arrays, bit for bit
+        NavigationState fromArrays = nav.run(start, written.ends(), written.deltaVelocities(), written.deltaAngles());
+        assertEquals(fromArrays.position(), end.position());
+        assertEquals(fromArrays.velocity(), end.velocity());
+        IllegalArgumentException late = assertThrows(IllegalArgumentException.class,
+                () -> nav.run(NavigationState.of(101.0, site, Vector3D.ZERO, LocalAxes.NED, r), log));
+        assertTrue(late.getMessage().contains("increments start at 100.0 s, the state is at 101.0 s"), late.getMessage());
     }
 
     /** The same body attitude over ENU axes: R_enu = R_ned M, M mapping ENU to NED components. */
