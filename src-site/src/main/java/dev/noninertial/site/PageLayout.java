@@ -27,7 +27,7 @@ public final class PageLayout {
     /** Pages listed first, in this order; any other page follows in file-name order. */
     static final List<String> PREFERRED_ORDER = List.of("index.html", "install.html", "conventions.html",
             "examples.html", "earth.html", "dynamics.html", "sampled-motion.html", "uncertainty.html",
-            "navigation.html", "accuracy.html", "benchmarks.html");
+            "navigation.html", "files.html", "accuracy.html", "benchmarks.html");
 
     /** Pages listed last, in this order, after the guide. */
     static final List<String> CLOSING_ORDER = List.of("references.html", "changelog.html", "source.html",

@@ -202,11 +202,6 @@ public final class CoreSamples {
         return s;
     }
 
-    /**
-     * Valid calls whose arguments must agree with each other (see {@link SampleValues#addCall}):
-     * offsets and counts that fit the arrays, times inside every sample motion's span [0, 2] s,
-     * motions continuous at their join, a field inside its line.
-     */
     /** The table of the invented two-column log {@code t[s], x[m]}. */
     private static LogTable table2() {
         try {
@@ -222,6 +217,11 @@ public final class CoreSamples {
             LogTable.Column.of("x", new String[] {"m", "km"}, new double[] {1.0, 1e3}));
     private static final String INCREMENT_LOG = IncrementLog.HEADER + "\n0, 0.01, 0, 0, 0.098, 0, 0, 1e-4\n";
 
+    /**
+     * Valid calls whose arguments must agree with each other (see {@link SampleValues#addCall}):
+     * offsets and counts that fit the arrays, times inside every sample motion's span [0, 2] s,
+     * motions continuous at their join, a field inside its line.
+     */
     private static void addCalls(SampleValues s) {
         s.addCall("LogTable.Column.of(String,String[],double[])",
                 () -> new Object[] {"h", new String[] {"m", "ft"}, new double[] {1.0, 0.3048}});
