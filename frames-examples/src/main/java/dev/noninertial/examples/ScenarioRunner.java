@@ -9,8 +9,9 @@ import java.util.List;
 /**
  * Runs the worked scenarios (invented places and vessels) and prints readable tables with units:
  * the Earth's rotation at a site and the gravity-versus-gravitation pitfall, the inertial
- * accelerations at the crane hook of a rolling, pitching, heaving ship under way, and a long-range
- * drag-free trajectory with and without the Earth's rotation.
+ * accelerations at the crane hook of a rolling, pitching, heaving ship under way, a long-range
+ * drag-free trajectory with and without the Earth's rotation, ideal sensor triads, a survey
+ * drone's navigation and a marine gravity-survey line.
  *
  * <p>Usage: {@code ScenarioRunner [--out DIR]}; with {@code --out} every table is also written as
  * {@code DIR/NAME.csv} (the directory is created if needed), and the inertial terms at the crane
@@ -58,6 +59,7 @@ public final class ScenarioRunner {
                 ShipCraneScenario.run(setting), LongRangeScenario.run(setting)));
         tables.addAll(SensorTruthScenario.run(setting));
         tables.addAll(List.of(SurveyFlightScenario.run(setting)));
+        tables.add(GravitySurveyScenario.run(setting));
         if (out != null) {
             Files.createDirectories(out);
         }
