@@ -26,7 +26,7 @@ class GravitySurveyScenarioTest {
             assertEquals(rule, eotvos, 0.01, "t " + row[0]);
             // filtered: the heave (gain exp(-(0.6 sigma)^2 / 2) = 1e-10 for sigma = 11.2 s) is gone and
             // 1 cm of white height noise at 0.1 s keeps an RMS of s sqrt(h) sqrt(3 / (8 sqrt(pi) sigma^5))
-            // = 0.34 mGal (derived on the site's sensors page); 5 times that per row
+            // = 0.34 mGal (the derivation is in SurveyFilterTest of frames-geodesy); 5 times that per row
             assertTrue(Math.abs(filtered) < 1.7, "filtered d2h/dt2 " + filtered + " mGal at t " + row[0]);
             rawSquares += raw * raw;
             // physical invariant, first order: reading = normal - Eotvos + d2h/dt2, 0.01 mGal
