@@ -12,7 +12,7 @@ track.writeSurveyCsv(earth, folder.resolve("line7-survey.csv"));
 Files.readAllLines(folder.resolve("line7-survey.csv")).stream().limit(7).forEach(System.out::println);
 System.out.println("heave acceleration at t = 0.2 s, analytic: " + Units.toMilligals(-0.8 * 0.36 * Math.sin(0.12)) + " mGal");
 // the heave is noise to a survey: a Gaussian filter that halves a 30 s period leaves 0.3 % of it
-var filter = SurveyFilter.gaussianOfHalfGainPeriod(30.0);
+var filter = SurveyFilter.ofHalfGainPeriod(30.0);
 track.writeSurveyCsv(earth, filter, folder.resolve("line7-filtered.csv"));
 Files.readAllLines(folder.resolve("line7-filtered.csv")).stream().skip(2).limit(2).forEach(System.out::println);
 System.out.println(filter + ", gain at the heave's 0.6 rad/s: " + filter.gainAt(0.6 / (2 * Math.PI)));

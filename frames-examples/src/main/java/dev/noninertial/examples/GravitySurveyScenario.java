@@ -28,7 +28,7 @@ final class GravitySurveyScenario {
     /** Height noise of the log (m), one standard deviation. */
     static final double NOISE = 0.01;
     /** The filter: half the amplitude at a 60 s period. */
-    static final SurveyFilter FILTER = SurveyFilter.gaussianOfHalfGainPeriod(60.0);
+    static final SurveyFilter FILTER = SurveyFilter.ofHalfGainPeriod(60.0);
 
     private GravitySurveyScenario() {
     }

@@ -136,7 +136,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      *         file and the line
      */
     public static GeodeticTrack readCsv(Path file, double maxGap) throws IOException {
-        return fromLog(LogTable.read(file, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
+        return fromLog(LogTable.readCsv(file, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
     }
 
     /**
@@ -151,7 +151,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      *         source and the line
      */
     public static GeodeticTrack readCsv(Reader source, String sourceName, double maxGap) throws IOException {
-        return fromLog(LogTable.read(source, sourceName, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
+        return fromLog(LogTable.readCsv(source, sourceName, LOG_COLUMNS, LOG_EXAMPLE), maxGap);
     }
 
     /** The columns of the track log and their units (foot: 0.3048 m exactly, the international foot). */
@@ -487,7 +487,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
     }
 
     /**
-     * The survey at every sample with its four quantities filtered ({@link SurveyFilter#smooth(List)}):
+     * The survey at every sample with its four quantities filtered ({@link SurveyFilter#applyTo(List)}):
      * the samples whose whole kernel lies inside the track, in time order. The track must be
      * sampled at a constant interval.
      *
@@ -499,7 +499,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
      */
     public List<SurveyPoint> surveyAtSamples(EarthFrames earth, SurveyFilter filter) {
         Arguments.nonNull("filter", filter);
-        return filter.smooth(surveyAtSamples(earth));
+        return filter.applyTo(surveyAtSamples(earth));
     }
 
     /** The CSV of survey points after a first comment line. */

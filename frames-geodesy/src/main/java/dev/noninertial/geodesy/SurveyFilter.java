@@ -52,7 +52,7 @@ public final class SurveyFilter implements Serializable {
      * @return the filter
      * @throws IllegalArgumentException if {@code sigma} is not positive and finite
      */
-    public static SurveyFilter gaussian(double sigma) {
+    public static SurveyFilter ofSigma(double sigma) {
         Arguments.positive("sigma (s)", sigma);
         return new SurveyFilter(sigma);
     }
@@ -65,7 +65,7 @@ public final class SurveyFilter implements Serializable {
      * @return the filter
      * @throws IllegalArgumentException if {@code period} is not positive and finite
      */
-    public static SurveyFilter gaussianOfHalfGainPeriod(double period) {
+    public static SurveyFilter ofHalfGainPeriod(double period) {
         Arguments.positive("period (s)", period);
         return new SurveyFilter(period * Math.sqrt(2.0 * Math.log(2.0)) / (2.0 * Math.PI));
     }
@@ -126,7 +126,7 @@ public final class SurveyFilter implements Serializable {
      * @throws IllegalArgumentException if the lengths differ, the interval is not constant or
      *         exceeds sigma, a value is not finite, or the series is shorter than the kernel
      */
-    public double[] smooth(double[] times, double[] values) {
+    public double[] applyTo(double[] times, double[] values) {
         Arguments.nonNull("times", times);
         Arguments.nonNull("values", values);
         if (values.length != times.length) {
@@ -149,9 +149,9 @@ public final class SurveyFilter implements Serializable {
      *
      * @param points a line's survey points in time order, at a constant interval
      * @return the filtered points at the samples {@code margin .. n - 1 - margin}
-     * @throws IllegalArgumentException as {@link #smooth(double[], double[])}
+     * @throws IllegalArgumentException as {@link #applyTo(double[], double[])}
      */
-    public List<SurveyPoint> smooth(List<SurveyPoint> points) {
+    public List<SurveyPoint> applyTo(List<SurveyPoint> points) {
         Arguments.nonNull("points", points);
         int n = points.size();
         double[] t = new double[n];

@@ -79,7 +79,7 @@ class GeodesyStreamTest {
 
     @Test
     void aSurveyFilterWithANegativeSigmaIsRefused() throws Exception {
-        SurveyFilter filter = SurveyFilter.gaussian(12.5);
+        SurveyFilter filter = SurveyFilter.ofSigma(12.5);
         assertEquals(filter, read(bytes(filter)));
         byte[] bad = patch(bytes(filter), 12.5, -12.5, 0);
         InvalidObjectException e = assertThrows(InvalidObjectException.class, () -> read(bad));

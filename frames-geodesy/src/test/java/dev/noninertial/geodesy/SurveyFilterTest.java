@@ -32,7 +32,7 @@ class SurveyFilterTest {
 
     @Test
     void aSinusoidIsScaledByTheGaussiansFourierTransform() {
-        SurveyFilter filter = SurveyFilter.gaussian(20.0);
+        SurveyFilter filter = SurveyFilter.ofSigma(20.0);
         double f = 0.01;   // a 100 s period
         // textbook transform of the unit-sum Gaussian at f
         double expected = Math.exp(-0.5 * Math.pow(2 * Math.PI * f * 20.0, 2));
@@ -42,7 +42,7 @@ class SurveyFilterTest {
         for (int i = 0; i < t.length; i++) {
             y[i] = Math.sin(2 * Math.PI * f * t[i] + 0.3);
         }
-        double[] out = filter.smooth(t, y);
+        double[] out = filter.applyTo(t, y);
         int m = filter.margin(1.0);
         assertEquals(100, m);   // floor(5 * 20 / 1)
         assertEquals(t.length - 2 * m, out.length);
@@ -56,7 +56,7 @@ class SurveyFilterTest {
 
     @Test
     void theHalfGainPeriodHalvesAndConstantsAndLinesPass() {
-        SurveyFilter filter = SurveyFilter.gaussianOfHalfGainPeriod(120.0);
+        SurveyFilter filter = SurveyFilter.ofHalfGainPeriod(120.0);
         // sigma = P sqrt(2 ln 2) / (2 pi), so that exp(-(2 pi sigma / P)^2 / 2) = 1/2
         assertEquals(0.5, filter.gainAt(1.0 / 120.0), 1e-15);
         assertEquals(120.0 * Math.sqrt(2 * Math.log(2)) / (2 * Math.PI), filter.sigma(), 1e-12);
@@ -67,8 +67,8 @@ class SurveyFilterTest {
             wave[i] = 3.0 * Math.cos(2 * Math.PI * t[i] / 120.0);
             line[i] = 9.81 + 2e-4 * t[i];
         }
-        double[] halved = filter.smooth(t, wave);
-        double[] kept = filter.smooth(t, line);
+        double[] halved = filter.applyTo(t, wave);
+        double[] kept = filter.applyTo(t, line);
         int m = filter.margin(0.5);
         for (int i = 0; i < halved.length; i++) {
             assertEquals(1.5 * Math.cos(2 * Math.PI * t[i + m] / 120.0), halved[i], 3e-6);   // as above, amplitude 3
@@ -97,7 +97,7 @@ class SurveyFilterTest {
         }
         GeodeticTrack track = GeodeticTrack.fromArrays(t, lat, lon, h, 0.2);
         List<SurveyPoint> raw = track.surveyAtSamples(EARTH);
-        SurveyFilter filter = SurveyFilter.gaussian(10.0);
+        SurveyFilter filter = SurveyFilter.ofSigma(10.0);
         List<SurveyPoint> smooth = track.surveyAtSamples(EARTH, filter);
         assertEquals(n - 2 * filter.margin(0.1), smooth.size());
         assertEquals(raw.get(filter.margin(0.1)).time(), smooth.get(0).time(), 0.0);
@@ -128,27 +128,27 @@ class SurveyFilterTest {
 
     @Test
     void refusesWhatItCannotFilter() {
-        SurveyFilter filter = SurveyFilter.gaussian(2.0);
-        assertThrows(IllegalArgumentException.class, () -> SurveyFilter.gaussian(0.0));
-        assertThrows(IllegalArgumentException.class, () -> SurveyFilter.gaussianOfHalfGainPeriod(Double.NaN));
+        SurveyFilter filter = SurveyFilter.ofSigma(2.0);
+        assertThrows(IllegalArgumentException.class, () -> SurveyFilter.ofSigma(0.0));
+        assertThrows(IllegalArgumentException.class, () -> SurveyFilter.ofHalfGainPeriod(Double.NaN));
         double[] t = times(100, 1.0);
         double[] y = new double[100];
         IllegalArgumentException mismatch = assertThrows(IllegalArgumentException.class,
-                () -> filter.smooth(t, new double[99]));
+                () -> filter.applyTo(t, new double[99]));
         assertTrue(mismatch.getMessage().contains("one value per time (100), got 99"), mismatch.getMessage());
         double[] uneven = t.clone();
         uneven[40] += 0.01;
-        IllegalArgumentException step = assertThrows(IllegalArgumentException.class, () -> filter.smooth(uneven, y));
+        IllegalArgumentException step = assertThrows(IllegalArgumentException.class, () -> filter.applyTo(uneven, y));
         assertTrue(step.getMessage().contains("step 40"), step.getMessage());
         IllegalArgumentException coarse = assertThrows(IllegalArgumentException.class,
-                () -> SurveyFilter.gaussian(0.5).smooth(t, y));
+                () -> SurveyFilter.ofSigma(0.5).applyTo(t, y));
         assertTrue(coarse.getMessage().contains("at most the filter's sigma"), coarse.getMessage());
         IllegalArgumentException shortSeries = assertThrows(IllegalArgumentException.class,
-                () -> SurveyFilter.gaussian(20.0).smooth(t, y));
+                () -> SurveyFilter.ofSigma(20.0).applyTo(t, y));
         assertTrue(shortSeries.getMessage().contains("201 samples"), shortSeries.getMessage());
         double[] bad = y.clone();
         bad[7] = Double.NaN;
-        IllegalArgumentException nan = assertThrows(IllegalArgumentException.class, () -> filter.smooth(t, bad));
+        IllegalArgumentException nan = assertThrows(IllegalArgumentException.class, () -> filter.applyTo(t, bad));
         assertTrue(nan.getMessage().contains("values[7]"), nan.getMessage());
         assertTrue(filter.toString().contains("sigma 2 s"), filter.toString());
     }

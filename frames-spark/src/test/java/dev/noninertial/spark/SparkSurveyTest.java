@@ -142,7 +142,7 @@ class SparkSurveyTest {
     void aFilteredSurveyKeepsEveryRowWithNullsWhereTheKernelDoesNotFit() {
         List<Row> log = new ArrayList<>(eastbound("line 7", 120, false));
         log.addAll(eastbound("line 8", 60, true));
-        SurveyFilter filter = SurveyFilter.gaussian(2.0);
+        SurveyFilter filter = SurveyFilter.ofSigma(2.0);
         int m = filter.margin(1.0);   // 10 rows at each end
         List<Row> out = SparkSurvey.atSamples(shuffled(log, 3), "line", "t", POSITION, EARTH, 2.0, filter, "f_")
                 .collectAsList();
@@ -182,7 +182,7 @@ class SparkSurveyTest {
     }
 
     private static List<SurveyPoint> oneMachine(List<Row> rows, SurveyFilter filter) {
-        return filter.smooth(oneMachine(rows));
+        return filter.applyTo(oneMachine(rows));
     }
 
     private static List<SurveyPoint> oneMachine(List<Row> rows) {

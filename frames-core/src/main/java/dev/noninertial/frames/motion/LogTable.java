@@ -128,7 +128,7 @@ public final class LogTable {
      * @throws IOException if the file cannot be read
      * @throws IllegalArgumentException naming the file and the line, if the header or a row is refused
      */
-    public static LogTable read(Path file, List<Column> known, String example) throws IOException {
+    public static LogTable readCsv(Path file, List<Column> known, String example) throws IOException {
         Arguments.nonNull("file", file);
         int rows = countRows(file);
         try (BufferedReader in = LogText.open(file)) {
@@ -184,7 +184,7 @@ public final class LogTable {
      * @throws IOException if the stream fails
      * @throws IllegalArgumentException naming the source and the line, if the header or a row is refused
      */
-    public static LogTable read(Reader source, String sourceName, List<Column> known, String example)
+    public static LogTable readCsv(Reader source, String sourceName, List<Column> known, String example)
             throws IOException {
         Arguments.nonNull("source", source);
         Arguments.nonNull("sourceName", sourceName);

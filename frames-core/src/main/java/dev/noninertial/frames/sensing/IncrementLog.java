@@ -137,7 +137,7 @@ public final class IncrementLog implements Serializable {
      * @throws IllegalArgumentException if the header or a row is refused; the message names the file and the line
      */
     public static IncrementLog readCsv(Path file) throws IOException {
-        return fromTable(LogTable.read(file, COLUMNS, HEADER));
+        return fromTable(LogTable.readCsv(file, COLUMNS, HEADER));
     }
 
     /**
@@ -150,7 +150,7 @@ public final class IncrementLog implements Serializable {
      * @throws IllegalArgumentException if the header or a row is refused; the message names the source and the line
      */
     public static IncrementLog readCsv(Reader source, String sourceName) throws IOException {
-        return fromTable(LogTable.read(source, sourceName, COLUMNS, HEADER));
+        return fromTable(LogTable.readCsv(source, sourceName, COLUMNS, HEADER));
     }
 
     private static IncrementLog fromTable(LogTable table) {

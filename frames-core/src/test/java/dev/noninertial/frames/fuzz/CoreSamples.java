@@ -205,7 +205,7 @@ public final class CoreSamples {
     /** The table of the invented two-column log {@code t[s], x[m]}. */
     private static LogTable table2() {
         try {
-            return LogTable.read(new StringReader(TABLE_LOG), "demo-table.csv", TABLE_COLUMNS, "t[s], x[m]");
+            return LogTable.readCsv(new StringReader(TABLE_LOG), "demo-table.csv", TABLE_COLUMNS, "t[s], x[m]");
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -225,9 +225,9 @@ public final class CoreSamples {
     private static void addCalls(SampleValues s) {
         s.addCall("LogTable.Column.of(String,String[],double[])",
                 () -> new Object[] {"h", new String[] {"m", "ft"}, new double[] {1.0, 0.3048}});
-        s.addCall("LogTable.read(Reader,String,List,String)",
+        s.addCall("LogTable.readCsv(Reader,String,List,String)",
                 () -> new Object[] {new StringReader(TABLE_LOG), "demo-table.csv", TABLE_COLUMNS, "t[s], x[m]"});
-        s.addCall("LogTable.read(Path,List,String)", () -> new Object[] {textFile(TABLE_LOG), TABLE_COLUMNS, "t[s], x[m]"});
+        s.addCall("LogTable.readCsv(Path,List,String)", () -> new Object[] {textFile(TABLE_LOG), TABLE_COLUMNS, "t[s], x[m]"});
         s.addCall("IncrementLog.of(double,double[],double[],double[])",
                 () -> new Object[] {0.0, new double[] {0.01, 0.02}, ramp(6), ramp(6)});
         s.addCall("IncrementLog.readCsv(Reader,String)",

@@ -74,7 +74,7 @@ class GeodesyApiFuzzTest {
                 new double[] {0.143, 0.1431, 0.1432}, new double[] {420, 421, 422}, new double[] {0.3, 0.3, 0.3},
                 new double[] {0.0, 0.01, 0.02}, new double[] {0, 0, 0}, 10.0), GeodesyApiFuzzTest::surveyLine);
         // a Gaussian of 1 s: the 12-sample line at 1 s spans its kernel (11 samples)
-        s.add(SurveyFilter.class, () -> SurveyFilter.gaussian(1.0));
+        s.add(SurveyFilter.class, () -> SurveyFilter.ofSigma(1.0));
         // a sounding of three levels (invented)
         s.add(SoundingAtmosphere.class, () -> SoundingAtmosphere.of(new double[] {0.0, 500.0, 1000.0},
                 new double[] {1.2, 1.15, 1.1}, new double[] {340.0, 338.0, 336.0}));
@@ -149,7 +149,7 @@ class GeodesyApiFuzzTest {
         s.addCall("SoundingAtmosphere.ofPressureTemperature(double[],double[],double[])", () -> new Object[] {
             new double[] {0.0, 500.0, 1000.0}, new double[] {101325.0, 95461.0, 89876.0},
             new double[] {288.15, 284.9, 281.65}});
-        s.addCall("SurveyFilter.smooth(List)", () -> new Object[] {surveyLine().surveyAtSamples(EARTH)});
+        s.addCall("SurveyFilter.applyTo(List)", () -> new Object[] {surveyLine().surveyAtSamples(EARTH)});
         s.addCall("GeodeticTrack.readCsv(Reader,String,double)",
                 () -> new Object[] {new StringReader(TRACK), "demo-track.csv", 10.0});
     }
