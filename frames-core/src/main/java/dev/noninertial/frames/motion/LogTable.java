@@ -192,8 +192,93 @@ public final class LogTable {
         return parse(in, sourceName, known, example, 1024);
     }
 
+    /**
+     * What a reader does with a log while it is parsed: the header once (the columns present, in
+     * header order; the place to refuse a missing group), then every row (its SI values in header
+     * order, in an array reused from row to row).
+     */
+    interface Rows {
+
+        /**
+         * Takes the header.
+         *
+         * @param present the columns in header order
+         * @param headerLine the header's 1-based line number
+         */
+        void header(Column[] present, int headerLine);
+
+        /**
+         * Takes one row.
+         *
+         * @param values the row's values in SI, in header order (reused: copy what is kept)
+         * @param lineNumber the row's 1-based line number
+         */
+        void row(double[] values, int lineNumber);
+    }
+
     private static LogTable parse(BufferedReader in, String source, List<Column> known, String example,
                                   int expectedRows) throws IOException {
+        Collector table = new Collector(expectedRows);
+        parse(in, source, known, example, table);
+        return table.finish(source);
+    }
+
+    /** The columns of a table, filled row by row. */
+    private static final class Collector implements Rows {
+
+        private Column[] present;
+        private int headerLine;
+        private int capacity;
+        private double[][] values;
+        private int[] lines;
+        private int n;
+
+        Collector(int capacity) {
+            this.capacity = capacity;
+            this.lines = new int[capacity];
+        }
+
+        @Override
+        public void header(Column[] columns, int line) {
+            present = columns;
+            headerLine = line;
+            values = new double[columns.length][capacity];
+        }
+
+        @Override
+        public void row(double[] fields, int lineNumber) {
+            if (n == capacity) {
+                capacity = capacity + (capacity >> 1) + 1;
+                for (int k = 0; k < values.length; k++) {
+                    values[k] = Arrays.copyOf(values[k], capacity);
+                }
+                lines = Arrays.copyOf(lines, capacity);
+            }
+            for (int k = 0; k < fields.length; k++) {
+                values[k][n] = fields[k];
+            }
+            lines[n] = lineNumber;
+            n++;
+        }
+
+        LogTable finish(String source) {
+            if (n < capacity) {
+                for (int k = 0; k < values.length; k++) {
+                    values[k] = Arrays.copyOf(values[k], n);
+                }
+                lines = Arrays.copyOf(lines, n);
+            }
+            return new LogTable(source, headerLine, n, present, values, lines);
+        }
+    }
+
+    /**
+     * The parser of every log reader: the line rule ({@link #content}), the header (each field
+     * {@code name[unit]} of a known column, each column once, a known unit), then every row by
+     * the row rule ({@link #parseFields}), handed to {@code rows}.
+     */
+    static void parse(BufferedReader in, String source, List<Column> known, String example, Rows rows)
+            throws IOException {
         Arguments.nonNull("known", known);
         Arguments.nonNull("example", example);
         Map<String, Column> byName = new LinkedHashMap<>();
@@ -205,15 +290,10 @@ public final class LogTable {
         }
         String line;
         int lineNumber = 0;
-        int headerLine = 0;
         Column[] present = null;
         double[] factors = null;
-        int capacity = expectedRows;
-        double[][] values = null;
-        int[] lines = new int[capacity];
         String[] names = null;
         double[] fields = null;
-        int n = 0;
         while ((line = in.readLine()) != null) {
             lineNumber++;
             String trimmed = content(line, source, lineNumber);
@@ -221,7 +301,6 @@ public final class LogTable {
                 continue;
             }
             if (present == null) {
-                headerLine = lineNumber;
                 LogText.checkSeparator(trimmed, source, lineNumber);
                 String[] headerFields = trimmed.split(",", -1);
                 present = new Column[headerFields.length];
@@ -256,39 +335,21 @@ public final class LogTable {
                     present[k] = c;
                     factors[k] = c.factors[u];
                 }
-                values = new double[present.length][capacity];
                 names = new String[present.length];
                 fields = new double[present.length];
                 for (int k = 0; k < present.length; k++) {
                     names[k] = present[k].name;
                 }
+                rows.header(present.clone(), lineNumber);
                 continue;
             }
-            if (n == capacity) {
-                capacity = capacity + (capacity >> 1) + 1;
-                for (int k = 0; k < values.length; k++) {
-                    values[k] = Arrays.copyOf(values[k], capacity);
-                }
-                lines = Arrays.copyOf(lines, capacity);
-            }
             parseFields(trimmed, names, factors, fields, source, lineNumber);
-            for (int k = 0; k < fields.length; k++) {
-                values[k][n] = fields[k];
-            }
-            lines[n] = lineNumber;
-            n++;
+            rows.row(fields, lineNumber);
         }
         if (present == null) {
             throw new IllegalArgumentException(source + ": no header row (expected a line such as '" + example
                     + "' after the comments)");
         }
-        if (n < capacity) {
-            for (int k = 0; k < values.length; k++) {
-                values[k] = Arrays.copyOf(values[k], n);
-            }
-            lines = Arrays.copyOf(lines, n);
-        }
-        return new LogTable(source, headerLine, n, present, values, lines);
     }
 
     /**
@@ -334,11 +395,17 @@ public final class LogTable {
      * @throws IllegalArgumentException if a column of the group is missing (all of them, when required)
      */
     public void requireGroup(String what, boolean required, String... names) {
+        requireGroup(source, headerLine, present, what, required, names);
+    }
+
+    /** {@link #requireGroup(String, boolean, String...)} for a header being read. */
+    static void requireGroup(String source, int headerLine, Column[] present, String what, boolean required,
+                             String... names) {
         Arguments.nonNull("what", what);
         Arguments.nonNull("names", names);
         List<String> missing = new ArrayList<>();
         for (String name : names) {
-            if (!has(name)) {
+            if (indexOf(present, name) < 0) {
                 missing.add(name);
             }
         }
@@ -420,6 +487,11 @@ public final class LogTable {
     }
 
     private int index(String name) {
+        return indexOf(present, name);
+    }
+
+    /** Index of the column named {@code name} among {@code present}, or -1. */
+    static int indexOf(Column[] present, String name) {
         for (int k = 0; k < present.length; k++) {
             if (present[k].name.equals(name)) {
                 return k;

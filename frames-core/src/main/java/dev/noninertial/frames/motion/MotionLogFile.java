@@ -3,14 +3,10 @@ package dev.noninertial.frames.motion;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 
@@ -109,56 +105,95 @@ final class MotionLogFile {
 
     // ------------------------------------------------------------------ parsing
 
+    /** The columns of the motion log for {@link LogTable}, with the units of their kind. */
+    private static final List<LogTable.Column> KNOWN = known();
+
+    private static List<LogTable.Column> known() {
+        List<LogTable.Column> list = new ArrayList<>();
+        for (Column c : Column.values()) {
+            list.add(LogTable.Column.of(c.label, c.kind.units, c.kind.factors));
+        }
+        return List.copyOf(list);
+    }
+
     private static MotionLogFile parse(BufferedReader in, String source, int expectedRows) throws IOException {
-        String line;
-        int lineNumber = 0;
-        Column[] columns = null;
-        double[] factors = null;
-        int headerLine = 0;
-        int capacity = expectedRows;
-        int n = 0;
-        double[] t = new double[capacity];
-        double[] pos = new double[3 * capacity];
-        double[] quat = new double[4 * capacity];
-        double[] vel = null;
-        double[] rate = null;
-        int[] lines = new int[capacity];
-        int[] slot = new int[Column.values().length];
-        boolean ypr = false;
-        double[] row = new double[Column.values().length];
-        String[] names = null;
-        double[] fields = null;
-        while ((line = in.readLine()) != null) {
-            lineNumber++;
-            String trimmed = LogTable.content(line, source, lineNumber);
-            if (trimmed == null) {
-                continue;
+        Filler filler = new Filler(source, expectedRows);
+        LogTable.parse(in, source, KNOWN, "t[s], x[m], y[m], z[m], yaw[deg], pitch[deg], roll[deg]", filler);
+        return filler.finish();
+    }
+
+    /**
+     * Fills the packed arrays of a motion straight from the rows ({@link LogTable}'s parser), so
+     * that the peak memory stays near the result: the header's groups are checked as it arrives.
+     */
+    private static final class Filler implements LogTable.Rows {
+
+        private final String source;
+        private int capacity;
+        private int headerLine;
+        /** The motion-log column of each header field. */
+        private Column[] columns;
+        private boolean ypr;
+        private int n;
+        private double[] t;
+        private double[] pos;
+        private double[] quat;
+        private double[] vel;
+        private double[] rate;
+        private int[] lines;
+        private final double[] row = new double[Column.values().length];
+
+        Filler(String source, int capacity) {
+            this.source = source;
+            this.capacity = capacity;
+        }
+
+        @Override
+        public void header(LogTable.Column[] present, int line) {
+            headerLine = line;
+            requireGroup(present, true, "time", Column.T);
+            requireGroup(present, true, "position", Column.X, Column.Y, Column.Z);
+            requireGroup(present, false, "velocity", Column.VX, Column.VY, Column.VZ);
+            requireGroup(present, false, "quaternion", Column.Q0, Column.Q1, Column.Q2, Column.Q3);
+            requireGroup(present, false, "yaw-pitch-roll", Column.YAW, Column.PITCH, Column.ROLL);
+            requireGroup(present, false, "angular rate", Column.WX, Column.WY, Column.WZ);
+            boolean quaternion = LogTable.indexOf(present, Column.Q0.label) >= 0;
+            ypr = LogTable.indexOf(present, Column.YAW.label) >= 0;
+            if (quaternion == ypr) {
+                throw new IllegalArgumentException(source + " line " + line + " (header): the attitude needs "
+                        + "exactly one of the groups q0, q1, q2, q3 or yaw, pitch, roll, got "
+                        + (quaternion ? "both" : "neither"));
             }
-            if (columns == null) {
-                headerLine = lineNumber;
-                LogText.checkSeparator(trimmed, source, lineNumber);
-                columns = header(trimmed, source, lineNumber);
-                Arrays.fill(slot, -1);
-                for (int c = 0; c < columns.length; c++) {
-                    slot[columns[c].ordinal()] = c;
+            columns = new Column[present.length];
+            for (int k = 0; k < present.length; k++) {
+                for (Column c : Column.values()) {
+                    if (c.label.equals(present[k].name())) {
+                        columns[k] = c;
+                    }
                 }
-                factors = unitFactors(trimmed, columns, source, lineNumber);
-                names = new String[columns.length];
-                fields = new double[columns.length];
-                for (int c = 0; c < columns.length; c++) {
-                    names[c] = columns[c].label;
-                }
-                ypr = slot[Column.YAW.ordinal()] >= 0;
-                if (slot[Column.VX.ordinal()] >= 0) {
-                    vel = new double[3 * capacity];
-                }
-                if (slot[Column.WX.ordinal()] >= 0) {
-                    rate = new double[3 * capacity];
-                }
-                continue;
             }
-            // LogTable's row rule, then each field to its column's slot
-            LogTable.parseFields(trimmed, names, factors, fields, source, lineNumber);
+            t = new double[capacity];
+            pos = new double[3 * capacity];
+            quat = new double[4 * capacity];
+            lines = new int[capacity];
+            if (LogTable.indexOf(present, Column.VX.label) >= 0) {
+                vel = new double[3 * capacity];
+            }
+            if (LogTable.indexOf(present, Column.WX.label) >= 0) {
+                rate = new double[3 * capacity];
+            }
+        }
+
+        private void requireGroup(LogTable.Column[] present, boolean required, String what, Column... group) {
+            String[] names = new String[group.length];
+            for (int k = 0; k < group.length; k++) {
+                names[k] = group[k].label;
+            }
+            LogTable.requireGroup(source, headerLine, present, what, required, names);
+        }
+
+        @Override
+        public void row(double[] fields, int lineNumber) {
             for (int c = 0; c < columns.length; c++) {
                 row[columns[c].ordinal()] = fields[c];
             }
@@ -205,104 +240,20 @@ final class MotionLogFile {
             lines[n] = lineNumber;
             n++;
         }
-        if (columns == null) {
-            throw new IllegalArgumentException(source + ": no header row (expected a line such as "
-                    + "'t[s], x[m], y[m], z[m], yaw[deg], pitch[deg], roll[deg]' after the comments)");
-        }
-        if (n < 2) {
-            throw new IllegalArgumentException(source + ": needs at least 2 sample rows after the header on line "
-                    + headerLine + ", got " + n);
-        }
-        if (n == capacity) {
-            // the counted size: the arrays are already exact, no trimming copy
-            return new MotionLogFile(source, n, t, pos, quat, vel, rate, lines);
-        }
-        return new MotionLogFile(source, n, Arrays.copyOf(t, n), Arrays.copyOf(pos, 3 * n),
-                Arrays.copyOf(quat, 4 * n), vel == null ? null : Arrays.copyOf(vel, 3 * n),
-                rate == null ? null : Arrays.copyOf(rate, 3 * n), lines);
-    }
 
-    private static Column[] header(String text, String source, int lineNumber) {
-        String[] fields = text.split(",", -1);
-        Map<String, Column> byLabel = new LinkedHashMap<>();
-        for (Column c : Column.values()) {
-            byLabel.put(c.label, c);
-        }
-        Column[] columns = new Column[fields.length];
-        boolean[] seen = new boolean[Column.values().length];
-        for (int k = 0; k < fields.length; k++) {
-            String field = fields[k].trim();
-            int open = field.indexOf('[');
-            if (open <= 0 || !field.endsWith("]")) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
-                        + ": " + LogText.quoted(field) + " must read name[unit], for example t[s] or yaw[deg]");
+        MotionLogFile finish() {
+            if (n < 2) {
+                throw new IllegalArgumentException(source + ": needs at least 2 sample rows after the header on line "
+                        + headerLine + ", got " + n);
             }
-            String name = field.substring(0, open).trim();
-            Column c = byLabel.get(name);
-            if (c == null) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
-                        + ": unknown column " + LogText.quoted(name) + "; known columns: "
-                        + String.join(", ", byLabel.keySet()));
+            if (n == capacity) {
+                // the counted size: the arrays are already exact, no trimming copy
+                return new MotionLogFile(source, n, t, pos, quat, vel, rate, lines);
             }
-            if (seen[c.ordinal()]) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header): column '" + name
-                        + "' appears twice");
-            }
-            seen[c.ordinal()] = true;
-            columns[k] = c;
+            return new MotionLogFile(source, n, Arrays.copyOf(t, n), Arrays.copyOf(pos, 3 * n),
+                    Arrays.copyOf(quat, 4 * n), vel == null ? null : Arrays.copyOf(vel, 3 * n),
+                    rate == null ? null : Arrays.copyOf(rate, 3 * n), lines);
         }
-        requireGroup(seen, source, lineNumber, true, "time", Column.T);
-        requireGroup(seen, source, lineNumber, true, "position", Column.X, Column.Y, Column.Z);
-        requireGroup(seen, source, lineNumber, false, "velocity", Column.VX, Column.VY, Column.VZ);
-        requireGroup(seen, source, lineNumber, false, "quaternion", Column.Q0, Column.Q1, Column.Q2, Column.Q3);
-        requireGroup(seen, source, lineNumber, false, "yaw-pitch-roll", Column.YAW, Column.PITCH, Column.ROLL);
-        requireGroup(seen, source, lineNumber, false, "angular rate", Column.WX, Column.WY, Column.WZ);
-        boolean quaternion = seen[Column.Q0.ordinal()];
-        boolean angles = seen[Column.YAW.ordinal()];
-        if (quaternion == angles) {
-            throw new IllegalArgumentException(source + " line " + lineNumber + " (header): the attitude needs "
-                    + "exactly one of the groups q0, q1, q2, q3 or yaw, pitch, roll, got "
-                    + (quaternion ? "both" : "neither"));
-        }
-        return columns;
-    }
-
-    private static void requireGroup(boolean[] seen, String source, int lineNumber, boolean required,
-                                     String what, Column... group) {
-        List<String> missing = new ArrayList<>();
-        for (Column c : group) {
-            if (!seen[c.ordinal()]) {
-                missing.add(c.label);
-            }
-        }
-        if (missing.isEmpty() || (!required && missing.size() == group.length)) {
-            return;
-        }
-        List<String> all = new ArrayList<>();
-        for (Column c : group) {
-            all.add(c.label);
-        }
-        throw new IllegalArgumentException(source + " line " + lineNumber + " (header): missing " + what
-                + " column(s) " + String.join(", ", missing) + "; the " + what + " needs all of "
-                + String.join(", ", all) + (required ? "" : " or none"));
-    }
-
-    private static double[] unitFactors(String text, Column[] columns, String source, int lineNumber) {
-        String[] fields = text.split(",", -1);
-        double[] factors = new double[columns.length];
-        for (int k = 0; k < columns.length; k++) {
-            String field = fields[k].trim();
-            String unit = field.substring(field.indexOf('[') + 1, field.length() - 1).trim();
-            Kind kind = columns[k].kind;
-            int u = Arrays.asList(kind.units).indexOf(unit);
-            if (u < 0) {
-                throw new IllegalArgumentException(source + " line " + lineNumber + " (header), field " + (k + 1)
-                        + ": unit " + LogText.quoted(unit) + " not allowed for column " + columns[k].label + "; allowed: "
-                        + String.join(", ", kind.units));
-            }
-            factors[k] = kind.factors[u];
-        }
-        return factors;
     }
 
     /** Exact powers of ten up to 1e22, the largest exactly representable in a double. */
