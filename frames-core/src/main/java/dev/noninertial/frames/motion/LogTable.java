@@ -13,9 +13,9 @@ import java.util.Map;
 import dev.noninertial.frames.Arguments;
 
 /**
- * A comma-separated log of numbers with units in its header, read into columns in SI units: the
- * one reader of the library's log files other than the motion log (the geodetic track log, the
- * sensor increment log). Lines starting with {@code #} are comments and blank lines are skipped;
+ * A comma-separated log of numbers with units in its header, read into columns in SI units; its
+ * parser is the one behind every log file of the library (the motion log, the geodetic track log,
+ * the sensor increment log). Lines starting with {@code #} are comments and blank lines are skipped;
  * the first other line is the header naming every column as {@code name[unit]}; each further line
  * is one row of decimal numbers. The text rules are those of {@link LogText}: UTF-8, commas,
  * malformed bytes and NUL refused with their position, numbers that overflow or underflow refused.
