@@ -511,8 +511,8 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
             b.setLength(0);
             b.append(p.time()).append(',').append(Math.toDegrees(p.position().latitude())).append(',')
                     .append(Math.toDegrees(p.position().longitude())).append(',').append(p.position().height())
-                    .append(',').append(p.eotvosCorrection() / Units.MILLIGAL).append(',')
-                    .append(p.verticalAcceleration() / Units.MILLIGAL).append(',').append(p.gravimeterReading())
+                    .append(',').append(Units.toMilligals(p.eotvosCorrection())).append(',')
+                    .append(Units.toMilligals(p.verticalAcceleration())).append(',').append(p.gravimeterReading())
                     .append(',').append(p.normalGravity()).append('\n');
             out.write(b.toString());
         }

@@ -79,9 +79,7 @@ public final class AirdropCommand {
             AirdropStudy.print(System.out, study, result, "local runner, " + threads + " threads", seconds, out);
             return;
         }
-        if (System.getProperty("log4j2.configurationFile") == null) {
-            System.setProperty("log4j2.configurationFile", "dev/noninertial/spark/command-log4j2.properties");
-        }
+        SparkSessions.useCommandLogging();
         SparkSession session = SparkSessions.localOrSubmitted(workers > 0 ? workers : 2);
         boolean identical = true;
         try {

@@ -31,9 +31,7 @@ public final class SparkScale {
         int cases = args.length > 0 ? Integer.parseInt(args[0]) : 20_000;
         int workers = args.length > 1 ? Integer.parseInt(args[1]) : 2;
         int rounds = args.length > 2 ? Integer.parseInt(args[2]) : 2;
-        if (System.getProperty("log4j2.configurationFile") == null) {
-            System.setProperty("log4j2.configurationFile", "dev/noninertial/spark/command-log4j2.properties");
-        }
+        SparkSessions.useCommandLogging();
         SparkSession session = SparkSessions.localOrSubmitted(workers);
         try {
             DispersionStudy warm = AirdropStudy.study(1000, 1L);

@@ -36,4 +36,15 @@ public final class SparkSessions {
         }
         return builder.getOrCreate();
     }
+
+    /**
+     * For the module's command-line mains, before the first session: Spark's log configured by the
+     * module's quiet command configuration, unless the user named one
+     * ({@code -Dlog4j2.configurationFile}).
+     */
+    static void useCommandLogging() {
+        if (System.getProperty("log4j2.configurationFile") == null) {
+            System.setProperty("log4j2.configurationFile", "dev/noninertial/spark/command-log4j2.properties");
+        }
+    }
 }

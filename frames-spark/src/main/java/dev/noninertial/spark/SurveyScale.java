@@ -53,9 +53,7 @@ public final class SurveyScale {
         int perLine = args.length > 1 ? Integer.parseInt(args[1]) : 36_000;
         int workers = args.length > 2 ? Integer.parseInt(args[2]) : 2;
         int rounds = args.length > 3 ? Integer.parseInt(args[3]) : 2;
-        if (System.getProperty("log4j2.configurationFile") == null) {
-            System.setProperty("log4j2.configurationFile", "dev/noninertial/spark/command-log4j2.properties");
-        }
+        SparkSessions.useCommandLogging();
         SparkSession session = SparkSessions.localOrSubmitted(workers);
         ExecutorService pool = Executors.newFixedThreadPool(workers);
         try {
