@@ -29,7 +29,8 @@ pushd "%ROOT%"
 call mvn -B -Dstyle.color=never -DskipTests -Dmaven.javadoc.skip=true -Dmaven.source.skip=true -Dexec.skip=true package dependency:build-classpath -pl frames-examples -am "-Dmdep.outputFile=%CACHE%\dependencies.txt" -DincludeScope=runtime > "%LOG%" 2>&1
 if errorlevel 1 goto failed
 popd
-set /p DEPS=<"%CACHE%\dependencies.txt"
+rem for /f, not set /p: set /p reads at most 1024 characters, a class path can be longer
+for /f "usebackq delims=" %%L in ("%CACHE%\dependencies.txt") do set "DEPS=%%L"
 > "%CPFILE%" echo %DEPS%;%ROOT%\frames-examples\target\classes
 echo frames-jshell: built; starting JShell 1>&2
 goto run
@@ -41,5 +42,5 @@ findstr /B /C:"[ERROR]" "%LOG%" 1>&2
 exit /b 1
 
 :run
-set /p CP=<"%CPFILE%"
+for /f "usebackq delims=" %%L in ("%CPFILE%") do set "CP=%%L"
 jshell -J-XX:TieredStopAtLevel=1 --class-path "%CP%" --startup DEFAULT --startup "%ROOT%\jshell\frames.jsh" %*
