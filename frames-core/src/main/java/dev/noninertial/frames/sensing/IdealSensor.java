@@ -75,6 +75,8 @@ public final class IdealSensor implements Serializable {
     public static final double DEFAULT_TOLERANCE = 1e-12;
     /** Most halvings of an increment's pieces before it is refused. */
     public static final int MAX_DEPTH = 60;
+    /** Most intervals of one {@link #incrementsOver(double, double, int)} log (6 doubles each in one array). */
+    public static final int MAX_LOG_INTERVALS = Integer.MAX_VALUE / 8;
 
     private static final long serialVersionUID = 1L;
 
@@ -261,6 +263,27 @@ public final class IdealSensor implements Serializable {
         int o = SCRATCH;
         return new SensorIncrements(start, end, new Vector3D(s[o], s[o + 1], s[o + 2]),
                 new Vector3D(s[o + 3], s[o + 4], s[o + 5]));
+    }
+
+    /**
+     * The exact increments over consecutive intervals of a regular grid, as a log (to write to a
+     * file, to corrupt with {@link SensorImperfections#applyTo(IncrementLog)}, to navigate):
+     * the values of {@link #incrementsOver(double, double, int, double[], int)}.
+     *
+     * @param start start of the first interval (s)
+     * @param interval length of each interval (s), positive
+     * @param count number of increments, in [1, {@link #MAX_LOG_INTERVALS}]
+     * @return the log; interval {@code k} is {@code [start + k interval, start + (k + 1) interval]}
+     * @throws IllegalArgumentException if {@code count} is out of range, or as
+     *         {@link #incrementsOver(double, double, int, double[], int)}
+     */
+    public IncrementLog incrementsOver(double start, double interval, int count) {
+        if (count < 1 || count > MAX_LOG_INTERVALS) {
+            throw new IllegalArgumentException("count must be in [1, " + MAX_LOG_INTERVALS + "], got " + count);
+        }
+        double[] packed = new double[SensorIncrements.COMPONENTS * count];
+        incrementsOver(start, interval, count, packed, 0);
+        return IncrementLog.ofUniform(start, interval, packed);
     }
 
     /**

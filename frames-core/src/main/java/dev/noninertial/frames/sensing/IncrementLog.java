@@ -332,6 +332,49 @@ public final class IncrementLog implements Serializable {
     }
 
     /**
+     * The increments packed as {@link SensorIncrements#COMPONENTS} doubles per interval
+     * (delta-velocity x, y, z, then delta-angle x, y, z), a new array.
+     */
+    double[] packed() {
+        double[] out = new double[SensorIncrements.COMPONENTS * ends.length];
+        for (int i = 0; i < ends.length; i++) {
+            System.arraycopy(deltaVelocities, 3 * i, out, SensorIncrements.COMPONENTS * i, 3);
+            System.arraycopy(deltaAngles, 3 * i, out, SensorIncrements.COMPONENTS * i + 3, 3);
+        }
+        return out;
+    }
+
+    /** A log over the same intervals with other increments, packed as {@link #packed()} returns them. */
+    IncrementLog withPacked(double[] packed) {
+        int n = ends.length;
+        double[] dv = new double[3 * n];
+        double[] da = new double[3 * n];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(packed, SensorIncrements.COMPONENTS * i, dv, 3 * i, 3);
+            System.arraycopy(packed, SensorIncrements.COMPONENTS * i + 3, da, 3 * i, 3);
+        }
+        return build(start, ends, dv, da, i -> "interval " + i);
+    }
+
+    /**
+     * The length of every interval, refused unless they are all one length to within 1e-9 of it
+     * (the rounding of {@code start + k interval}), naming the first that is not.
+     */
+    double uniformInterval() {
+        double interval = (ends[ends.length - 1] - start) / ends.length;
+        double previous = start;
+        for (int i = 0; i < ends.length; i++) {
+            double length = ends[i] - previous;
+            if (!(Math.abs(length - interval) <= 1e-9 * interval)) {
+                throw new IllegalArgumentException("log must have intervals of one length (mean " + interval
+                        + " s) for a sensor error model, interval " + i + " is " + length + " s");
+            }
+            previous = ends[i];
+        }
+        return interval;
+    }
+
+    /**
      * A stream is untrusted input: the arrays are checked again.
      *
      * @param in the stream

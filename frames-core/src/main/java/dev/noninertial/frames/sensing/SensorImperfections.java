@@ -277,6 +277,23 @@ public final class SensorImperfections implements Serializable {
     }
 
     /**
+     * Applies the model to a log of increments of one interval length, as
+     * {@link #applyToIncrements} does to the packed increments (the same values, bit for bit).
+     *
+     * @param ideal the ideal increments, for example from
+     *        {@link IdealSensor#incrementsOver(double, double, int)}
+     * @return the corrupted increments over the same intervals
+     * @throws IllegalArgumentException if the log's intervals are not of one length
+     */
+    public IncrementLog applyTo(IncrementLog ideal) {
+        Arguments.nonNull("ideal", ideal);
+        double interval = ideal.uniformInterval();
+        double[] packed = ideal.packed();
+        applyToIncrements(packed, 0, interval, ideal.size(), packed, 0);
+        return ideal.withPacked(packed);
+    }
+
+    /**
      * Applies the model to a record of readings sampled every {@code interval} (layout of
      * {@link InertialReading#COMPONENTS}: specific force x, y, z, then angular rate x, y, z), as from
      * {@link IdealSensor#readingsAt(double[], int, double[], int, int)}. No quantization. Source and

@@ -70,6 +70,34 @@ class IncrementLogTest {
     }
 
     @Test
+    void theSensorsLogAndTheErrorModelsLogAreThePackedForms() {
+        ReferenceFrame hall = ReferenceFrame.inertialRoot("hall (invented)");
+        ReferenceFrame table = hall.attach("table", Motions.spin(Vector3D.PLUS_K, 0.0, W));
+        ReferenceFrame sensor = table.attach("sensor", Motions.stationary(new Vector3D(R, 0, 0)));
+        IdealSensor imu = IdealSensor.of(sensor, SpecificForce.uniform(Vector3D.ZERO));
+        IncrementLog truth = imu.incrementsOver(0.0, 0.01, 40);
+        // the same values as the packed form, bit for bit (one computation behind both)
+        IncrementLog packed = turntable(40, 0.01);
+        assertArrayEquals(packed.deltaVelocities(), truth.deltaVelocities(), 0.0);
+        assertArrayEquals(packed.deltaAngles(), truth.deltaAngles(), 0.0);
+        assertArrayEquals(packed.ends(), truth.ends(), 0.0);
+        SensorImperfections errors = SensorImperfections.seeded(42L)
+                .withBias(SensorImperfections.Triad.ACCELEROMETERS, new Vector3D(0.01, 0, 0))
+                .withWhiteNoise(SensorImperfections.Triad.GYROS, new Vector3D(1e-4, 1e-4, 1e-4));
+        IncrementLog measured = errors.applyTo(truth);
+        double[] expected = truth.packed();
+        errors.applyToIncrements(expected, 0, 0.01, 40, expected, 0);
+        assertArrayEquals(expected, measured.packed(), 0.0);
+        assertArrayEquals(truth.ends(), measured.ends(), 0.0);
+        // a bias of 0.01 m/s^2 adds 0.01 dt to every delta-velocity x (the model's definition)
+        assertEquals(truth.deltaVelocities()[0] + 0.01 * 0.01, measured.deltaVelocities()[0], 1e-15);
+        IllegalArgumentException uneven = assertThrows(IllegalArgumentException.class,
+                () -> errors.applyTo(IncrementLog.of(0.0, new double[] {0.01, 0.03}, new double[6], new double[6])));
+        assertTrue(uneven.getMessage().contains("intervals of one length"), uneven.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> imu.incrementsOver(0.0, 0.01, 0));
+    }
+
+    @Test
     void unitsAreConvertedByTheirDefinitions() throws IOException {
         String text = "# a log in other units (invented)\n"
                 + "start[ms], end[ms], dvx[ft/s], dvy[ft/s], dvz[ft/s], dax[deg], day[deg], daz[deg]\n"
