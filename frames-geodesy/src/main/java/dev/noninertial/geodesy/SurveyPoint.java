@@ -53,6 +53,27 @@ public record SurveyPoint(double time, LatLonHeight position, double eotvosCorre
         Arguments.finite("normalGravity", normalGravity);
     }
 
+    /**
+     * The free-air anomaly of a gravimeter reading taken at this point: the reading corrected for
+     * the platform's motion, less normal gravity at the point's height,
+     * {@code reading + eotvosCorrection - verticalAcceleration - normalGravity}. Normal gravity is
+     * taken at the height (TR8350.2 Eq. 4-3), so its height term does the free-air correction
+     * (about 0.3086 mGal per metre near the surface).
+     *
+     * <p>The reading must be absolute gravity on a level, stabilised platform, filtered as the
+     * corrections are (see {@link SurveyFilter}): a relative meter's readings must first be scaled
+     * by its calibration and tied to a base station, which this library does not do.
+     *
+     * @param measuredReading the gravimeter's reading at this point's time (m/s^2), finite
+     * @return the free-air anomaly (m/s^2); for the ideal reading {@link #gravimeterReading()} it
+     *         is zero to first order
+     * @throws IllegalArgumentException if {@code measuredReading} is not finite
+     */
+    public double freeAirAnomaly(double measuredReading) {
+        Arguments.finite("measuredReading", measuredReading);
+        return measuredReading + eotvosCorrection - verticalAcceleration - normalGravity;
+    }
+
     @Override
     public String toString() {
         return "SurveyPoint{t=" + Formats.number(time) + " s, " + position + ", eotvos="

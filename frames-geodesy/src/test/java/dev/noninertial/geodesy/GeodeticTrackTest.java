@@ -125,6 +125,28 @@ class GeodeticTrackTest {
     }
 
     @Test
+    void theFreeAirAnomalyOfTheIdealReadingIsZeroAndTheClassicGradientHolds() throws IOException {
+        GeodeticTrack track = GeodeticTrack.readCsv(new StringReader(eastboundLog(60, true)), "line8.csv", 2.0);
+        for (double t : new double[] {5.5, 17.25, 40.0}) {
+            SurveyPoint p = track.surveyAt(EARTH, t);
+            // the ideal gravimeter: zero to first order, 1e-7 m/s^2 (0.01 mGal) as in the test above
+            assertEquals(0.0, p.freeAirAnomaly(p.gravimeterReading()), 1e-7, p.toString());
+            // a reading 5 mGal above the ideal one is a 5 mGal anomaly (linear in the reading)
+            assertEquals(5.0, Units.toMilligals(p.freeAirAnomaly(p.gravimeterReading() + Units.milligals(5.0))), 0.01);
+        }
+        // the height term of normal gravity is the free-air correction: for a station at h = 100 m the
+        // anomaly of the same reading rises by 0.3086 mGal/m x 100 m (common practice) relative to h = 0;
+        // the latitude dependence of the gradient and its h^2 term change it by 0.2 mGal at most
+        SurveyPoint low = new SurveyPoint(0.0, LatLonHeight.ofDegrees(60.0, 4.0, 0.0), 0.0, 0.0, 9.8, 0.0);
+        double g0 = EARTH.model().normalGravity(LatLonHeight.ofDegrees(60.0, 4.0, 0.0));
+        double g100 = EARTH.model().normalGravity(LatLonHeight.ofDegrees(60.0, 4.0, 100.0));
+        double rise = Units.toMilligals(new SurveyPoint(0.0, LatLonHeight.ofDegrees(60.0, 4.0, 100.0), 0.0, 0.0, 9.8,
+                g100).freeAirAnomaly(9.8) - new SurveyPoint(0.0, low.position(), 0.0, 0.0, 9.8, g0).freeAirAnomaly(9.8));
+        assertEquals(30.86, rise, 0.2);
+        assertThrows(IllegalArgumentException.class, () -> low.freeAirAnomaly(Double.NaN));
+    }
+
+    @Test
     void theBodyFrameOfALoggedAttitudeHasConsistentRates() {
         int n = 200;
         double[] t = new double[n];
