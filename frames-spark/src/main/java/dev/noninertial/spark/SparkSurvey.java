@@ -53,6 +53,9 @@ import dev.noninertial.geodesy.SurveyPoint;
  */
 public final class SparkSurvey {
 
+    /** Suffix of the free-air anomaly column of {@link #anomaliesAtSamples} (m/s^2). */
+    public static final String ANOMALY_SUFFIX = "free_air_anomaly";
+
     /**
      * Suffixes of the four output columns: Eotvos correction, vertical acceleration, ideal
      * gravimeter reading, normal gravity (m/s^2 each).
@@ -81,7 +84,7 @@ public final class SparkSurvey {
      */
     public static Dataset<Row> atSamples(Dataset<Row> rows, String lineColumn, String timeColumn,
             List<String> positionColumns, EarthFrames earth, double maxGap, String prefix) {
-        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, null, prefix);
+        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, null, null, prefix);
     }
 
     /**
@@ -109,11 +112,47 @@ public final class SparkSurvey {
     public static Dataset<Row> atSamples(Dataset<Row> rows, String lineColumn, String timeColumn,
             List<String> positionColumns, EarthFrames earth, double maxGap, SurveyFilter filter, String prefix) {
         Arguments.nonNull("filter", filter);
-        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, filter, prefix);
+        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, filter, null, prefix);
+    }
+
+    /**
+     * The filtered survey quantities and the free-air anomaly of a measured gravimeter reading at
+     * every row of every line: the four columns of
+     * {@link #atSamples(Dataset, String, String, List, EarthFrames, double, SurveyFilter, String)},
+     * then {@code prefix + "free_air_anomaly"}, {@link SurveyPoint#freeAirAnomaly(double)} of the
+     * reading filtered along the line by the same filter as the corrections (m/s^2; null where the
+     * kernel does not fit).
+     *
+     * <p>The reading must be absolute gravity in m/s^2 on a level, stabilised platform: a relative
+     * meter's readings must first be scaled by its calibration and tied to a base station, which
+     * this library does not do.
+     *
+     * @param rows the log; must hold the line column and the five double columns
+     * @param lineColumn name of the column naming the survey line (any type, never null)
+     * @param timeColumn name of the time column (s from {@code earth}'s epoch), double
+     * @param positionColumns names of the latitude (degrees), longitude (degrees) and height (m)
+     *        columns, in that order, doubles
+     * @param readingColumn name of the measured gravimeter reading (m/s^2), double
+     * @param earth the Earth frames (model and epoch), shipped to the executors
+     * @param maxGap largest allowed gap between consecutive rows of a line (s), positive and finite
+     * @param filter the filter applied to the corrections and the reading along each line
+     * @param prefix prefix of the five output column names, non-empty, not clashing with an input column
+     * @return the Dataset with the five columns appended, grouped by line and in time order (lazy)
+     * @throws NullPointerException if an argument is null
+     * @throws IllegalArgumentException as {@link #atSamples(Dataset, String, String, List, EarthFrames, double, String)}
+     */
+    public static Dataset<Row> anomaliesAtSamples(Dataset<Row> rows, String lineColumn, String timeColumn,
+            List<String> positionColumns, String readingColumn, EarthFrames earth, double maxGap, SurveyFilter filter,
+            String prefix) {
+        Arguments.nonNull("readingColumn", readingColumn);
+        Arguments.nonNull("filter", filter);
+        return survey(rows, lineColumn, timeColumn, positionColumns, earth, maxGap, filter, readingColumn, prefix);
     }
 
     private static Dataset<Row> survey(Dataset<Row> rows, String lineColumn, String timeColumn,
-            List<String> positionColumns, EarthFrames earth, double maxGap, SurveyFilter filter, String prefix) {
+            List<String> positionColumns, EarthFrames earth, double maxGap, SurveyFilter filter, String readingColumn,
+            String prefix) {
+        // readingColumn: the measured reading, or null for none
         Arguments.nonNull("rows", rows);
         Arguments.nonNull("lineColumn", lineColumn);
         Arguments.nonNull("timeColumn", timeColumn);
@@ -128,7 +167,12 @@ public final class SparkSurvey {
                     + " in degrees, height in m), got " + positionColumns.size() + ": " + positionColumns);
         }
         StructType schema = rows.schema();
-        StructType out = SparkFrameConversion.withDoubleColumns(schema, prefix, SURVEY_SUFFIXES, filter != null);
+        int reading = readingColumn == null ? -1 : SparkFrameConversion.doubleColumn(schema, readingColumn);
+        List<String> suffixes = new ArrayList<>(SURVEY_SUFFIXES);
+        if (reading >= 0) {
+            suffixes.add(ANOMALY_SUFFIX);
+        }
+        StructType out = SparkFrameConversion.withDoubleColumns(schema, prefix, suffixes, filter != null);
         int line = columnIndex(schema, lineColumn);
         int time = SparkFrameConversion.doubleColumn(schema, timeColumn);
         int[] position = new int[3];
@@ -137,7 +181,7 @@ public final class SparkSurvey {
         }
         String lineName = lineColumn;
         MapPartitionsFunction<Row, Row> survey = input -> new SurveyedRows(input, lineName, line, time, position,
-                earth, maxGap, filter);
+                earth, maxGap, filter, reading);
         Column lineKey = rows.col(lineColumn);
         return rows.repartition(lineKey).sortWithinPartitions(lineKey, rows.col(timeColumn))
                 .mapPartitions(survey, Encoders.row(out));
@@ -173,6 +217,10 @@ public final class SparkSurvey {
         private final double maxGap;
         /** The filter along each line, or null. */
         private final SurveyFilter filter;
+        /** Index of the measured-reading column, or -1. */
+        private final int reading;
+        /** Columns appended per row: four, five with the anomaly. */
+        private final int width;
         /** Rows without a value at each end of the current line (the filter's margin). */
         private int margin;
         /** The first row of the next line, read ahead, or null. */
@@ -182,7 +230,7 @@ public final class SparkSurvey {
         private int next;
 
         SurveyedRows(Iterator<Row> input, String lineColumn, int line, int time, int[] position, EarthFrames earth,
-                     double maxGap, SurveyFilter filter) {
+                     double maxGap, SurveyFilter filter, int reading) {
             this.input = input;
             this.lineColumn = lineColumn;
             this.line = line;
@@ -191,6 +239,8 @@ public final class SparkSurvey {
             this.earth = earth;
             this.maxGap = maxGap;
             this.filter = filter;
+            this.reading = reading;
+            this.width = SURVEY_SUFFIXES.size() + (reading >= 0 ? 1 : 0);
         }
 
         @Override
@@ -249,17 +299,32 @@ public final class SparkSurvey {
                 throw new IllegalArgumentException(lineColumn + " '" + key + "' (" + n + " rows, samples counted in"
                         + " time order): " + e.getMessage(), e);
             }
-            int width = SURVEY_SUFFIXES.size();
             if (values.length < n * width) {
                 values = new double[n * width];
             }
             margin = (n - points.size()) / 2;
+            double[] measured = null;
+            if (reading >= 0) {
+                double[] r = new double[n];
+                for (int i = 0; i < n; i++) {
+                    r[i] = block.get(i).getDouble(reading);
+                }
+                try {
+                    measured = filter.applyTo(t, r);
+                } catch (IllegalArgumentException e) {
+                    throw new IllegalArgumentException(lineColumn + " '" + key + "' (" + n + " rows, samples counted"
+                            + " in time order), readings: " + e.getMessage(), e);
+                }
+            }
             for (int i = 0; i < points.size(); i++) {
                 SurveyPoint p = points.get(i);
                 values[i * width] = p.eotvosCorrection();
                 values[i * width + 1] = p.verticalAcceleration();
                 values[i * width + 2] = p.gravimeterReading();
                 values[i * width + 3] = p.normalGravity();
+                if (measured != null) {
+                    values[i * width + 4] = p.freeAirAnomaly(measured[i]);
+                }
             }
         }
 
@@ -268,7 +333,6 @@ public final class SparkSurvey {
             if (!hasNext()) {
                 throw new NoSuchElementException("no more rows");
             }
-            int width = SURVEY_SUFFIXES.size();
             int k = next - margin;
             Row row = k >= 0 && k < block.size() - 2 * margin
                     ? SparkFrameConversion.appended(block.get(next), values, k * width, width)

@@ -181,6 +181,44 @@ class SparkSurveyTest {
         assertEquals(2 * 2 * m, nulls);
     }
 
+    @Test
+    void aMeasuredReadingGivesItsFreeAirAnomalyFilteredLikeTheCorrections() {
+        // the invented line 8 (heaving) with a "measured" reading: the ideal gravimeter's plus 3 mGal
+        List<Row> plain = eastbound("line 8", 60, true);
+        List<SurveyPoint> ideal = oneMachine(plain);
+        List<Row> log = new ArrayList<>();
+        for (int i = 0; i < plain.size(); i++) {
+            Row r = plain.get(i);
+            log.add(RowFactory.create(r.get(0), r.get(1), r.get(2), r.get(3), r.get(4), r.get(5),
+                    ideal.get(i).gravimeterReading() + Units.milligals(3.0)));
+        }
+        StructType schema = schema().add("g_obs", DataTypes.DoubleType, false);
+        List<Row> copy = new ArrayList<>(log);
+        Collections.shuffle(copy, new Random(20261204L));   // fixed seed
+        Dataset<Row> rows = session.createDataFrame(copy, schema).repartition(2);
+        SurveyFilter filter = SurveyFilter.ofSigma(2.0);
+        int m = filter.margin(1.0);
+        List<Row> out = SparkSurvey.anomaliesAtSamples(rows, "line", "t", POSITION, "g_obs", EARTH, 2.0, filter, "f_")
+                .collectAsList();
+        assertEquals(log.size(), out.size());
+        int values = 0;
+        for (Row r : out) {
+            double t = r.getDouble(1);
+            if (t < m || t > 60 - m) {
+                assertTrue(r.isNullAt(11), "no anomaly where the kernel does not fit: " + r);
+                continue;
+            }
+            values++;
+            // the ideal reading's anomaly is zero to first order (0.01 mGal, as on one machine) and a
+            // constant passes the filter unchanged: 3 mGal
+            assertEquals(3.0, Units.toMilligals(r.getDouble(11)), 0.01, "t " + t);
+        }
+        assertEquals(61 - 2 * m, values);
+        IllegalArgumentException missing = assertThrows(IllegalArgumentException.class,
+                () -> SparkSurvey.anomaliesAtSamples(rows, "line", "t", POSITION, "g", EARTH, 2.0, filter, "f_"));
+        assertTrue(missing.getMessage().contains("column 'g' must exist"), missing.getMessage());
+    }
+
     private static List<SurveyPoint> oneMachine(List<Row> rows, SurveyFilter filter) {
         return filter.applyTo(oneMachine(rows));
     }
