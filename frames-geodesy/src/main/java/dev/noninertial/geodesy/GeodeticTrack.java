@@ -174,7 +174,7 @@ public final class GeodeticTrack implements GeodeticPath, Serializable {
     }
 
     /** The columns of the file, named in refusals of its rows. */
-    private static final String[] FILE_NAMES = {"t", "lat", "lon", "h", "heading", "pitch", "roll"};
+    private static final String[] FILE_NAMES = LOG_COLUMNS.stream().map(LogTable.Column::name).toArray(String[]::new);
 
     /** The parameters of the array factories, in the order of the file columns, named in refusals. */
     private static final String[] ARRAY_NAMES = {"times", "latitudes", "longitudes", "heights", "headings", "pitches",

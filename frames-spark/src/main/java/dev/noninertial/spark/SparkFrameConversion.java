@@ -240,7 +240,7 @@ public final class SparkFrameConversion {
         }
     }
 
-    /** A new row: every cell of {@code row}, then {@code values[from, from + n)}. */
+    /** A new row: every cell of {@code row}, then {@code values[from, from + n)}, or {@code n} nulls if {@code values} is null. */
     static Row appended(Row row, double[] values, int from, int n) {
         int width = row.length();
         Object[] cells = new Object[width + n];
@@ -248,7 +248,7 @@ public final class SparkFrameConversion {
             cells[c] = row.get(c);
         }
         for (int k = 0; k < n; k++) {
-            cells[width + k] = values[from + k];
+            cells[width + k] = values == null ? null : values[from + k];
         }
         return RowFactory.create(cells);
     }

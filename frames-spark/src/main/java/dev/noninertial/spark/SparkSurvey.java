@@ -11,7 +11,6 @@ import org.apache.spark.sql.Column;
 import org.apache.spark.sql.Dataset;
 import org.apache.spark.sql.Encoders;
 import org.apache.spark.sql.Row;
-import org.apache.spark.sql.RowFactory;
 import org.apache.spark.sql.types.StructType;
 
 import dev.noninertial.frames.Arguments;
@@ -187,15 +186,6 @@ public final class SparkSurvey {
                 .mapPartitions(survey, Encoders.row(out));
     }
 
-    /** A new row: every cell of {@code row}, then {@code n} nulls. */
-    private static Row withNulls(Row row, int n) {
-        Object[] cells = new Object[row.length() + n];
-        for (int c = 0; c < row.length(); c++) {
-            cells[c] = row.get(c);
-        }
-        return RowFactory.create(cells);
-    }
-
     private static int columnIndex(StructType schema, String name) {
         List<String> names = List.of(schema.fieldNames());
         int i = names.indexOf(name);
@@ -334,9 +324,8 @@ public final class SparkSurvey {
                 throw new NoSuchElementException("no more rows");
             }
             int k = next - margin;
-            Row row = k >= 0 && k < block.size() - 2 * margin
-                    ? SparkFrameConversion.appended(block.get(next), values, k * width, width)
-                    : withNulls(block.get(next), width);
+            boolean inside = k >= 0 && k < block.size() - 2 * margin;
+            Row row = SparkFrameConversion.appended(block.get(next), inside ? values : null, k * width, width);
             block.set(next, null);
             next++;
             return row;

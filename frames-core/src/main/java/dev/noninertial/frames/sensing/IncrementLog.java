@@ -118,12 +118,20 @@ public final class IncrementLog implements Serializable {
         }
         int n = increments.length / SensorIncrements.COMPONENTS;
         double[] ends = new double[n];
+        for (int i = 0; i < n; i++) {
+            ends[i] = start + (i + 1) * interval;
+        }
+        return unpacked(start, ends, increments);
+    }
+
+    /** A log over these intervals of the increments packed as {@link #packed()} returns them. */
+    private static IncrementLog unpacked(double start, double[] ends, double[] packed) {
+        int n = ends.length;
         double[] dv = new double[3 * n];
         double[] da = new double[3 * n];
         for (int i = 0; i < n; i++) {
-            ends[i] = start + (i + 1) * interval;
-            System.arraycopy(increments, SensorIncrements.COMPONENTS * i, dv, 3 * i, 3);
-            System.arraycopy(increments, SensorIncrements.COMPONENTS * i + 3, da, 3 * i, 3);
+            System.arraycopy(packed, SensorIncrements.COMPONENTS * i, dv, 3 * i, 3);
+            System.arraycopy(packed, SensorIncrements.COMPONENTS * i + 3, da, 3 * i, 3);
         }
         return build(start, ends, dv, da, i -> "interval " + i);
     }
@@ -346,14 +354,7 @@ public final class IncrementLog implements Serializable {
 
     /** A log over the same intervals with other increments, packed as {@link #packed()} returns them. */
     IncrementLog withPacked(double[] packed) {
-        int n = ends.length;
-        double[] dv = new double[3 * n];
-        double[] da = new double[3 * n];
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(packed, SensorIncrements.COMPONENTS * i, dv, 3 * i, 3);
-            System.arraycopy(packed, SensorIncrements.COMPONENTS * i + 3, da, 3 * i, 3);
-        }
-        return build(start, ends, dv, da, i -> "interval " + i);
+        return unpacked(start, ends, packed);
     }
 
     /**
